@@ -1,0 +1,47 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm, type FieldValues, type Path, type Resolver } from "react-hook-form";
+import type { z } from "zod";
+import type { ErrorBody } from "@/lib/errors";
+import { postJson } from "@/lib/http/post-json";
+
+/**
+ * A form validated in the browser by the same zod schema the route handler uses, posted as JSON;
+ * the server's field errors land on the matching inputs, anything else in `formError`.
+ */
+export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(options: {
+  schema: z.ZodType<TOutput, TInput>;
+  endpoint: string;
+  defaultValues: TInput;
+  onSuccess: (data: TResponse, values: TOutput) => void;
+  onError?: (error: ErrorBody, status: number) => boolean;
+}) {
+  const form = useForm<TInput, unknown, TOutput>({
+    // The schema's input and output types are the form's; the resolver's generics cannot see that through z.ZodType.
+    resolver: zodResolver(options.schema as never) as unknown as Resolver<TInput, unknown, TOutput>,
+    defaultValues: options.defaultValues as never,
+    mode: "onTouched",
+  });
+  const [formError, setFormError] = useState<string | null>(null);
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    const result = await postJson<TResponse>(options.endpoint, values);
+    if (result.ok) return options.onSuccess(result.data, values);
+    if (options.onError?.(result.error, result.status)) return;
+    const fields = result.error.fields ?? {};
+    const known = Object.keys(options.defaultValues);
+    let placed = false;
+    for (const [name, message] of Object.entries(fields)) {
+      if (known.includes(name)) {
+        form.setError(name as Path<TInput>, { message });
+        placed = true;
+      }
+    }
+    if (!placed) setFormError(result.error.message);
+  });
+
+  return { form, onSubmit, formError, setFormError, pending: form.formState.isSubmitting };
+}

@@ -1,0 +1,19 @@
+import type { Permission } from "@/lib/auth/roles";
+
+export interface Area {
+  label: string;
+  href: string;
+  /** Shown only to accounts holding this permission. */
+  permission?: Permission;
+  /** Areas whose work has not shipped yet are listed, marked, and not linked. */
+  ready: boolean;
+}
+
+export const AREAS: Area[] = [
+  { label: "Find by number", href: "/", ready: true },
+  { label: "Measure a part", href: "/measure/bearing", ready: false },
+  { label: "Propose a cross", href: "/propose", permission: "proposals:create", ready: false },
+  { label: "Job lists", href: "/lists", permission: "lists:manage", ready: false },
+  { label: "Review queue", href: "/review", permission: "proposals:review", ready: false },
+  { label: "Imports", href: "/admin/imports", permission: "imports:review-queue", ready: false },
+];

@@ -1,0 +1,44 @@
+import { sequelize } from "@/db";
+import { createMigrator } from "@/db/migrator";
+import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
+
+const usage = `Usage: tsx db/cli.ts <command>
+  migrate          apply every pending migration
+  migrate:down     revert the latest migration (--all: every one)
+  migrate:status   list applied and pending migrations
+  seed             load the demo data (refused in production)
+  seed:if-empty    load the demo data only into an empty database`;
+
+async function main(command: string | undefined, flags: string[]): Promise<void> {
+  const log = (message: string) => console.log(`[db] ${message}`);
+  const migrator = createMigrator(sequelize, log);
+  switch (command) {
+    case "migrate":
+      await migrator.up();
+      break;
+    case "migrate:down":
+      await migrator.down(flags.includes("--all") ? { to: 0 } : undefined);
+      break;
+    case "migrate:status":
+      for (const m of await migrator.executed()) log(`applied  ${m.name}`);
+      for (const m of await migrator.pending()) log(`pending  ${m.name}`);
+      break;
+    case "seed":
+      await seedDemo(log);
+      break;
+    case "seed:if-empty":
+      if (await isDatabaseEmpty()) await seedDemo(log);
+      else log("database already has data; demo seed skipped");
+      break;
+    default:
+      console.error(usage);
+      process.exitCode = 2;
+  }
+}
+
+main(process.argv[2], process.argv.slice(3))
+  .catch((error) => {
+    console.error(`[db] ${error instanceof Error ? error.message : String(error)}`);
+    process.exitCode = 1;
+  })
+  .finally(() => sequelize.close());

@@ -1,0 +1,17 @@
+import { DataTypes, Model, type InferAttributes, type InferCreationAttributes } from "sequelize";
+import { sequelize } from "@/db/sequelize";
+
+export class Session extends Model<InferAttributes<Session>, InferCreationAttributes<Session>> {
+  declare id: string;
+  declare userId: string;
+  declare expiresAt: Date;
+}
+
+Session.init(
+  {
+    id: { type: DataTypes.STRING(64), primaryKey: true },
+    userId: { type: DataTypes.STRING(40), allowNull: false },
+    expiresAt: { type: DataTypes.DATE, allowNull: false },
+  },
+  { sequelize, tableName: "sessions", timestamps: false },
+);

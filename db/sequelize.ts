@@ -1,0 +1,20 @@
+import pg from "pg";
+import { Sequelize } from "sequelize";
+import { env } from "@/lib/env";
+
+export function createSequelize(databaseUrl: string): Sequelize {
+  return new Sequelize(databaseUrl, {
+    dialect: "postgres",
+    // Handing pg over explicitly keeps bundlers from having to resolve Sequelize's dynamic require.
+    dialectModule: pg,
+    logging: false,
+    pool: { max: 10, min: 0, idle: 10_000 },
+    define: { underscored: true },
+  });
+}
+
+const globalForDb = globalThis as unknown as { understudySequelize?: Sequelize };
+
+/** The one shared connection pool; kept on globalThis so hot reloads in development reuse it. */
+export const sequelize: Sequelize = globalForDb.understudySequelize ?? createSequelize(env.DATABASE_URL);
+globalForDb.understudySequelize = sequelize;

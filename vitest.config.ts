@@ -1,0 +1,29 @@
+import path from "node:path";
+import { defineConfig } from "vitest/config";
+
+const alias = { "@": path.resolve(import.meta.dirname) };
+
+// unit: lib/ logic, no services. api and browser: run by `npm test` against the app it starts.
+export default defineConfig({
+  resolve: { alias },
+  test: {
+    projects: [
+      { resolve: { alias }, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },
+      {
+        resolve: { alias },
+        test: { name: "api", include: ["tests/api/**/*.test.ts"], environment: "node", testTimeout: 20_000, fileParallelism: false },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: "browser",
+          include: ["tests/browser/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 60_000,
+          hookTimeout: 60_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
