@@ -70,12 +70,12 @@ export default async function HomePage({ searchParams }: { searchParams: Promise
         </div>
         <dl className="space-y-3">
           {fits.map((fit) => (
-            <div key={fit.word} className="flex gap-3">
-              <dt className="w-52 shrink-0 font-bold">
+            <div key={fit.word} className="flex flex-col sm:flex-row sm:gap-3">
+              <dt className="shrink-0 font-bold sm:w-52">
                 <span aria-hidden="true" className="mr-2 text-brass">{fit.mark}</span>
                 {fit.word}
               </dt>
-              <dd className="text-ink-soft">{fit.text}</dd>
+              <dd className="pl-6 text-ink-soft sm:pl-0">{fit.text}</dd>
             </div>
           ))}
         </dl>

@@ -72,11 +72,15 @@ const dataDir = path.join(root, mode === "test" ? ".data/test" : ".data");
 
 const cleanups: Array<() => Promise<void> | void> = [];
 let children: ChildProcess[] = [];
-let stopping = false;
+let stopped: Promise<void> | undefined;
 
-async function stopEverything(): Promise<void> {
-  if (stopping) return;
-  stopping = true;
+/** One shutdown, however many paths ask for it (a signal and the main flow ending may both do). */
+function stopEverything(): Promise<void> {
+  stopped ??= shutDown();
+  return stopped;
+}
+
+async function shutDown(): Promise<void> {
   for (const child of children) {
     if (child.pid && child.exitCode === null) {
       try {

@@ -7,7 +7,9 @@ import { hasPermission } from "@/lib/auth/roles";
 
 export async function SiteHeader() {
   const { user } = await getCurrentSession();
-  const areas = AREAS.filter((area) => !area.permission || (user && hasPermission(user.role, area.permission)));
+  // Visitors see what members can do; staff areas appear only to the roles that hold them.
+  const role = user?.role ?? "member";
+  const areas = AREAS.filter((area) => !area.permission || hasPermission(role, area.permission));
 
   return (
     <header className="no-print border-b border-ink/80 bg-ink text-ground">

@@ -21,5 +21,5 @@ AccountToken.init(
     expiresAt: { type: DataTypes.DATE, allowNull: false },
     createdAt: DataTypes.DATE,
   },
-  { sequelize, tableName: "account_tokens", updatedAt: false },
+  { sequelize, modelName: "AccountToken", tableName: "account_tokens", updatedAt: false },
 );

@@ -1,10 +1,12 @@
-import { DataTypes, Model, type InferAttributes, type InferCreationAttributes } from "sequelize";
+import { DataTypes, Model, type InferAttributes, type InferCreationAttributes, type NonAttribute } from "sequelize";
+import type { User } from "@/db/models/user";
 import { sequelize } from "@/db/sequelize";
 
 export class Session extends Model<InferAttributes<Session>, InferCreationAttributes<Session>> {
   declare id: string;
   declare userId: string;
   declare expiresAt: Date;
+  declare user?: NonAttribute<User>;
 }
 
 Session.init(
@@ -13,5 +15,5 @@ Session.init(
     userId: { type: DataTypes.STRING(40), allowNull: false },
     expiresAt: { type: DataTypes.DATE, allowNull: false },
   },
-  { sequelize, tableName: "sessions", timestamps: false },
+  { sequelize, modelName: "Session", tableName: "sessions", timestamps: false },
 );

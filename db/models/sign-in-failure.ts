@@ -14,5 +14,5 @@ SignInFailure.init(
     failures: { type: DataTypes.INTEGER, allowNull: false },
     windowStartedAt: { type: DataTypes.DATE, allowNull: false },
   },
-  { sequelize, tableName: "sign_in_failures", timestamps: false },
+  { sequelize, modelName: "SignInFailure", tableName: "sign_in_failures", timestamps: false },
 );

@@ -24,5 +24,5 @@ User.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize, tableName: "users" },
+  { sequelize, modelName: "User", tableName: "users" },
 );

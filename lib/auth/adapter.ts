@@ -16,11 +16,9 @@ function toDatabaseSession(session: Session): DatabaseSession {
 /** Lucia v3 keeps sessions through this small adapter over the Sequelize models. */
 export const sequelizeAdapter: Adapter = {
   async getSessionAndUser(sessionId) {
-    const session = await Session.findByPk(sessionId, { include: [User] });
-    if (!session) return [null, null];
-    const user = (session as Session & { User?: User }).User;
-    if (!user) return [null, null];
-    return [toDatabaseSession(session), toDatabaseUser(user)];
+    const session = await Session.findByPk(sessionId, { include: [{ model: User, as: "user" }] });
+    if (!session?.user) return [null, null];
+    return [toDatabaseSession(session), toDatabaseUser(session.user)];
   },
   async getUserSessions(userId) {
     const sessions = await Session.findAll({ where: { userId } });

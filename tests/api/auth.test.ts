@@ -1,0 +1,184 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { sequelize, User } from "@/db";
+import { APP_URL, send, sessionCookie, signIn, uniqueAddress, uniqueEmail } from "../helpers/api";
+import { linkTo, mailCount, waitForMail } from "../helpers/mail";
+import request from "supertest";
+
+afterAll(() => sequelize.close());
+
+const password = "gearbox-rebuild-1948";
+
+describe("POST /api/auth/sign-up, the e-mailed link, POST /api/auth/sign-in and GET /api/auth/me", () => {
+  it("takes a new member from sign-up to a signed-in session through the captured confirmation mail", async () => {
+    const email = uniqueEmail("restorer");
+    const address = uniqueAddress();
+
+    const signUp = await send("post", "/api/auth/sign-up", { email, password });
+    expect(signUp.status).toBe(201);
+    expect(signUp.body.mailSent).toBe(true);
+
+    const early = await send("post", "/api/auth/sign-in", { email, password }, { address });
+    expect(early.status).toBe(403);
+    expect(early.body.error).toBe("email_not_verified");
+
+    const mail = await waitForMail(email, "Confirm your e-mail");
+    const confirmPage = await request(APP_URL).get(linkTo(mail, "/verify-email"));
+    expect(confirmPage.status).toBe(200);
+    expect(confirmPage.text).toContain("is confirmed");
+
+    const signedIn = await send("post", "/api/auth/sign-in", { email: email.toUpperCase(), password }, { address });
+    expect(signedIn.status).toBe(200);
+    expect(signedIn.body).toEqual({ user: { id: expect.any(String), email, role: "member" } });
+    const cookie = sessionCookie(signedIn);
+    const setCookie = String(signedIn.headers["set-cookie"]);
+    expect(setCookie).toMatch(/HttpOnly/i);
+    expect(setCookie).toMatch(/SameSite=lax/i);
+
+    const me = await send("get", "/api/auth/me", undefined, { cookie });
+    expect(me.status).toBe(200);
+    expect(me.body.user).toMatchObject({ email, role: "member", emailVerified: true });
+  });
+
+  it("does not let a confirmation link be used twice", async () => {
+    const email = uniqueEmail("twice");
+    await send("post", "/api/auth/sign-up", { email, password });
+    const link = linkTo(await waitForMail(email, "Confirm your e-mail"), "/verify-email");
+    await request(APP_URL).get(link);
+    const again = await request(APP_URL).get(link);
+    expect(again.text).toContain("expired or was already used");
+  });
+
+  it("answers a sign-up for a taken address exactly like a new one, and tells the owner instead", async () => {
+    const signUp = await send("post", "/api/auth/sign-up", { email: "member@understudy.test", password });
+    expect(signUp.status).toBe(201);
+    const mail = await waitForMail("member@understudy.test", "already have an Understudy account");
+    expect(mail.text).toContain("/reset-password?token=");
+  });
+});
+
+describe("POST /api/auth/sign-out", () => {
+  it("ends the session so that the same cookie no longer signs anyone in", async () => {
+    const cookie = await signIn("member@understudy.test");
+    expect((await send("get", "/api/auth/me", undefined, { cookie })).status).toBe(200);
+    expect((await send("post", "/api/auth/sign-out", {}, { cookie })).status).toBe(200);
+    expect((await send("get", "/api/auth/me", undefined, { cookie })).status).toBe(401);
+  });
+});
+
+describe("GET /api/auth/me", () => {
+  it("answers 401 without a session", async () => {
+    const response = await send("get", "/api/auth/me");
+    expect(response.status).toBe(401);
+    expect(response.body.error).toBe("unauthenticated");
+  });
+});
+
+describe("password reset by e-mailed link", () => {
+  it("sets a new password, after which the old one no longer works", async () => {
+    const email = uniqueEmail("forgetful");
+    await send("post", "/api/auth/sign-up", { email, password });
+    await request(APP_URL).get(linkTo(await waitForMail(email, "Confirm your e-mail"), "/verify-email"));
+
+    const asked = await send("post", "/api/auth/password-reset/request", { email });
+    expect(asked.status).toBe(200);
+    const token = new URLSearchParams(linkTo(await waitForMail(email, "Set a new"), "/reset-password").split("?")[1]).get("token");
+
+    const newPassword = "magneto-points-0.015in";
+    const reset = await send("post", "/api/auth/password-reset/confirm", { token, password: newPassword });
+    expect(reset.status).toBe(200);
+    const reused = await send("post", "/api/auth/password-reset/confirm", { token, password: newPassword });
+    expect(reused.status).toBe(400);
+    expect(reused.body.field).toBe("token");
+
+    const address = uniqueAddress();
+    expect((await send("post", "/api/auth/sign-in", { email, password }, { address })).status).toBe(401);
+    expect((await send("post", "/api/auth/sign-in", { email, password: newPassword }, { address })).status).toBe(200);
+  });
+
+  it("answers the same for an address with no account, and sends nothing", async () => {
+    const email = uniqueEmail("nobody");
+    const response = await send("post", "/api/auth/password-reset/request", { email });
+    expect(response.status).toBe(200);
+    expect(response.body.message).toContain(email);
+    expect(await mailCount(email)).toBe(0);
+  });
+});
+
+describe("failed sign-ins", () => {
+  it("gives a wrong password the same 401 and message as an unknown e-mail", async () => {
+    const address = uniqueAddress();
+    const wrong = await send("post", "/api/auth/sign-in", { email: "moderator@understudy.test", password: "not-the-password" }, { address });
+    const unknown = await send("post", "/api/auth/sign-in", { email: uniqueEmail("ghost"), password: "not-the-password" }, { address });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body).toEqual(unknown.body);
+  });
+
+  it("refuses the sixth fast failure on one account with 429, even with the right password", async () => {
+    const email = uniqueEmail("hammered");
+    await send("post", "/api/auth/sign-up", { email, password });
+    for (let attempt = 1; attempt <= 5; attempt += 1) {
+      const response = await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: uniqueAddress() });
+      expect(response.status).toBe(401);
+    }
+    const sixth = await send("post", "/api/auth/sign-in", { email, password: "guess-6" }, { address: uniqueAddress() });
+    expect(sixth.status).toBe(429);
+    expect(Number(sixth.headers["retry-after"])).toBeGreaterThan(0);
+    const right = await send("post", "/api/auth/sign-in", { email, password }, { address: uniqueAddress() });
+    expect(right.status).toBe(429);
+  });
+
+  it("refuses an address that fails on many accounts, once it passes the per-address limit", async () => {
+    const address = uniqueAddress();
+    const limit = Number(process.env.AUTH_MAX_FAILURES_PER_ADDRESS ?? 20);
+    for (let attempt = 1; attempt <= limit; attempt += 1) {
+      const response = await send("post", "/api/auth/sign-in", { email: uniqueEmail("sprayed"), password: "guess" }, { address });
+      expect(response.status).toBe(401);
+    }
+    const next = await send("post", "/api/auth/sign-in", { email: uniqueEmail("sprayed"), password: "guess" }, { address });
+    expect(next.status).toBe(429);
+  });
+});
+
+describe("POST /api/auth/sign-up with a bad body", () => {
+  const cases: Array<[string, unknown, string[]]> = [
+    ["missing fields", {}, ["email", "password"]],
+    ["a short password", { email: "short-pass@example.org", password: "tappet" }, ["password"]],
+    ["a malformed e-mail", { email: "restorer.at.example.org", password: "long enough password" }, ["email"]],
+    ["a non-string e-mail", { email: 42, password: "long enough password" }, ["email"]],
+  ];
+
+  for (const [what, body, fields] of cases) {
+    it(`answers ${what} with 400 and the fields at fault`, async () => {
+      const response = await send("post", "/api/auth/sign-up", body);
+      expect(response.status).toBe(400);
+      expect(response.body.error).toBe("validation_failed");
+      expect(Object.keys(response.body.fields).sort()).toEqual(fields);
+    });
+  }
+
+  it("answers a 1 MB body with 400 and writes nothing", async () => {
+    const email = uniqueEmail("huge");
+    const response = await send("post", "/api/auth/sign-up", { email, password: "x".repeat(1024 * 1024) });
+    expect(response.status).toBe(400);
+    expect(response.body.field).toBe("body");
+    expect(await User.count({ where: { email } })).toBe(0);
+  });
+
+  it("answers malformed JSON with 400", async () => {
+    const response = await request(APP_URL)
+      .post("/api/auth/sign-up")
+      .set("Origin", APP_URL)
+      .set("Content-Type", "application/json")
+      .send('{"email": "a@example.org", ');
+    expect(response.status).toBe(400);
+    expect(response.body.field).toBe("body");
+  });
+
+  it("writes nothing and sends nothing for any refused sign-up", async () => {
+    const email = uniqueEmail("refused");
+    await send("post", "/api/auth/sign-up", { email, password: "short" });
+    expect(await User.count({ where: { email } })).toBe(0);
+    expect(await mailCount(email)).toBe(0);
+  });
+});

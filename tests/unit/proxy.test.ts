@@ -1,0 +1,36 @@
+import { NextRequest } from "next/server";
+import { describe, expect, it } from "vitest";
+import { proxy } from "@/proxy";
+
+function request(method: string, headers: Record<string, string>) {
+  return new NextRequest("http://shop.example:3000/api/auth/sign-out", {
+    method,
+    headers: { host: "shop.example:3000", ...headers },
+  });
+}
+
+describe("the CSRF origin check", () => {
+  it("lets a POST from the site's own pages through", () => {
+    const response = proxy(request("POST", { origin: "http://shop.example:3000" }));
+    expect(response.status).toBe(200);
+  });
+
+  it("refuses a POST from a foreign origin", async () => {
+    const response = proxy(request("POST", { origin: "http://elsewhere.example" }));
+    expect(response.status).toBe(403);
+    expect(await response.json()).toMatchObject({ error: "forbidden_origin" });
+  });
+
+  it("refuses a POST with neither Origin nor Referer", () => {
+    expect(proxy(request("DELETE", {})).status).toBe(403);
+  });
+
+  it("falls back to the Referer when a browser sends no Origin", () => {
+    expect(proxy(request("PATCH", { referer: "http://shop.example:3000/account" })).status).toBe(200);
+    expect(proxy(request("PATCH", { referer: "http://elsewhere.example/page" })).status).toBe(403);
+  });
+
+  it("does not stand in the way of reading", () => {
+    expect(proxy(request("GET", { origin: "http://elsewhere.example" })).status).toBe(200);
+  });
+});
