@@ -56,9 +56,10 @@ export function ensurePostgresInstalled(log: (message: string) => void): string 
   if (existing) return existing;
   if (isRoot()) {
     // The project runs its own cluster; Debian's default "main" cluster on port 5432 is not wanted.
-    mkdirSync("/etc/postgresql-common", { recursive: true });
-    const conf = "/etc/postgresql-common/createcluster.conf";
-    if (!existsSync(conf)) writeFileSync(conf, "create_main_cluster = false\n");
+    // createcluster.conf includes this folder whether or not the file itself exists yet.
+    const confDir = "/etc/postgresql-common/createcluster.d";
+    mkdirSync(confDir, { recursive: true });
+    writeFileSync(`${confDir}/understudy.conf`, "create_main_cluster = false\n");
   }
   aptInstall(["postgresql"], "PostgreSQL's server programs are not installed.", log);
   const installed = findBinDir();
