@@ -35,7 +35,7 @@ export async function SiteHeader() {
             </>
           )}
         </div>
-        <nav aria-label="Areas" className="-mx-1 flex w-full gap-1 overflow-x-auto pb-1 text-[0.95rem]">
+        <nav aria-label="Areas" className="-mx-1 flex w-full flex-wrap gap-x-1 pb-1 text-[0.95rem]">
           {areas.map((area) =>
             area.ready ? (
               <Link
