@@ -4,17 +4,7 @@ import http from "node:http";
 import path from "node:path";
 import { simpleParser } from "mailparser";
 import { SMTPServer } from "smtp-server";
-
-/** A message as the fake keeps it, and as /dev/mail and the tests read it back. */
-export interface CapturedMail {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-}
+import type { CapturedMail } from "../lib/dev/captured-mail";
 
 export interface MailFakeOptions {
   smtpPort: number;

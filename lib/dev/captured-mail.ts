@@ -1,6 +1,7 @@
 import { env, isProduction } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 
+/** A message as the local mail fake keeps it and serves it back. */
 export interface CapturedMailSummary {
   id: string;
   receivedAt: string;
