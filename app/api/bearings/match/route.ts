@@ -1,0 +1,18 @@
+import { handle } from "@/lib/http/handle";
+import { matchBearing } from "@/lib/standards/bearings";
+import { bearingMatchQuery, queryOf, readOptionalSize, readSize, readTolerance } from "@/lib/validation/standards";
+import { parseWith } from "@/lib/validation/parse";
+
+export const runtime = "nodejs";
+
+export const GET = handle(async (request) => {
+  const q = parseWith(bearingMatchQuery, queryOf(request));
+  const result = matchBearing({
+    boreMm: readSize("bore", q.bore, q.unit),
+    outsideDiameterMm: readSize("od", q.od, q.unit),
+    widthMm: readOptionalSize("width", q.width, q.unit),
+    toleranceMm: readTolerance(q.tolerance, q.unit),
+    unit: q.unit,
+  });
+  return Response.json({ unit: q.unit, ...result });
+});

@@ -1,0 +1,21 @@
+import { handle } from "@/lib/http/handle";
+import { checkShaft, matchSeal } from "@/lib/standards/seals";
+import { queryOf, readOptionalSize, readSize, readTolerance, sealMatchQuery } from "@/lib/validation/standards";
+import { parseWith } from "@/lib/validation/parse";
+
+export const runtime = "nodejs";
+
+export const GET = handle(async (request) => {
+  const q = parseWith(sealMatchQuery, queryOf(request));
+  const shaftMm = readSize("shaft", q.shaft, q.unit);
+  const result = matchSeal({
+    shaftMm,
+    boreMm: readSize("bore", q.bore, q.unit),
+    widthMm: readOptionalSize("width", q.width, q.unit),
+    toleranceMm: readTolerance(q.tolerance, q.unit),
+    unit: q.unit,
+    grooved: q.grooved ?? false,
+    attributes: { lips: q.lips, spring: q.spring, dustLip: q.dustLip, outside: q.outside },
+  });
+  return Response.json({ unit: q.unit, ...result, shaft: checkShaft({ shaftMm, unit: q.unit, grooved: q.grooved ?? false }) });
+});

@@ -1,0 +1,12 @@
+import { handle } from "@/lib/http/handle";
+import { nearMissFor, nominalCandidates, type Surface } from "@/lib/standards/nominal";
+import { nominalQuery, queryOf, readSize } from "@/lib/validation/standards";
+import { parseWith } from "@/lib/validation/parse";
+
+export const runtime = "nodejs";
+
+export const GET = handle(async (request) => {
+  const q = parseWith(nominalQuery, queryOf(request));
+  const candidates = nominalCandidates(readSize("value", q.value, q.unit), q.unit, q.surface as Surface);
+  return Response.json({ unit: q.unit, candidates, nearMiss: nearMissFor(candidates) });
+});

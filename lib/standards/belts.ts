@@ -1,0 +1,186 @@
+import { StandardsInputError } from "@/lib/standards/errors";
+import { BELT_SECTIONS, R40, type BeltSection, type LengthBasis } from "@/lib/standards/belt-sections";
+import { byScore, describeDeviations, scoreDimensions, type Deviation } from "@/lib/standards/match";
+import { fromMm, round, toMm, type LengthUnit } from "@/lib/standards/units";
+
+const bySection = new Map(BELT_SECTIONS.map((s) => [s.section, s]));
+
+export class BeltError extends StandardsInputError {}
+
+export function findSection(section: string): BeltSection {
+  const found = bySection.get(section.trim().toUpperCase()) ?? bySection.get(section.trim());
+  if (!found) throw new BeltError(`"${section}" is not a belt section we know. Known: ${BELT_SECTIONS.filter((s) => s.family !== "automotive").map((s) => s.section).join(", ")}.`);
+  return found;
+}
+
+export interface BeltLengths {
+  inside: number;
+  pitch: number;
+  outside: number;
+}
+
+/** The three lengths of one belt, from any one of them, in the section's own unit. */
+export function beltLengths(section: BeltSection, basis: LengthBasis | "pitch", length: number): BeltLengths {
+  if (section.height === null || section.pitchOffset === null) {
+    throw new BeltError(`${section.section} belts are sold by top width and outside length; their lengths are not converted.`);
+  }
+  const toOutside = 2 * Math.PI * section.height;
+  const inside = basis === "inside" ? length : basis === "outside" ? length - toOutside : length - section.pitchOffset;
+  return { inside, pitch: inside + section.pitchOffset, outside: inside + toOutside };
+}
+
+export interface DecodedBelt {
+  designation: string;
+  section: string;
+  family: string;
+  unit: "in" | "mm";
+  insideLength: number;
+  pitchLength: number;
+  outsideLength: number;
+  designatedBy: LengthBasis;
+  topWidth: number;
+  height: number | null;
+  angleDeg: number;
+  notes: string[];
+}
+
+/** Decodes `B60`, `B-60`, `4L380`, `5V800`, `SPA1250`, `spa 1250`. */
+export function decodeBelt(input: string): DecodedBelt {
+  const text = input.trim().toUpperCase().replace(/[\s-]+/g, "");
+  const m = /^(SPZ|SPA|SPB|SPC|[2-5]L|[358]V|[A-E])(\d+(?:\.\d+)?)$/.exec(text);
+  if (!m) throw new BeltError(`"${input.trim()}" is not a V-belt designation we can read. Try B60, 4L380, 5V800 or SPA1250.`);
+  const section = findSection(m[1]);
+  const number = Number(m[2]);
+  if (section.designationScale === 10 && !Number.isInteger(number)) {
+    throw new BeltError(`${section.section} lengths are written in tenths of an inch without a point: 4L380 is 38.0 in.`);
+  }
+  const length = number / section.designationScale;
+  const lengths = beltLengths(section, section.designatedBy, length);
+  if (lengths.inside <= 0) throw new BeltError(`${input.trim()} is too short to be a ${section.section} belt.`);
+  const digits = section.unit === "in" ? 2 : 0;
+  const notes = [
+    {
+      inside: `The number is the inside length in inches (${section.section}${m[2]} = ${length} in inside).`,
+      outside: `The number is the outside length in tenths of an inch (${section.section}${m[2]} = ${length} in).`,
+      datum: `The number is the datum (pitch) length in millimetres.`,
+    }[section.designatedBy],
+  ];
+  if (section.section === "4L") notes.push("A 4L belt has the same section as an A belt but is made for light duty; on a tractor or engine drive use an A belt of the same pitch length (about 2 in shorter by number).");
+  if (section.section === "5L") notes.push("A 5L belt matches a B belt's section but is light-duty; use a B belt of the same pitch length on a working drive.");
+  return {
+    designation: `${section.section}${m[2]}`,
+    section: section.section,
+    family: section.family,
+    unit: section.unit,
+    insideLength: round(lengths.inside, digits),
+    pitchLength: round(lengths.pitch, digits),
+    outsideLength: round(lengths.outside, digits),
+    designatedBy: section.designatedBy,
+    topWidth: section.topWidth,
+    height: section.height,
+    angleDeg: section.angleDeg,
+    notes,
+  };
+}
+
+/** Nearby standard lengths in the section's designation basis, nearest first. */
+export function nearestStandardLengths(section: BeltSection, designatedLength: number, count = 3): Array<{ designation: string; length: number }> {
+  let lengths: number[];
+  if (section.family === "narrow") lengths = [10, 100].flatMap((k) => R40.map((n) => (n * k) / 100)); // 25.0 … 950 in, tenths below
+  else if (section.family === "iso-narrow") lengths = [1, 10].flatMap((k) => R40.map((n) => n * k)); // 100 … 9500 mm
+  else {
+    // Classical and light-duty belts are commonly stocked in whole-inch steps: common practice (no published source).
+    const centre = Math.round(designatedLength);
+    lengths = Array.from({ length: 9 }, (_, i) => centre - 4 + i).filter((n) => n > 10);
+  }
+  return lengths
+    .map((length) => ({ length, distance: Math.abs(length - designatedLength) }))
+    .sort((a, b) => a.distance - b.distance)
+    .slice(0, count)
+    .sort((a, b) => a.length - b.length)
+    .map(({ length }) => ({ designation: `${section.section}${round(length * section.designationScale, 1)}`, length }));
+}
+
+export interface SectionCandidate {
+  section: string;
+  family: string;
+  angleDeg: number;
+  topWidth: number;
+  height: number | null;
+  unit: "in" | "mm";
+  score: number;
+  deviations: Deviation[];
+  explanation: string;
+  warnings: string[];
+}
+
+/**
+ * The likely section from a measured top width and (optionally) thickness. A used belt has worn narrower at the top,
+ * which is forgiven; sections of similar width but different depth or angle are pointed out.
+ */
+export function identifySection(input: { topWidthMm: number; heightMm?: number; unit: LengthUnit; toleranceMm?: number }): SectionCandidate[] {
+  const tolerance = input.toleranceMm ?? Math.max(0.5, input.topWidthMm * 0.04);
+  const measured = [
+    { name: "top", label: "top width", measuredMm: input.topWidthMm, toleranceMm: tolerance, surface: "belt-width" as const },
+    ...(input.heightMm ? [{ name: "height", label: "thickness", measuredMm: input.heightMm, toleranceMm: tolerance }] : []),
+  ];
+  const out: SectionCandidate[] = [];
+  for (const s of BELT_SECTIONS) {
+    // Automotive belts have no tabulated thickness and are compared on top width alone.
+    const nominal: Record<string, number> = { top: toMm(s.topWidth, s.unit) };
+    if (s.height !== null) nominal.height = toMm(s.height, s.unit);
+    const scored = scoreDimensions(measured, nominal, input.unit);
+    if (!scored) continue;
+    // A section with no tabulated thickness cannot confirm a measured one, so it ranks below one that can.
+    const unconfirmed = input.heightMm !== undefined && s.height === null;
+    out.push({
+      section: s.section,
+      family: s.family,
+      angleDeg: s.angleDeg,
+      topWidth: s.topWidth,
+      height: s.height,
+      unit: s.unit,
+      score: unconfirmed ? Math.round(scored.score * 0.85 * 1000) / 1000 : scored.score,
+      deviations: scored.deviations,
+      explanation: describeDeviations(scored.deviations, input.unit),
+      warnings: [],
+    });
+  }
+  out.sort(byScore);
+  const best = out[0];
+  if (best) {
+    // The trap of similar widths: sections with nearly the same top but another depth, whether or not they matched.
+    const bestSection = findSection(best.section);
+    for (const s of BELT_SECTIONS) {
+      if (s === bestSection || s.height === null || bestSection.height === null) continue;
+      const topDiff = Math.abs(toMm(s.topWidth, s.unit) - toMm(bestSection.topWidth, bestSection.unit));
+      const depthDiff = Math.abs(toMm(s.height, s.unit) - toMm(bestSection.height, bestSection.unit));
+      if (topDiff <= 1 && depthDiff > 1) {
+        best.warnings.push(`${s.section} has nearly the same top width but is ${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} ${toMm(s.height, s.unit) > toMm(bestSection.height, bestSection.unit) ? "deeper" : "shallower"}: it rides at another height in the groove. Measure the thickness to be sure.`);
+      }
+    }
+    for (const other of out.slice(1)) {
+      if (other.angleDeg !== best.angleDeg) other.warnings.push(`Section angle ${other.angleDeg}° against ${best.angleDeg}°: it will not seat the same in the pulley groove.`);
+      const depthDiff = other.height !== null && best.height !== null ? Math.abs(toMm(other.height, other.unit) - toMm(best.height, best.unit)) : 0;
+      if (depthDiff > 1) other.warnings.push(`Similar top width to ${best.section} but ${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} different in depth: it sits at a different height in the groove and changes the drive ratio and tension.`);
+      if (other.family === "light-duty" && best.family === "classical") other.warnings.push("Light-duty belts are for fractional-horsepower drives; on an engine or tractor drive use the classical section.");
+    }
+  }
+  return out.slice(0, 6);
+}
+
+/** A belt's measured length, from the ways people measure an old one, as a pitch length. */
+export const BELT_MEASURING_NOTES = [
+  "A used belt has stretched: it measures longer than it was new, often by 1 % or more.",
+  "A broken belt laid flat and measured along its middle reads between its inside and outside length, near the pitch length.",
+  "With the pulleys in hand, the surest figure is a string run round both pulleys at the depth the belt rode, at the centre distance the belt was set to.",
+];
+
+
+/** Standard belts of a section near a drive's pitch length, named as they are sold (B60, 4L380, SPA1250). */
+export function standardLengthsForPitch(section: BeltSection, pitchMm: number) {
+  if (section.height === null || section.pitchOffset === null) return [];
+  const lengths = beltLengths(section, "pitch", fromMm(pitchMm, section.unit));
+  const designated = { inside: lengths.inside, outside: lengths.outside, datum: lengths.pitch }[section.designatedBy];
+  return nearestStandardLengths(section, designated);
+}

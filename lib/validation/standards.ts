@@ -1,0 +1,99 @@
+import { z } from "zod";
+import { AppError } from "@/lib/errors";
+import { SURFACES } from "@/lib/standards/nominal";
+import { StandardsInputError } from "@/lib/standards/errors";
+import { parseLength, type LengthUnit } from "@/lib/standards/units";
+
+// Query strings of the calculator routes. Sizes stay strings here so that 1-1/2, 1 1/2" and 38.1 mm all arrive
+// intact; readSize() turns each into millimetres with the reason when it cannot.
+const unit = z.enum(["mm", "in"], { error: "Choose mm or in." }).default("mm");
+const size = (what: string) => z.string({ error: `Enter the ${what}.` }).trim().min(1, `Enter the ${what}.`).max(40, `The ${what} is too long.`);
+const optionalSize = (what: string) => size(what).optional().or(z.literal("").transform(() => undefined));
+const flag = z.enum(["1", "0", "true", "false", "yes", "no"]).transform((v) => ["1", "true", "yes"].includes(v)).optional();
+const designation = z.string({ error: "Enter a designation." }).trim().min(1, "Enter a designation.").max(40, "A designation is at most 40 characters.");
+
+export const bearingDecodeQuery = z.object({ designation });
+export const beltDecodeQuery = z.object({ designation });
+
+export const bearingMatchQuery = z.object({
+  bore: size("bore"),
+  od: size("outside diameter"),
+  width: optionalSize("width"),
+  unit,
+  tolerance: optionalSize("tolerance"),
+});
+
+export const sealMatchQuery = z.object({
+  shaft: size("shaft diameter"),
+  bore: size("housing bore"),
+  width: optionalSize("width"),
+  unit,
+  tolerance: optionalSize("tolerance"),
+  grooved: flag,
+  lips: z.enum(["single", "double"]).optional(),
+  spring: flag,
+  dustLip: flag,
+  outside: z.enum(["metal", "rubber"]).optional(),
+});
+
+export const pressFitQuery = z.object({
+  bore: size("housing bore"),
+  sealOd: size("seal outside diameter"),
+  unit,
+  outside: z.enum(["metal", "rubber"], { error: "Choose metal or rubber." }).default("metal"),
+});
+
+export const shaftCheckQuery = z.object({ shaft: size("shaft diameter"), unit, grooved: flag });
+
+export const driveQuery = z
+  .object({
+    large: size("large pulley's pitch diameter"),
+    small: size("small pulley's pitch diameter"),
+    center: optionalSize("centre distance"),
+    length: optionalSize("belt pitch length"),
+    unit,
+    section: z.string().trim().max(12).optional(),
+  })
+  .refine((q) => (q.center === undefined) !== (q.length === undefined), {
+    message: "Give either the centre distance or the belt length, not both.",
+    path: ["center"],
+  });
+
+export const beltIdentifyQuery = z.object({ top: size("top width"), height: optionalSize("thickness"), unit });
+
+export const nominalQuery = z.object({
+  value: size("measured value"),
+  unit,
+  surface: z.enum(SURFACES as [string, ...string[]], { error: `Choose one of: ${SURFACES.join(", ")}.` }).default("none"),
+});
+
+export function queryOf(request: Request): Record<string, string> {
+  return Object.fromEntries(new URL(request.url).searchParams);
+}
+
+/** Runs engine code on a field's input; the engine's refusal becomes a 400 naming that field. */
+export function forField<T>(field: string, run: () => T): T {
+  try {
+    return run();
+  } catch (error) {
+    if (error instanceof StandardsInputError) throw new AppError("validation_failed", error.message, { field, fields: { [field]: error.message } });
+    throw error;
+  }
+}
+
+/** A size from the query, in millimetres. */
+export function readSize(field: string, value: string, defaultUnit: LengthUnit): number {
+  return forField(field, () => parseLength(value, defaultUnit).mm);
+}
+
+export function readOptionalSize(field: string, value: string | undefined, defaultUnit: LengthUnit): number | undefined {
+  return value === undefined ? undefined : readSize(field, value, defaultUnit);
+}
+
+/** The default matching tolerance: 0.1 mm, or 0.004 in for inch input. */
+export function readTolerance(value: string | undefined, unit: LengthUnit): number {
+  if (value === undefined) return unit === "in" ? 0.1016 : 0.1;
+  const mm = readSize("tolerance", value, unit);
+  if (mm > 5) throw new AppError("validation_failed", "A tolerance over 5 mm would match almost anything.", { field: "tolerance" });
+  return mm;
+}

@@ -1,0 +1,69 @@
+import fc from "fast-check";
+// @ts-expect-error convert-units 2 ships no types; it is used here only as an independent reference.
+import convert from "convert-units";
+import { describe, expect, it } from "vitest";
+import { fromMm, inchLabel, parseLength, toMm, UnitParseError } from "@/lib/standards/units";
+
+describe("inch and millimetre", () => {
+  it("converts exactly at 25.4 mm to the inch", () => {
+    // International yard and pound agreement (1959); NIST SP 811, appendix B: 1 in = 2.54 cm exactly.
+    expect(toMm(1, "in")).toBe(25.4);
+    expect(toMm(1.5, "in")).toBeCloseTo(38.1, 12);
+  });
+
+  it("agrees with an independent unit library across the range of machine parts", () => {
+    // convert-units 2.3.4 (npm), an independent general-purpose conversion library. It converts through feet with a
+    // rounded factor (1 in → 25.3999992 mm), so agreement is checked to one part in ten million.
+    for (const inches of [0.125, 0.625, 1, 1.5, 2.375, 10, 62.5]) {
+      const reference = convert(inches).from("in").to("mm") as number;
+      expect(Math.abs(toMm(inches, "in") - reference) / reference).toBeLessThan(1e-7);
+    }
+  });
+
+  it("returns to the same inch value after a trip through millimetres", () => {
+    // Property: fromMm(toMm(x)) = x for every size a part can have.
+    fc.assert(fc.property(fc.double({ min: 0.001, max: 1000, noNaN: true }), (inches) => Math.abs(fromMm(toMm(inches, "in"), "in") - inches) <= 1e-9 * inches));
+  });
+});
+
+describe("reading what people type", () => {
+  const cases: Array<[string, number, "in" | "mm"]> = [
+    ["1.5", 1.5, "in"],
+    ["1-1/2", 1.5, "in"],
+    ['1 1/2"', 1.5, "in"],
+    ["1.500 in", 1.5, "in"],
+    ["38.1 mm", 38.1, "mm"],
+    ["2 3/8", 2.375, "in"],
+    ["52mm", 52, "mm"],
+    ["3/4", 0.75, "in"],
+    ["0,75 in", 0.75, "in"],
+    [".625", 0.625, "in"],
+  ];
+  for (const [text, value, unit] of cases) {
+    it(`reads ${JSON.stringify(text)} as ${value} ${unit}`, () => {
+      const parsed = parseLength(text, "in");
+      expect(parsed.value).toBeCloseTo(value, 12);
+      expect(parsed.unit).toBe(unit);
+    });
+  }
+
+  it("uses the chosen unit when none is typed", () => {
+    expect(parseLength("52", "mm")).toMatchObject({ value: 52, unit: "mm", mm: 52 });
+  });
+
+  for (const nonsense of ["", "abc", "1/0", "-5", "0", "1..5", "5 ft", "1-1/2-3", "99999 in"]) {
+    it(`refuses ${JSON.stringify(nonsense)} with a reason`, () => {
+      expect(() => parseLength(nonsense, "in")).toThrow(UnitParseError);
+    });
+  }
+});
+
+describe("inch labels", () => {
+  it("writes sizes the way they are spoken in the shop", () => {
+    expect(inchLabel(1.25)).toBe("1-1/4 in");
+    expect(inchLabel(0.75)).toBe("3/4 in");
+    expect(inchLabel(2)).toBe("2 in");
+    expect(inchLabel(1 + 17 / 64)).toBe("1-17/64 in");
+    expect(inchLabel(1.2485)).toBe("1.2485 in");
+  });
+});
