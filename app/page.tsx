@@ -1,7 +1,7 @@
 import { NumberSearch } from "@/components/home/number-search";
 import { Notice } from "@/components/ui/notice";
 
-const jobs = [
+const jobs: Array<{ title: string; text: string; href?: string; action?: string }> = [
   {
     title: "Look up a factory number",
     text: "Type the number stamped on the worn part. See the standard bearing, seal or belt that replaces it, how sure the catalogue is, and which other machines share it.",
@@ -9,6 +9,8 @@ const jobs = [
   {
     title: "Measure a part with no number",
     text: "Enter what the calipers read, in inches or millimetres. Get the standard sizes it is likely to be, with the inch-and-metric near misses spelled out.",
+    href: "/measure/bearing",
+    action: "Measure a bearing, seal or belt",
   },
   {
     title: "Share what you fitted",
@@ -56,6 +58,11 @@ export default async function HomePage({ searchParams }: { searchParams: Promise
             <li key={job.title} className="rounded-lg border border-rule bg-ground-raised p-5">
               <h3 className="mb-1 text-lg">{job.title}</h3>
               <p className="text-ink-soft">{job.text}</p>
+              {job.href && (
+                <a href={job.href} className="mt-2 inline-block font-bold">
+                  {job.action} →
+                </a>
+              )}
             </li>
           ))}
         </ul>

@@ -11,7 +11,7 @@ export interface Area {
 
 export const AREAS: Area[] = [
   { label: "Find by number", href: "/", ready: true },
-  { label: "Measure a part", href: "/measure/bearing", ready: false },
+  { label: "Measure a part", href: "/measure/bearing", ready: true },
   { label: "Propose a cross", href: "/propose", permission: "proposals:create", ready: false },
   { label: "Job lists", href: "/lists", permission: "lists:manage", ready: false },
   { label: "Review queue", href: "/review", permission: "proposals:review", ready: false },

@@ -1,3 +1,5 @@
+import { inchLabel } from "@/lib/standards/units";
+
 /**
  * V-belt cross-sections. Widths and heights in the unit the section is designated in (inches for A–E, 2L–5L, 3V–8V
  * and automotive; millimetres for SP). `pitchOffset` is how much longer the pitch (datum) length is than the inside
@@ -48,7 +50,7 @@ export const BELT_SECTIONS: BeltSection[] = [
   { section: "SPC", family: "iso-narrow", unit: "mm", topWidth: 22, height: 18, pitchOffset: 83, angleDeg: 40, designatedBy: "datum", designationScale: 1, note: "ISO narrow, 22 mm top" },
   // Automotive top widths (SAE J636); heights vary by make, so they are identified by top width alone. From memory.
   ...[0.38, 0.44, 0.5, 0.6875, 0.75, 0.875, 1.0].map((w) => ({
-    section: `auto ${w.toFixed(3).replace(/0+$/, "").replace(/\.$/, "")} in`,
+    section: `auto ${inchLabel(w)}`,
     family: "automotive" as const,
     unit: "in" as const,
     topWidth: w,

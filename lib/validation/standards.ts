@@ -51,6 +51,8 @@ export const driveQuery = z
     small: size("small pulley's pitch diameter"),
     center: optionalSize("centre distance"),
     length: optionalSize("belt pitch length"),
+    /** An adjustable (split-flange) small pulley: its largest pitch diameter, with `small` as its smallest. */
+    smallMax: optionalSize("adjustable pulley's largest pitch diameter"),
     unit,
     section: z.string().trim().max(12).optional(),
   })

@@ -1,6 +1,6 @@
 import { handle } from "@/lib/http/handle";
 import { findSection, standardLengthsForPitch } from "@/lib/standards/belts";
-import { solveDrive } from "@/lib/standards/drive";
+import { adjustablePulleyRange, solveDrive } from "@/lib/standards/drive";
 import { fromMm, toMm } from "@/lib/standards/units";
 import { driveQuery, forField, queryOf, readOptionalSize, readSize } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
@@ -18,6 +18,12 @@ export const GET = handle(async (request) => {
   const field = center !== undefined ? "center" : "length";
   const drive = forField(field, () => solveDrive({ large, small, center, length }));
   const body: Record<string, unknown> = { unit: q.unit, ...drive };
+  const smallMax = inUnit(readOptionalSize("smallMax", q.smallMax, q.unit));
+  if (smallMax !== undefined) {
+    body.adjustableRange = forField("smallMax", () =>
+      adjustablePulleyRange({ fixed: large, adjustableMin: small, adjustableMax: smallMax, center: drive.center }),
+    );
+  }
   if (q.section) {
     const section = forField("section", () => findSection(q.section as string));
     body.standardLengths = standardLengthsForPitch(section, toMm(drive.pitchLength, q.unit));

@@ -1,0 +1,55 @@
+export type CautionKind = "bearings" | "belts" | "coolant" | "seals";
+
+const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
+  bearings: {
+    title: "Pressing and heating bearings",
+    points: [
+      "Wear a face shield: a cocked bearing can shatter under the press.",
+      "Press only on the ring with the tight fit: the inner ring onto a shaft, the outer ring into a housing. Never through the balls.",
+      "Heat a bearing with an induction heater or in an oven to at most about 120 °C, never with an open flame.",
+    ],
+  },
+  belts: {
+    title: "Belts, fans and pulleys",
+    points: [
+      "Engine stopped and key out before you measure, fit or tension a belt: a turning belt draws fingers into the pulley.",
+      "Put every guard back before the engine runs again.",
+      "Stand clear of the fan when running a tensioned drive for the first time.",
+    ],
+  },
+  coolant: {
+    title: "Cooling systems",
+    points: ["Never open a hot, pressurised cooling system: let it cool, then ease the cap off a quarter turn under a rag."],
+  },
+  seals: {
+    title: "Fitting seals",
+    points: [
+      "Drive a seal in square with a driver that bears on its outer case, not the lip.",
+      "Old seals and gaskets may contain asbestos: keep them wet, do not sand or blow them clean, and bag the waste.",
+    ],
+  },
+};
+
+/** Short cautions for the work on the page; they defer to the maker's manual and local practice. */
+export function Cautions({ kinds }: { kinds: CautionKind[] }) {
+  return (
+    <aside aria-labelledby="cautions-heading" className="rounded-lg border-l-4 border-caution bg-ground-raised p-4">
+      <h2 id="cautions-heading" className="mb-2 text-lg text-caution">
+        Before you start
+      </h2>
+      <div className="space-y-3">
+        {kinds.map((kind) => (
+          <section key={kind}>
+            <h3 className="font-bold">{TEXT[kind].title}</h3>
+            <ul className="list-disc space-y-1 pl-5 text-ink-soft">
+              {TEXT[kind].points.map((p) => (
+                <li key={p}>{p}</li>
+              ))}
+            </ul>
+          </section>
+        ))}
+        <p className="text-sm text-ink-soft">The maker&apos;s manual and your local rules come first; these notes do not replace them.</p>
+      </div>
+    </aside>
+  );
+}

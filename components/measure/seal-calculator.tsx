@@ -1,0 +1,146 @@
+"use client";
+
+import { useState } from "react";
+import { CandidatesTable } from "@/components/measure/candidates-table";
+import { errorFor, unplacedError } from "@/components/measure/field-errors";
+import { SealDrawing, type SealDimension } from "@/components/measure/seal-drawing";
+import { SizeField } from "@/components/measure/size-field";
+import { UnitSwitch } from "@/components/measure/unit-switch";
+import { Notice } from "@/components/ui/notice";
+import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
+import type { PressFit, SealCandidate, ShaftCheck } from "@/lib/standards/seals";
+import type { LengthUnit } from "@/lib/standards/units";
+
+interface SealMatch {
+  candidates: SealCandidate[];
+  warnings: string[];
+  remedies: string[];
+  shaft: ShaftCheck;
+}
+
+const selectClass = "min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg";
+
+export function SealCalculator() {
+  const [unit, setUnit] = useState<LengthUnit>("in");
+  const [sizes, setSizes] = useState({ shaft: "", bore: "", width: "", sealOd: "" });
+  const [grooved, setGrooved] = useState(false);
+  const [spring, setSpring] = useState("1");
+  const [dustLip, setDustLip] = useState(false);
+  const [outside, setOutside] = useState<"metal" | "rubber">("metal");
+  const [active, setActive] = useState<SealDimension>(null);
+  const settled = useDebounced(sizes);
+  const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
+
+  const match = useCalculation<SealMatch>(
+    calculationUrl("/api/seals/match", { shaft: settled.shaft, bore: settled.bore, width: settled.width, unit, grooved, spring, dustLip, outside }, ["shaft", "bore"]),
+  );
+  const fit = useCalculation<PressFit>(calculationUrl("/api/seals/press-fit", { bore: settled.bore, sealOd: settled.sealOd, unit, outside }, ["bore", "sealOd"]));
+  const otherError = unplacedError(match.error, ["shaft", "bore", "width"]);
+
+  return (
+    <div className="space-y-8">
+      <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
+        <div className="space-y-4">
+          <UnitSwitch unit={unit} onChange={setUnit} />
+          <div className="grid gap-4 sm:grid-cols-3">
+            <SizeField id="shaft" label="Shaft" hint="Measure the shaft, not the old lip." value={sizes.shaft} onChange={set("shaft")} onFocus={() => setActive("shaft")} error={errorFor(match.error, "shaft")} unit={unit} />
+            <SizeField id="bore" label="Housing bore" value={sizes.bore} onChange={set("bore")} onFocus={() => setActive("bore")} error={errorFor(match.error, "bore") ?? errorFor(fit.error, "bore")} unit={unit} />
+            <SizeField id="width" label="Width" hint="Optional." value={sizes.width} onChange={set("width")} onFocus={() => setActive("width")} error={errorFor(match.error, "width")} unit={unit} />
+          </div>
+          <fieldset className="grid gap-4 rounded-lg border border-rule p-4 sm:grid-cols-2">
+            <legend className="px-1 font-bold">What the old seal was like</legend>
+            <label className="flex min-h-12 items-center gap-3">
+              <input type="checkbox" checked={grooved} onChange={(e) => setGrooved(e.target.checked)} className="h-6 w-6 accent-brass" />
+              The old lip has worn a groove in the shaft
+            </label>
+            <label className="flex min-h-12 items-center gap-3">
+              <input type="checkbox" checked={dustLip} onChange={(e) => setDustLip(e.target.checked)} className="h-6 w-6 accent-brass" />
+              It had a second, dust lip
+            </label>
+            <div className="space-y-1">
+              <label htmlFor="seal-lip" className="block font-bold">
+                Lip
+              </label>
+              <select id="seal-lip" value={spring} onChange={(e) => setSpring(e.target.value)} className={selectClass}>
+                <option value="1">Spring-loaded (a garter spring behind the lip)</option>
+                <option value="0">Plain, no spring (or leather)</option>
+              </select>
+            </div>
+            <div className="space-y-1">
+              <label htmlFor="seal-outside" className="block font-bold">
+                Outside
+              </label>
+              <select id="seal-outside" value={outside} onChange={(e) => setOutside(e.target.value as "metal" | "rubber")} className={selectClass}>
+                <option value="metal">Bare metal case</option>
+                <option value="rubber">Rubber-covered</option>
+              </select>
+            </div>
+          </fieldset>
+        </div>
+        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
+          <SealDrawing active={active} />
+          <figcaption className="text-sm text-ink-soft">The spring side of the lip faces the oil. Measure the shaft where the new lip will run.</figcaption>
+        </figure>
+      </div>
+
+      {otherError && (
+        <Notice tone="caution" role="alert">
+          {otherError}
+        </Notice>
+      )}
+      <section aria-live="polite" aria-busy={match.isLoading} className="space-y-3" aria-label="Matching seals">
+        {match.data?.warnings.map((w) => (
+          <Notice key={w} tone="caution">
+            {w}
+          </Notice>
+        ))}
+        {match.data && match.data.remedies.length > 0 && (
+          <div className="rounded-lg border border-rule-strong bg-ground-raised p-4">
+            <h2 className="mb-2 text-lg">What to do about the groove</h2>
+            <ul className="list-disc space-y-1 pl-5">
+              {match.data.remedies.map((r) => (
+                <li key={r}>{r}</li>
+              ))}
+            </ul>
+          </div>
+        )}
+        {match.data && <Notice>{match.data.shaft.message}</Notice>}
+        {match.data && (
+          <CandidatesTable
+            caption="Standard lip seals that match the measured sizes"
+            unit={unit}
+            emptyText="No standard lip seal is near these sizes."
+            rows={match.data.candidates.map((c) => ({
+              key: c.size,
+              name: c.size,
+              detail: `${c.system === "inch" ? "inch" : "metric, ISO 6194-1"} · ask for: ${c.orderAs}`,
+              score: c.score,
+              deviations: c.deviations,
+              warnings: c.warnings,
+            }))}
+          />
+        )}
+        {!match.data && !match.error && <p className="text-ink-soft">Enter the shaft and the housing bore; the matching standard seals appear here.</p>}
+      </section>
+
+      <section aria-labelledby="fit-heading" className="space-y-3 rounded-lg border border-rule bg-ground-sunk p-4">
+        <h2 id="fit-heading" className="text-xl">
+          Will it stay in the housing?
+        </h2>
+        <p className="text-ink-soft">Give the new seal&apos;s outside diameter to check its press fit in the bore above.</p>
+        <div className="max-w-xs">
+          <SizeField id="sealOd" label="Seal outside diameter" value={sizes.sealOd} onChange={set("sealOd")} onFocus={() => setActive("sealOd")} error={errorFor(fit.error, "sealOd")} unit={unit} />
+        </div>
+        {fit.data && (
+          <div aria-live="polite">
+            <Notice tone={fit.data.verdict === "ok" ? "success" : "caution"}>
+              <strong className="mr-1 uppercase">{fit.data.verdict === "ok" ? "Fit OK" : fit.data.verdict === "loose" ? "Loose" : "Tight"}.</strong>
+              {fit.data.message}
+              <span className="mt-1 block text-sm text-ink-soft">Source: {fit.data.source}.</span>
+            </Notice>
+          </div>
+        )}
+      </section>
+    </div>
+  );
+}
