@@ -6,6 +6,7 @@ import { CandidatesTable } from "@/components/measure/candidates-table";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
+import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
@@ -107,11 +108,7 @@ export function BearingCalculator() {
           </Notice>
         )}
         <div aria-live="polite" aria-busy={match.isLoading} className="space-y-3">
-          {match.data?.warnings.map((w) => (
-            <Notice key={w} tone="caution">
-              {w}
-            </Notice>
-          ))}
+          <WarningList warnings={match.data?.warnings} />
           {match.data && (
             <CandidatesTable
               caption="Standard bearings that match the measured sizes"

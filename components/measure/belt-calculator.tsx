@@ -6,6 +6,7 @@ import { CandidatesTable } from "@/components/measure/candidates-table";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
+import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import { BELT_SECTIONS } from "@/lib/standards/belt-sections";
@@ -190,11 +191,7 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
                     <span className="num font-bold">{solved.data.adjustableRange.longest}</span> {unit} pitch length.
                   </p>
                 )}
-                {solved.data.warnings.map((w) => (
-                  <Notice key={w} tone="caution">
-                    {w}
-                  </Notice>
-                ))}
+                <WarningList warnings={solved.data.warnings} />
               </div>
             )}
           </section>

@@ -6,6 +6,7 @@ import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SealDrawing, type SealDimension } from "@/components/measure/seal-drawing";
 import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
+import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import type { PressFit, SealCandidate, ShaftCheck } from "@/lib/standards/seals";
@@ -89,11 +90,7 @@ export function SealCalculator() {
         </Notice>
       )}
       <section aria-live="polite" aria-busy={match.isLoading} className="space-y-3" aria-label="Matching seals">
-        {match.data?.warnings.map((w) => (
-          <Notice key={w} tone="caution">
-            {w}
-          </Notice>
-        ))}
+        <WarningList warnings={match.data?.warnings} />
         {match.data && match.data.remedies.length > 0 && (
           <div className="rounded-lg border border-rule-strong bg-ground-raised p-4">
             <h2 className="mb-2 text-lg">What to do about the groove</h2>

@@ -1,27 +1,16 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { APP_URL } from "../helpers/api";
-import { launchBrowser } from "../helpers/browser";
+import { pagePerTest } from "../helpers/browser";
 
-let browser: Browser;
-let page: Page;
+// A phone in the workshop: the pages must work at this size.
+const currentPage = pagePerTest({ width: 390, height: 844 });
 
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-beforeEach(async () => {
-  // A phone in the workshop: the calculators must work at this size.
-  page = await (await browser.newContext({ viewport: { width: 390, height: 844 } })).newPage();
-});
-
-const field = (label: string) => page.getByLabel(label, { exact: true });
-const firstRow = () => page.locator("tbody tr").first().locator("th");
+const field = (label: string) => currentPage().getByLabel(label, { exact: true });
+const firstRow = () => currentPage().locator("tbody tr").first().locator("th");
 
 describe("measuring a part", () => {
   it("reads a bearing number and matches a measured bearing", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/`);
     await page.getByRole("link", { name: "Measure a part" }).first().click();
     await field("Bearing number as stamped on its side").fill("6305-2Z");
@@ -34,6 +23,7 @@ describe("measuring a part", () => {
   });
 
   it("matches an inch lip seal, explains the groove and checks the press fit", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/measure/seal`);
     await page.getByText("inch", { exact: true }).click();
     await field("Shaft").fill("1-1/4");
@@ -49,6 +39,7 @@ describe("measuring a part", () => {
   });
 
   it("reads a belt number, names the section and works out a drive", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/measure/belt`);
     await field("Belt number").fill("B60");
     await page.getByTestId("belt-decoded").getByText(/^61\.8 in$/).waitFor();
@@ -64,6 +55,7 @@ describe("measuring a part", () => {
   });
 
   it("shows the reason under the field when a size cannot be read", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/measure/bearing`);
     await field("Bore (d)").fill("about an inch");
     await field("Outside diameter (D)").fill("52");

@@ -1,24 +1,13 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { APP_URL, DEMO_PASSWORD, uniqueEmail } from "../helpers/api";
-import { launchBrowser } from "../helpers/browser";
+import { pagePerTest } from "../helpers/browser";
 
-let browser: Browser;
-let page: Page;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-beforeEach(async () => {
-  const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
-  page = await context.newPage();
-});
+// A phone in the workshop: the pages must work at this size.
+const currentPage = pagePerTest({ width: 390, height: 844 });
 
 describe("signing in and out", () => {
   it("signs the demo member in through the form, shows the user menu, and signs out", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/`);
     await page.getByRole("link", { name: "Sign in" }).click();
     await page.getByLabel("E-mail").fill("member@understudy.test");
@@ -38,6 +27,7 @@ describe("signing in and out", () => {
   });
 
   it("shows the reason beside the field when the e-mail is malformed, without sending anything", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/sign-in`);
     await page.getByLabel("E-mail").fill("member-at-understudy");
     await page.getByLabel("Password").fill("whatever");
@@ -49,6 +39,7 @@ describe("signing in and out", () => {
   });
 
   it("says plainly when the password is wrong", async () => {
+    const page = currentPage();
     await page.goto(`${APP_URL}/sign-in`);
     await page.getByLabel("E-mail").fill("moderator@understudy.test");
     await page.getByLabel("Password").fill("not-the-demo-password");
@@ -59,6 +50,7 @@ describe("signing in and out", () => {
 
 describe("opening an account", () => {
   it("signs up, follows the confirmation link from the captured mail, and signs in", async () => {
+    const page = currentPage();
     const email = uniqueEmail("browser");
     const password = "crank-pin-journal-2";
     await page.goto(`${APP_URL}/sign-up`);

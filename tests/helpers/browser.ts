@@ -1,4 +1,5 @@
-import { chromium, type Browser } from "playwright-core";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll, beforeEach } from "vitest";
 import { CHROMIUM_PATH } from "./chromium";
 
 /** Debian's Chromium, headless, in a fresh throw-away profile (playwright makes one per launch), with the flags that keep it off the network it cannot reach here. */
@@ -17,4 +18,27 @@ export function launchBrowser(): Promise<Browser> {
       "--disable-sync",
     ],
   });
+}
+
+/**
+ * One browser for a test file and a fresh page (own cookies) for each test, at the given screen size.
+ * Call at the top of a file; the returned function gives the current test's page.
+ */
+export function pagePerTest(viewport = { width: 390, height: 844 }): () => Page {
+  let browser: Browser | undefined;
+  let page: Page | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  beforeEach(async () => {
+    if (!browser) throw new Error("The browser did not start");
+    page = await (await browser.newContext({ viewport })).newPage();
+  });
+  return () => {
+    if (!page) throw new Error("No page: pagePerTest() hooks have not run");
+    return page;
+  };
 }
