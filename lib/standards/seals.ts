@@ -135,7 +135,11 @@ export function checkPressFit(input: { boreMm: number; sealOdMm: number; outside
   const show = (mm: number) => `${round(fromMm(mm, input.unit), digits)} ${input.unit}`;
   const message = {
     ok: `Interference ${show(interferenceMm)} is within the recommended ${show(minMm)} to ${show(maxMm)}: the seal should stay put without distorting.`,
-    loose: `Interference ${show(interferenceMm)} is below the recommended ${show(minMm)}: the seal may turn or weep round its OD. A worn or oversize bore can take a seal with a rubber-covered OD, or a thin coat of sealant on a metal OD.`,
+    loose: `Interference ${show(interferenceMm)} is below the recommended ${show(minMm)}: the seal may turn or weep round its OD. ${
+      input.outside === "metal"
+        ? "A worn or oversize bore can take a seal with a rubber-covered OD, or a thin coat of sealant on the metal OD."
+        : "Check the bore for wear; an oversize bore may need sleeving, or a seal with a larger OD."
+    }`,
     tight: `Interference ${show(interferenceMm)} is above the recommended ${show(maxMm)}: the case may buckle or the lip be squeezed onto the shaft. Check both measurements.`,
   }[verdict];
   return {
