@@ -133,6 +133,7 @@ describe("bad input on every calculator route", () => {
     ["/api/seals/match?bore=52", "shaft"],
     ["/api/seals/match?shaft=35&bore=52&lips=triple", "lips"],
     ["/api/seals/press-fit?bore=47&sealOd=x", "sealOd"],
+    ["/api/seals/shaft?shaft=1/0", "shaft"],
     ["/api/seals/press-fit?bore=47&sealOd=47.1&outside=wood", "outside"],
     ["/api/belts/decode?designation=Q60", "designation"],
     ["/api/belts/drive?large=10&small=5", "center"],
