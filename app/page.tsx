@@ -1,4 +1,4 @@
-import { NumberSearch } from "@/components/home/number-search";
+import { NumberSearch } from "@/components/lookup/number-search";
 import { Notice } from "@/components/ui/notice";
 
 const jobs: Array<{ title: string; text: string; href?: string; action?: string }> = [

@@ -1,5 +1,6 @@
 import { sequelize } from "@/db";
 import { createMigrator } from "@/db/migrator";
+import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
 
 const usage = `Usage: tsx db/cli.ts <command>
@@ -25,10 +26,13 @@ async function main(command: string | undefined, flags: string[]): Promise<void>
       break;
     case "seed":
       await seedDemo(log);
+      if (await isCatalogueEmpty()) await seedDemoCatalogue(log);
       break;
     case "seed:if-empty":
       if (await isDatabaseEmpty()) await seedDemo(log);
-      else log("database already has data; demo seed skipped");
+      else log("accounts already present; demo accounts skipped");
+      if (await isCatalogueEmpty()) await seedDemoCatalogue(log);
+      else log("catalogue already has parts; demo catalogue skipped");
       break;
     default:
       console.error(usage);

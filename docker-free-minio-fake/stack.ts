@@ -185,11 +185,13 @@ async function main(): Promise<number> {
   const { sequelize } = await import("@/db");
   const { createMigrator } = await import("@/db/migrator");
   const { isDatabaseEmpty, seedDemo } = await import("@/db/seeders/demo");
+  const { isCatalogueEmpty, seedDemoCatalogue } = await import("@/db/seeders/catalogue");
   await createMigrator(sequelize, log).up();
   if (env.APP_ENV !== "production" && (await isDatabaseEmpty())) {
     log("empty database: loading the demo data");
     await seedDemo(log);
   }
+  if (env.APP_ENV !== "production" && (await isCatalogueEmpty())) await seedDemoCatalogue(log);
   await sequelize.close();
 
   if (mode === "services") {

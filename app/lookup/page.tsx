@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
-import { NumberSearch } from "@/components/home/number-search";
-import { Notice } from "@/components/ui/notice";
+import { LookupResults } from "@/components/lookup/lookup-results";
+import { NumberSearch } from "@/components/lookup/number-search";
 
 export const metadata: Metadata = { title: "Find by number" };
 
@@ -9,17 +9,8 @@ export default async function LookupPage({ searchParams }: { searchParams: Promi
   return (
     <div className="space-y-6">
       <h1 className="text-3xl">Find by number</h1>
-      <NumberSearch defaultValue={q} />
-      <Notice role="status">
-        The catalogue of crosses is still being loaded, so no number can be found yet
-        {q ? (
-          <>
-            {" "}
-            (you searched for <span className="num font-bold">{q}</span>)
-          </>
-        ) : null}
-        . Keep the part and its measurements; this page will answer as soon as the catalogue opens.
-      </Notice>
+      <NumberSearch key={q} defaultValue={q} />
+      <LookupResults query={q} />
     </div>
   );
 }

@@ -11,6 +11,7 @@ export interface Area {
 
 export const AREAS: Area[] = [
   { label: "Find by number", href: "/", ready: true },
+  { label: "Machines", href: "/machines", ready: true },
   { label: "Measure a part", href: "/measure/bearing", ready: true },
   { label: "Propose a cross", href: "/propose", permission: "proposals:create", ready: false },
   { label: "Job lists", href: "/lists", permission: "lists:manage", ready: false },

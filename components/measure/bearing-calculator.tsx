@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { BearingDrawing, type BearingDimension } from "@/components/measure/bearing-drawing";
 import { CandidatesTable } from "@/components/measure/candidates-table";
+import { CatalogueMatches } from "@/components/measure/catalogue-matches";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
@@ -10,6 +11,7 @@ import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
+import type { SizedPart } from "@/lib/catalogue/find-by-size";
 import type { LengthUnit } from "@/lib/standards/units";
 
 const inches = (mm: number) => (mm / 25.4).toFixed(4).replace(/0+$/, "").replace(/\.$/, "");
@@ -59,7 +61,7 @@ export function BearingCalculator() {
   const settled = useDebounced(sizes);
 
   const decode = useCalculation<DecodedBearing>(calculationUrl("/api/bearings/decode", { designation: settledDesignation }, ["designation"]));
-  const match = useCalculation<{ candidates: BearingCandidate[]; warnings: string[] }>(
+  const match = useCalculation<{ candidates: BearingCandidate[]; warnings: string[]; catalogueParts: SizedPart[] }>(
     calculationUrl("/api/bearings/match", { ...settled, unit }, ["bore", "od"]),
   );
   const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
@@ -124,6 +126,7 @@ export function BearingCalculator() {
               }))}
             />
           )}
+          <CatalogueMatches parts={match.data?.catalogueParts} unit={unit} />
           {!match.data && !match.error && <p className="text-ink-soft">Enter at least the bore and the outside diameter; the matching standard bearings appear here.</p>}
         </div>
       </section>

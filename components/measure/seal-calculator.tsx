@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { CandidatesTable } from "@/components/measure/candidates-table";
+import { CatalogueMatches } from "@/components/measure/catalogue-matches";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SealDrawing, type SealDimension } from "@/components/measure/seal-drawing";
 import { SizeField } from "@/components/measure/size-field";
@@ -10,6 +11,7 @@ import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import type { PressFit, SealCandidate, ShaftCheck } from "@/lib/standards/seals";
+import type { SizedPart } from "@/lib/catalogue/find-by-size";
 import type { LengthUnit } from "@/lib/standards/units";
 
 interface SealMatch {
@@ -17,6 +19,7 @@ interface SealMatch {
   warnings: string[];
   remedies: string[];
   shaft: ShaftCheck;
+  catalogueParts: SizedPart[];
 }
 
 const selectClass = "min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg";
@@ -117,6 +120,7 @@ export function SealCalculator() {
             }))}
           />
         )}
+        <CatalogueMatches parts={match.data?.catalogueParts} unit={unit} />
         {!match.data && !match.error && <p className="text-ink-soft">Enter the shaft and the housing bore; the matching standard seals appear here.</p>}
       </section>
 

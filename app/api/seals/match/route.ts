@@ -1,3 +1,4 @@
+import { findPartsBySize } from "@/lib/catalogue/find-by-size";
 import { handle } from "@/lib/http/handle";
 import { checkShaft, matchSeal } from "@/lib/standards/seals";
 import { queryOf, readOptionalSize, readSize, readTolerance, sealMatchQuery } from "@/lib/validation/standards";
@@ -8,14 +9,17 @@ export const runtime = "nodejs";
 export const GET = handle(async (request) => {
   const q = parseWith(sealMatchQuery, queryOf(request));
   const shaftMm = readSize("shaft", q.shaft, q.unit);
+  const boreMm = readSize("bore", q.bore, q.unit);
+  const toleranceMm = readTolerance(q.tolerance, q.unit);
   const result = matchSeal({
     shaftMm,
-    boreMm: readSize("bore", q.bore, q.unit),
+    boreMm,
     widthMm: readOptionalSize("width", q.width, q.unit),
-    toleranceMm: readTolerance(q.tolerance, q.unit),
+    toleranceMm,
     unit: q.unit,
     grooved: q.grooved ?? false,
     attributes: { lips: q.lips, spring: q.spring, dustLip: q.dustLip, outside: q.outside },
   });
-  return Response.json({ unit: q.unit, ...result, shaft: checkShaft({ shaftMm, unit: q.unit, grooved: q.grooved ?? false }) });
+  const catalogueParts = await findPartsBySize({ category: "lip_seal", innerMm: shaftMm, outerMm: boreMm, toleranceMm });
+  return Response.json({ unit: q.unit, ...result, shaft: checkShaft({ shaftMm, unit: q.unit, grooved: q.grooved ?? false }), catalogueParts });
 });

@@ -1,0 +1,187 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Cautions } from "@/components/measure/cautions";
+import { BearingDrawing } from "@/components/measure/bearing-drawing";
+import { BeltDrawing } from "@/components/measure/belt-drawing";
+import { SealDrawing } from "@/components/measure/seal-drawing";
+import { CrossCard } from "@/components/parts/cross-card";
+import { Notice } from "@/components/ui/notice";
+import { getPart, type PartDetail } from "@/lib/catalogue/get-part";
+import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
+import { AppError } from "@/lib/errors";
+import { partIdParam } from "@/lib/validation/catalogue";
+
+async function load(idText: string): Promise<PartDetail> {
+  const parsed = partIdParam.safeParse({ id: idText });
+  if (!parsed.success) notFound();
+  try {
+    return await getPart(parsed.data.id);
+  } catch (error) {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  }
+}
+
+export async function generateMetadata({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> {
+  const part = await load((await params).id);
+  return { title: `${part.number}, ${part.description}` };
+}
+
+const KIND_WORDS = { interchangeable: "interchangeable", one_way: "one way only", with_companions: "needs companion parts" } as const;
+
+function Drawing({ part }: { part: PartDetail }) {
+  if (part.category === "bearing") return <BearingDrawing active={null} />;
+  if (part.category === "lip_seal") return <SealDrawing active={null} />;
+  if (part.category === "v_belt") return <BeltDrawing active={null} />;
+  return null;
+}
+
+export default async function PartPage({ params }: { params: Promise<{ id: string }> }) {
+  const part = await load((await params).id);
+  const chain = [...part.chain.before, { id: part.id, number: part.number, kind: null, note: null }, ...part.chain.after];
+  const dims = part.dimensions;
+  const documented = [
+    dims.innerMm !== null && `${part.category === "lip_seal" ? "shaft" : "bore"} ${dims.innerMm} mm`,
+    dims.outerMm !== null && `${part.category === "lip_seal" ? "housing bore" : "outside"} ${dims.outerMm} mm`,
+    dims.widthMm !== null && `${part.category === "v_belt" ? "top width" : "width"} ${dims.widthMm} mm`,
+    dims.lengthMm !== null && `inside length ${dims.lengthMm} mm`,
+  ].filter(Boolean);
+
+  return (
+    <div className="space-y-10">
+      <header className="space-y-2">
+        <p className="text-ink-soft">
+          {part.maker.name} · {CATEGORY_NAMES[part.category]}
+        </p>
+        <h1 className="num text-4xl">{part.number}</h1>
+        <p className="text-xl">{part.description}</p>
+        {part.chain.latest.id !== part.id && (
+          <Notice tone="caution">
+            Superseded. The latest number is{" "}
+            <Link href={`/parts/${part.chain.latest.id}`} className="num font-bold">
+              {part.chain.latest.number}
+            </Link>
+            ; its page may list more crosses.
+          </Notice>
+        )}
+      </header>
+
+      <section aria-labelledby="equivalents-heading" className="space-y-3">
+        <h2 id="equivalents-heading" className="text-2xl">
+          Standard equivalents
+        </h2>
+        {part.crosses.length === 0 ? (
+          <Notice>No approved cross for this number yet. If you have fitted one, a member can propose it.</Notice>
+        ) : (
+          <div className="grid gap-3 md:grid-cols-2">
+            {part.crosses.map((c) => (
+              <CrossCard key={c.id} cross={c} />
+            ))}
+          </div>
+        )}
+        <p className="text-sm text-ink-soft">Ranked by fit, then by how many members fitted each. None is guaranteed: measure before you order.</p>
+      </section>
+
+      {(documented.length > 0 || ["bearing", "lip_seal", "v_belt"].includes(part.category)) && (
+        <section aria-labelledby="size-heading" className="grid gap-4 md:grid-cols-[1fr_18rem]">
+          <div className="space-y-2">
+            <h2 id="size-heading" className="text-2xl">
+              Size as the maker specified it
+            </h2>
+            {documented.length > 0 ? <p className="num text-lg">{documented.join(" · ")}</p> : <p className="text-ink-soft">Not documented.</p>}
+            {dims.note && <p className="text-ink-soft">{dims.note}</p>}
+          </div>
+          <figure className="rounded-lg border border-rule bg-ground-raised p-3">
+            <Drawing part={part} />
+          </figure>
+        </section>
+      )}
+
+      {chain.length > 1 && (
+        <section aria-labelledby="chain-heading" className="space-y-3">
+          <h2 id="chain-heading" className="text-2xl">
+            Supersessions
+          </h2>
+          <ol className="space-y-2">
+            {chain.map((link, i) => (
+              <li key={link.id} className="flex flex-wrap items-baseline gap-x-3">
+                <span className="text-ink-faint">{i === 0 ? "first" : "then"}</span>
+                {link.id === part.id ? (
+                  <span className="num text-lg font-bold" aria-current="true">
+                    {link.number} (this part)
+                  </span>
+                ) : (
+                  <Link href={`/parts/${link.id}`} className="num text-lg">
+                    {link.number}
+                  </Link>
+                )}
+                {link.kind && <span className="text-sm text-ink-soft">{KIND_WORDS[link.kind]}</span>}
+                {link.note && <span className="text-sm">{link.note}</span>}
+              </li>
+            ))}
+          </ol>
+          {part.chain.loop && <Notice tone="caution">The records point back on themselves somewhere in this chain; it is shown up to the loop.</Notice>}
+        </section>
+      )}
+
+      <section aria-labelledby="used-heading" className="space-y-3">
+        <h2 id="used-heading" className="text-2xl">
+          Where it is used
+        </h2>
+        <p className="text-ink-soft">Every machine that shares this part: donors to look for, and other owners who need the same cross.</p>
+        <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
+          <table className="w-full text-left">
+            <thead className="bg-ground-sunk text-sm">
+              <tr>
+                <th scope="col" className="p-3">Machine</th>
+                <th scope="col" className="p-3">Assembly</th>
+                <th scope="col" className="p-3">Qty</th>
+                <th scope="col" className="p-3">Serial numbers</th>
+              </tr>
+            </thead>
+            <tbody>
+              {part.whereUsed.map((u) => (
+                <tr key={`${u.machineId}-${u.assembly}`} className="border-t border-rule">
+                  <td className="p-3">
+                    <Link href={`/machines/${u.machineId}`}>
+                      {u.maker} {u.model}
+                    </Link>{" "}
+                    <span className="text-sm text-ink-soft">{u.years}</span>
+                  </td>
+                  <td className="p-3">{u.assembly}</td>
+                  <td className="num p-3">{u.quantity}</td>
+                  <td className="p-3 text-sm">{u.serialNote ?? "all"}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </section>
+
+      {part.sameAssembly.length > 0 && (
+        <section aria-labelledby="rest-heading" className="space-y-3">
+          <h2 id="rest-heading" className="text-2xl">
+            The rest of the assembly
+          </h2>
+          <p className="text-ink-soft">Parts fitted beside this one: what else to order for the same rebuild.</p>
+          <ul className="grid gap-2 sm:grid-cols-2">
+            {part.sameAssembly.map((p) => (
+              <li key={p.id} className="rounded-md border border-rule bg-ground-raised p-3">
+                <Link href={`/parts/${p.id}`} className="num font-bold">
+                  {p.number}
+                </Link>
+                <span className="block text-sm text-ink-soft">
+                  {p.description} · {p.model}, {p.assembly.toLowerCase()}
+                </span>
+                {p.standard && <span className="num block text-sm">→ {p.standard}</span>}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+
+      {part.cautions.length > 0 && <Cautions kinds={part.cautions} />}
+    </div>
+  );
+}

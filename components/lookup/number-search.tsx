@@ -1,0 +1,117 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useId, useState } from "react";
+import { MatchBadge } from "@/components/lookup/match-badge";
+import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
+import { useLookup } from "@/lib/hooks/use-lookup";
+
+/**
+ * The factory-number search box: suggestions appear as people type (arrow keys to move, Enter to open), and
+ * submitting opens the full results page. Without scripts it is still a plain GET form to /lookup.
+ */
+export function NumberSearch({ defaultValue = "", autoFocus = false }: { defaultValue?: string; autoFocus?: boolean }) {
+  const router = useRouter();
+  const [query, setQuery] = useState(defaultValue);
+  const [open, setOpen] = useState(false);
+  const [active, setActive] = useState(-1);
+  const { results, isLoading, settled } = useLookup(query);
+  const listId = useId();
+  const showList = open && query.trim() !== "";
+
+  const go = (id: number) => router.push(`/parts/${id}`);
+
+  return (
+    <form
+      action="/lookup"
+      method="get"
+      role="search"
+      className="relative w-full"
+      onSubmit={(e) => {
+        if (active >= 0 && results[active]) {
+          e.preventDefault();
+          go(results[active].id);
+        }
+      }}
+    >
+      <label htmlFor="q" className="mb-2 block text-lg font-bold">
+        Factory number from the old part or the parts book
+      </label>
+      <div className="flex flex-col gap-2 sm:flex-row">
+        <input
+          id="q"
+          name="q"
+          type="search"
+          value={query}
+          autoFocus={autoFocus}
+          onChange={(e) => {
+            setQuery(e.target.value);
+            setOpen(true);
+            setActive(-1);
+          }}
+          onFocus={() => setOpen(true)}
+          onBlur={() => setTimeout(() => setOpen(false), 150)}
+          onKeyDown={(e) => {
+            if (e.key === "ArrowDown") {
+              e.preventDefault();
+              setOpen(true);
+              setActive((i) => Math.min(i + 1, results.length - 1));
+            } else if (e.key === "ArrowUp") {
+              e.preventDefault();
+              setActive((i) => Math.max(i - 1, -1));
+            } else if (e.key === "Escape") {
+              setOpen(false);
+            }
+          }}
+          required
+          maxLength={60}
+          autoComplete="off"
+          spellCheck={false}
+          placeholder="e.g. CV-3003-A"
+          role="combobox"
+          aria-expanded={showList}
+          aria-controls={listId}
+          aria-autocomplete="list"
+          aria-activedescendant={active >= 0 ? `${listId}-${active}` : undefined}
+          aria-describedby="q-hint"
+          className="num min-h-14 flex-1 rounded-md border-2 border-ink/70 bg-ground-raised px-4 text-xl tracking-wide focus:border-brass"
+        />
+        <button type="submit" className="min-h-14 rounded-md bg-brass px-6 text-lg font-bold text-white hover:bg-brass-deep">
+          Find the standard part
+        </button>
+      </div>
+      <p id="q-hint" className="mt-2 text-sm text-ink-soft">
+        Type it as stamped: spaces, dashes and a worn character or two are fine.
+      </p>
+      {showList && (
+        <div className="absolute left-0 right-0 z-30 mt-1 rounded-lg border-2 border-ink/80 bg-ground-raised shadow-xl">
+          <ul id={listId} role="listbox" aria-label="Matching factory numbers" className="max-h-96 overflow-y-auto">
+            {results.map((r, i) => (
+              <li
+                key={r.id}
+                id={`${listId}-${i}`}
+                role="option"
+                aria-selected={i === active}
+                onMouseDown={(e) => e.preventDefault()}
+                onClick={() => go(r.id)}
+                className={`cursor-pointer border-b border-rule px-4 py-3 last:border-b-0 ${i === active ? "bg-brass-wash" : "hover:bg-ground-sunk"}`}
+              >
+                <span className="flex flex-wrap items-baseline gap-x-3">
+                  <span className="num text-lg font-bold">{r.number}</span>
+                  <MatchBadge matchedBy={r.matchedBy} why={r.why} />
+                </span>
+                <span className="block text-sm text-ink-soft">
+                  {r.maker} · {CATEGORY_NAMES[r.category]} · {r.description}
+                  {r.latestNumber !== r.number && <> · superseded by {r.latestNumber}</>}
+                </span>
+              </li>
+            ))}
+          </ul>
+          <p className="px-4 py-2 text-sm text-ink-soft" role="status">
+            {isLoading ? "Searching…" : results.length === 0 && settled ? `No factory number like “${settled}” yet. Try fewer characters, or measure the part.` : `${results.length} shown. Enter for all results.`}
+          </p>
+        </div>
+      )}
+    </form>
+  );
+}

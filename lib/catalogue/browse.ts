@@ -1,0 +1,83 @@
+import { QueryTypes } from "sequelize";
+import { sequelize } from "@/db/sequelize";
+import type { Fit, MachineKind, PartCategory } from "@/lib/catalogue/kinds";
+import { AppError } from "@/lib/errors";
+
+export interface MakerWithMachines {
+  id: number;
+  name: string;
+  country: string | null;
+  note: string | null;
+  machines: Array<{ id: number; model: string; kind: MachineKind; years: string; partCount: number }>;
+}
+
+export async function listMakersWithMachines(): Promise<MakerWithMachines[]> {
+  const rows = await sequelize.query<{ maker_id: number; maker: string; country: string | null; note: string | null; id: number; model: string; kind: MachineKind; year_from: number | null; year_to: number | null; parts: string }>(
+    `SELECT mk.id AS maker_id, mk.name AS maker, mk.country, mk.note, ma.id, ma.model, ma.kind, ma.year_from, ma.year_to,
+            (SELECT count(DISTINCT u.part_id) FROM part_usages u WHERE u.machine_id = ma.id) AS parts
+     FROM makers mk JOIN machines ma ON ma.maker_id = mk.id ORDER BY mk.name, ma.year_from, ma.model`,
+    { type: QueryTypes.SELECT },
+  );
+  const makers = new Map<number, MakerWithMachines>();
+  for (const r of rows) {
+    if (!makers.has(r.maker_id)) makers.set(r.maker_id, { id: r.maker_id, name: r.maker, country: r.country, note: r.note, machines: [] });
+    makers.get(r.maker_id)!.machines.push({ id: r.id, model: r.model, kind: r.kind, years: years(r.year_from, r.year_to), partCount: Number(r.parts) });
+  }
+  return [...makers.values()];
+}
+
+const years = (from: number | null, to: number | null) => (from ? `${from}–${to ?? ""}` : "");
+
+export interface MachinePartRow {
+  partId: number;
+  number: string;
+  description: string;
+  category: PartCategory;
+  assembly: string;
+  quantity: number;
+  serialNote: string | null;
+  standard: string | null;
+  fit: Fit | null;
+}
+
+export interface MachineDetail {
+  id: number;
+  maker: string;
+  model: string;
+  kind: MachineKind;
+  years: string;
+  serialNote: string | null;
+  assemblies: Array<{ name: string; count: number }>;
+  parts: MachinePartRow[];
+}
+
+/** A machine and its parts by assembly, each with its best approved standard equivalent. */
+export async function getMachine(id: number): Promise<MachineDetail> {
+  const [machine] = await sequelize.query<{ id: number; maker: string; model: string; kind: MachineKind; year_from: number | null; year_to: number | null; serial_note: string | null }>(
+    "SELECT ma.id, mk.name AS maker, ma.model, ma.kind, ma.year_from, ma.year_to, ma.serial_note FROM machines ma JOIN makers mk ON mk.id = ma.maker_id WHERE ma.id = :id",
+    { replacements: { id }, type: QueryTypes.SELECT },
+  );
+  if (!machine) throw new AppError("not_found", "No machine with that id.");
+  const parts = await sequelize.query<{ part_id: number; number: string; description: string; category: PartCategory; assembly: string; quantity: number; serial_note: string | null; standard: string | null; fit: Fit | null }>(
+    `SELECT p.id AS part_id, p.number, p.description, p.category, a.name AS assembly, u.quantity, u.serial_note, best.standard, best.fit
+     FROM part_usages u JOIN original_parts p ON p.id = u.part_id JOIN assemblies a ON a.id = u.assembly_id
+     LEFT JOIN LATERAL (
+       SELECT coalesce(s.designation, c.repair_method) AS standard, c.fit FROM crosses c LEFT JOIN standard_parts s ON s.id = c.standard_part_id
+       WHERE c.original_part_id = p.id AND c.status = 'approved' ORDER BY c.fit, c.id LIMIT 1
+     ) best ON true
+     WHERE u.machine_id = :id ORDER BY a.name, p.description, p.number`,
+    { replacements: { id }, type: QueryTypes.SELECT },
+  );
+  const counts = new Map<string, number>();
+  for (const p of parts) counts.set(p.assembly, (counts.get(p.assembly) ?? 0) + 1);
+  return {
+    id: machine.id,
+    maker: machine.maker,
+    model: machine.model,
+    kind: machine.kind,
+    years: years(machine.year_from, machine.year_to),
+    serialNote: machine.serial_note,
+    assemblies: [...counts].map(([name, count]) => ({ name, count })),
+    parts: parts.map((p) => ({ partId: p.part_id, number: p.number, description: p.description, category: p.category, assembly: p.assembly, quantity: p.quantity, serialNote: p.serial_note, standard: p.standard, fit: p.fit })),
+  };
+}

@@ -1,0 +1,38 @@
+export const PART_CATEGORIES = ["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other"] as const;
+export type PartCategory = (typeof PART_CATEGORIES)[number];
+
+export const STANDARD_KINDS = ["bearing", "lip_seal", "v_belt", "key", "plug", "felt", "sleeve", "gasket_sheet"] as const;
+export type StandardKind = (typeof STANDARD_KINDS)[number];
+
+/** Best first: the order crosses are ranked in. */
+export const FITS = ["direct", "with_modification", "dimensions_only"] as const;
+export type Fit = (typeof FITS)[number];
+
+export const CROSS_STATUSES = ["approved", "pending", "rejected"] as const;
+export type CrossStatus = (typeof CROSS_STATUSES)[number];
+
+export const CROSS_ORIGINS = ["editor", "import", "community"] as const;
+export type CrossOrigin = (typeof CROSS_ORIGINS)[number];
+
+export const SUPERSESSION_KINDS = ["interchangeable", "one_way", "with_companions"] as const;
+export type SupersessionKind = (typeof SUPERSESSION_KINDS)[number];
+
+export const MACHINE_KINDS = ["tractor", "crawler", "engine"] as const;
+export type MachineKind = (typeof MACHINE_KINDS)[number];
+
+export const CATEGORY_NAMES: Record<PartCategory, string> = {
+  bearing: "Ball bearing",
+  lip_seal: "Lip seal",
+  felt_seal: "Felt seal",
+  v_belt: "V-belt",
+  key: "Key",
+  gasket: "Gasket",
+  plug: "Plug",
+  other: "Other",
+};
+
+export const FIT_NAMES: Record<Fit, { word: string; mark: string; text: string }> = {
+  direct: { word: "Direct", mark: "●", text: "same size and type; fits as the old part did" },
+  with_modification: { word: "With modification", mark: "◐", text: "fits after the change described in the notes" },
+  dimensions_only: { word: "Dimensions only", mark: "○", text: "the sizes agree; nobody has reported fitting it yet" },
+};

@@ -1,0 +1,129 @@
+import { Op } from "sequelize";
+import { afterAll, describe, expect, it } from "vitest";
+import { Cross, OriginalPart, sequelize } from "@/db";
+import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
+import { send } from "../helpers/api";
+
+afterAll(() => sequelize.close());
+
+const demo = buildDemoCatalogue();
+const get = (path: string) => send("get", path);
+const lookup = (q: string, limit = 10) => get(`/api/parts/lookup?${new URLSearchParams({ q, limit: String(limit) })}`);
+
+// A demo part with a three-link chain behind it, to test the latest number.
+const chainStart = demo.parts.find((p) => {
+  const next = (key: string) => demo.supersessions.find((s) => s.oldKey === key)?.newKey;
+  const second = next(p.key);
+  return second && next(second) && !demo.supersessions.some((s) => s.newKey === p.key);
+})!;
+
+describe("GET /api/parts/lookup", () => {
+  it("finds a number typed exactly, first, and says why", async () => {
+    const { status, body } = await lookup("CV-3003-A");
+    expect(status).toBe(200);
+    expect(body.results[0]).toMatchObject({ number: "CV-3003-A", maker: "Corvane Tractor Works", matchedBy: "exact", score: 1 });
+    expect(Object.keys(body.results[0]).sort()).toEqual(["category", "crossCount", "description", "id", "latestNumber", "maker", "matchedBy", "number", "score", "why"].sort());
+  });
+
+  it("finds it typed sloppily: case, spaces, no dashes", async () => {
+    expect((await lookup("cv 3003a")).body.results[0]).toMatchObject({ number: "CV-3003-A", matchedBy: "normalised" });
+  });
+
+  it("finds it with the maker's prefix left off", async () => {
+    expect((await lookup("3003-A")).body.results[0]).toMatchObject({ number: "CV-3003-A" });
+  });
+
+  it("finds it with stamped characters misread: O for 0, I for 1", async () => {
+    expect((await lookup("HM 2IO OO7")).body.results[0]).toMatchObject({ number: "HM 210 007", matchedBy: "misread" });
+  });
+
+  it("finds it with a typo among similar numbers", async () => {
+    const { body } = await lookup("CV-3O3-A"); // a digit dropped and one misread
+    expect(body.results.map((r: { number: string }) => r.number)).toContain("CV-3003-A");
+  });
+
+  it("reports the latest number of a superseded part", async () => {
+    let key = chainStart.key;
+    for (let next = demo.supersessions.find((s) => s.oldKey === key); next; next = demo.supersessions.find((s) => s.oldKey === key)) key = next.newKey;
+    const latest = demo.parts.find((p) => p.key === key)!;
+    const { body } = await lookup(chainStart.number);
+    expect(body.results[0]).toMatchObject({ number: chainStart.number, latestNumber: latest.number });
+  });
+
+  const bad: Array<[string, string]> = [
+    ["/api/parts/lookup", "q"],
+    ["/api/parts/lookup?q=", "q"],
+    [`/api/parts/lookup?q=${"A".repeat(10_000)}`, "q"],
+    ["/api/parts/lookup?q=6205&limit=abc", "limit"],
+    ["/api/parts/lookup?q=6205&limit=500", "limit"],
+  ];
+  for (const [path, field] of bad) {
+    it(`answers ${path.slice(0, 60)} with 400 naming ${field}`, async () => {
+      const { status, body } = await get(path);
+      expect(status).toBe(400);
+      expect(body.field).toBe(field);
+    });
+  }
+
+  for (const q of ["'; DROP TABLE original_parts; --", "%_%", "\\x00", "☃☃☃", "  -- . / --  "]) {
+    it(`answers ${JSON.stringify(q)} without an error`, async () => {
+      const { status, body } = await lookup(q);
+      expect(status).toBe(200);
+      expect(Array.isArray(body.results)).toBe(true);
+    });
+  }
+});
+
+describe("GET /api/parts/{id}", () => {
+  it("gives the part, its chain, crosses, standard dimensions and where it is used", async () => {
+    const part = await OriginalPart.findOne({ where: { number: "CV-3003-A" } });
+    const { status, body } = await get(`/api/parts/${part!.id}`);
+    expect(status).toBe(200);
+    expect(body).toMatchObject({ number: "CV-3003-A", category: "bearing", maker: { name: "Corvane Tractor Works" } });
+    expect(body.chain.after.length).toBeGreaterThan(0);
+    expect(body.crosses[0].standard).toMatchObject({ kind: "bearing", innerMm: expect.any(Number), outerMm: expect.any(Number) });
+    expect(body.whereUsed.length).toBeGreaterThan(0);
+    expect(body.dimensions.innerMm).toBeGreaterThan(0);
+  });
+
+  it("ranks crosses by fit, then by confirmations", async () => {
+    const fitRank = { direct: 0, with_modification: 1, dimensions_only: 2 } as const;
+    const parts = await OriginalPart.findAll({ limit: 40, order: [["id", "ASC"]] });
+    for (const part of parts) {
+      const { body } = await get(`/api/parts/${part.id}`);
+      const crosses = body.crosses as Array<{ fit: keyof typeof fitRank; confirmations: number }>;
+      for (let i = 1; i < crosses.length; i += 1) {
+        const [a, b] = [crosses[i - 1], crosses[i]];
+        expect(fitRank[a.fit] < fitRank[b.fit] || (a.fit === b.fit && a.confirmations >= b.confirmations)).toBe(true);
+      }
+    }
+  });
+
+  it("shows anonymous visitors approved crosses only", async () => {
+    const pending = await Cross.findOne({ where: { status: { [Op.ne]: "approved" } } });
+    const { body } = await get(`/api/parts/${pending!.originalPartId}`);
+    const approved = await Cross.count({ where: { originalPartId: pending!.originalPartId, status: "approved" } });
+    expect(body.crosses).toHaveLength(approved);
+    expect(body.crosses.map((c: { id: number }) => c.id)).not.toContain(pending!.id);
+  });
+
+  it("answers a malformed id with 400 and a missing one with 404", async () => {
+    expect((await get("/api/parts/abc")).status).toBe(400);
+    expect((await get("/api/parts/-3")).status).toBe(400);
+    expect((await get("/api/parts/99999999")).status).toBe(404);
+  });
+});
+
+describe("measured-size search in the catalogue", () => {
+  it("returns the factory parts whose documented size matches a measured bearing", async () => {
+    const part = await OriginalPart.findOne({ where: { number: "CV-3003-A" } });
+    const { body } = await get(`/api/bearings/match?bore=${part!.innerMm}&od=${part!.outerMm}&unit=mm`);
+    expect(body.catalogueParts.map((p: { number: string }) => p.number)).toContain("CV-3003-A");
+  });
+
+  it("returns the factory parts whose documented size matches a measured seal", async () => {
+    const seal = await OriginalPart.findOne({ where: { category: "lip_seal" }, order: [["id", "ASC"]] });
+    const { body } = await get(`/api/seals/match?shaft=${seal!.innerMm}&bore=${seal!.outerMm}&unit=mm`);
+    expect(body.catalogueParts.map((p: { id: number }) => p.id)).toContain(seal!.id);
+  });
+});

@@ -1,0 +1,53 @@
+import { describe, expect, it } from "vitest";
+import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
+import { decodeBearing } from "@/lib/standards/bearings";
+import { decodeBelt } from "@/lib/standards/belts";
+
+const demo = buildDemoCatalogue();
+
+describe("the invented demo catalogue", () => {
+  it("is as large as the demo needs", () => {
+    expect(demo.makers.length).toBeGreaterThanOrEqual(3);
+    expect(demo.machines.length).toBeGreaterThanOrEqual(12);
+    expect(demo.parts.length).toBeGreaterThanOrEqual(600);
+    expect(demo.crosses.length).toBeGreaterThanOrEqual(1500);
+  });
+
+  it("covers every category of part", () => {
+    expect(new Set(demo.parts.map((p) => p.category))).toEqual(new Set(["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other"]));
+  });
+
+  it("has supersession chains up to four numbers long, and parts shared between machines", () => {
+    const next = new Map(demo.supersessions.map((s) => [s.oldKey, s.newKey]));
+    const length = (key: string): number => (next.has(key) ? 1 + length(next.get(key)!) : 1);
+    const longest = Math.max(...demo.parts.map((p) => length(p.key)));
+    expect(longest).toBe(4);
+    const machinesPerPart = new Map<string, Set<string>>();
+    for (const u of demo.usages) machinesPerPart.set(u.partKey, (machinesPerPart.get(u.partKey) ?? new Set()).add(u.machineKey));
+    expect([...machinesPerPart.values()].filter((s) => s.size > 1).length).toBeGreaterThan(20);
+  });
+
+  it("gives every factory number once per maker, and every part a use", () => {
+    expect(new Set(demo.parts.map((p) => `${p.makerKey}|${p.number}`)).size).toBe(demo.parts.length);
+    const used = new Set(demo.usages.map((u) => u.partKey));
+    expect(demo.parts.every((p) => used.has(p.key))).toBe(true);
+  });
+
+  it("records bearing standard parts with exactly the engine's dimensions", () => {
+    for (const s of demo.standardParts.filter((x) => x.kind === "bearing")) {
+      const engine = decodeBearing(s.designation);
+      expect([s.innerMm, s.outerMm, s.widthMm]).toEqual([engine.boreMm, engine.outsideDiameterMm, engine.widthMm]);
+    }
+  });
+
+  it("names only belts the engine can read", () => {
+    for (const s of demo.standardParts.filter((x) => x.kind === "v_belt")) expect(() => decodeBelt(s.designation)).not.toThrow();
+  });
+
+  it("documents the sizes of every bearing and lip seal", () => {
+    for (const p of demo.parts.filter((x) => x.category === "bearing" || x.category === "lip_seal")) {
+      expect(p.innerMm).toBeGreaterThan(0);
+      expect(p.outerMm).toBeGreaterThan(p.innerMm!);
+    }
+  });
+});
