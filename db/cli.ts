@@ -2,13 +2,15 @@ import { sequelize } from "@/db";
 import { createMigrator } from "@/db/migrator";
 import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
+import { seedLargeCatalogue } from "@/db/seeders/large";
 
 const usage = `Usage: tsx db/cli.ts <command>
   migrate          apply every pending migration
   migrate:down     revert the latest migration (--all: every one)
   migrate:status   list applied and pending migrations
   seed             load the demo data (refused in production)
-  seed:if-empty    load the demo data only into an empty database`;
+  seed:if-empty    load the demo data only into an empty database
+  seed:large       load a synthetic catalogue for benchmarks (--parts N, default 250000)`;
 
 async function main(command: string | undefined, flags: string[]): Promise<void> {
   const log = (message: string) => console.log(`[db] ${message}`);
@@ -34,6 +36,13 @@ async function main(command: string | undefined, flags: string[]): Promise<void>
       if (await isCatalogueEmpty()) await seedDemoCatalogue(log);
       else log("catalogue already has parts; demo catalogue skipped");
       break;
+    case "seed:large": {
+      const at = flags.indexOf("--parts");
+      const parts = at >= 0 ? Number(flags[at + 1]) : 250_000;
+      if (!Number.isInteger(parts) || parts < 1 || parts > 5_000_000) throw new Error("--parts takes a whole number from 1 to 5000000.");
+      await seedLargeCatalogue(parts, log);
+      break;
+    }
     default:
       console.error(usage);
       process.exitCode = 2;

@@ -63,6 +63,8 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.addIndex("original_parts", ["maker_id", "number_normalized"], { unique: true, ...t });
     await qi.addIndex("original_parts", ["number_normalized"], t);
     await qi.addIndex("original_parts", ["number_key"], t);
+    // GIN for the similarity operator (%). GiST would serve nearest-neighbour ordering too, but measured ten times
+    // slower on short part numbers, which share many trigrams (docs/performance.md).
     await qi.sequelize.query("CREATE INDEX original_parts_number_key_trgm ON original_parts USING gin (number_key gin_trgm_ops)", t);
     // Measured-size search: a category and two diameters within a tolerance.
     await qi.addIndex("original_parts", ["category", "inner_mm", "outer_mm"], t);

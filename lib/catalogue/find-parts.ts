@@ -73,21 +73,19 @@ export async function findPartsByNumber(query: string, limit: number): Promise<L
     found.set(row.id, { row, matchedBy, score: matchedBy === "exact" ? 1 : matchedBy === "normalised" ? 0.98 : 0.9 });
   }
 
-  if (found.size < limit && keys[keys.length - 1].length >= 3) {
+  // Similar numbers only when nothing matched outright: a restorer with an exact hit has found the part.
+  if (found.size === 0 && keys[keys.length - 1].length >= 3) {
     const key = keys[keys.length - 1];
-    // A low similarity threshold for this query only: short numbers with a typo share few trigrams.
-    const similar = await sequelize.transaction(async (transaction) => {
-      await sequelize.query("SET LOCAL pg_trgm.similarity_threshold = 0.25", { transaction });
+    // A similarity threshold for this query only: short numbers with a typo share few trigrams.
+    const nearest = await sequelize.transaction(async (transaction) => {
+      await sequelize.query("SET LOCAL pg_trgm.similarity_threshold = 0.3", { transaction });
       return sequelize.query<PartRow>(
         `SELECT ${COLUMNS} FROM original_parts p JOIN makers m ON m.id = p.maker_id
          WHERE p.number_key % :key ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
         { replacements: { key }, type: QueryTypes.SELECT, transaction },
       );
     });
-    const fuse = new Fuse(
-      similar.filter((row) => !found.has(row.id)),
-      { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true },
-    );
+    const fuse = new Fuse(nearest, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
     for (const hit of fuse.search(key)) {
       found.set(hit.item.id, { row: hit.item, matchedBy: "similar", score: Math.round((1 - (hit.score ?? 1)) * 0.85 * 1000) / 1000 });
     }
