@@ -20,7 +20,7 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
     accessorKey: "number",
     header: "Factory number",
     cell: ({ row }) => (
-      <Link href={`/parts/${row.original.partId}`} className="num font-bold">
+      <Link href={`/parts/${row.original.partId}`} className="num whitespace-nowrap font-bold">
         {row.original.number}
       </Link>
     ),
