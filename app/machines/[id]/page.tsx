@@ -1,21 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { MachinePartsTable } from "@/components/machines/machine-parts-table";
 import { getMachine, type MachineDetail } from "@/lib/catalogue/browse";
-import { AppError } from "@/lib/errors";
-import { partIdParam } from "@/lib/validation/catalogue";
+import { loadByIdOr404 } from "@/lib/http/load-or-404";
 
-async function load(idText: string): Promise<MachineDetail> {
-  const parsed = partIdParam.safeParse({ id: idText });
-  if (!parsed.success) notFound();
-  try {
-    return await getMachine(parsed.data.id);
-  } catch (error) {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  }
-}
+const load = (idText: string): Promise<MachineDetail> => loadByIdOr404(idText, getMachine);
 
 export async function generateMetadata({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> {
   const machine = await load((await params).id);

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { Cautions } from "@/components/measure/cautions";
 import { BearingDrawing } from "@/components/measure/bearing-drawing";
 import { BeltDrawing } from "@/components/measure/belt-drawing";
@@ -9,19 +8,9 @@ import { CrossCard } from "@/components/parts/cross-card";
 import { Notice } from "@/components/ui/notice";
 import { getPart, type PartDetail } from "@/lib/catalogue/get-part";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
-import { AppError } from "@/lib/errors";
-import { partIdParam } from "@/lib/validation/catalogue";
+import { loadByIdOr404 } from "@/lib/http/load-or-404";
 
-async function load(idText: string): Promise<PartDetail> {
-  const parsed = partIdParam.safeParse({ id: idText });
-  if (!parsed.success) notFound();
-  try {
-    return await getPart(parsed.data.id);
-  } catch (error) {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  }
-}
+const load = (idText: string): Promise<PartDetail> => loadByIdOr404(idText, getPart);
 
 export async function generateMetadata({ params }: { params: Promise<{ id: string }> }): Promise<Metadata> {
   const part = await load((await params).id);
