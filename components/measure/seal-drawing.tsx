@@ -5,7 +5,7 @@ export type SealDimension = "shaft" | "bore" | "width" | "sealOd" | null;
 /** A lip seal in its housing on the shaft, cut through the axis (upper half): what to measure, and where. */
 export function SealDrawing({ active }: { active: SealDimension }) {
   return (
-    <svg viewBox="0 0 330 270" role="img" aria-labelledby="seal-drawing-title" className="h-auto w-full max-w-sm">
+    <svg viewBox="0 0 380 270" role="img" aria-labelledby="seal-drawing-title" className="h-auto w-full max-w-sm">
       <title id="seal-drawing-title">Cross-section of a lip seal: shaft diameter, housing bore and width</title>
       <ArrowDefs />
       {/* housing */}
