@@ -10,6 +10,13 @@ export function createSequelize(databaseUrl: string): Sequelize {
     logging: false,
     pool: { max: 10, min: 0, idle: 10_000 },
     define: { underscored: true },
+    hooks: {
+      // Look-up's similar-number search uses pg_trgm's % operator; its threshold is set once per pooled connection
+      // rather than in a transaction around every search.
+      afterConnect: async (connection) => {
+        await (connection as pg.Client).query("SET pg_trgm.similarity_threshold = 0.3");
+      },
+    },
   });
 }
 

@@ -3,7 +3,7 @@ import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
 import type { PartCategory } from "@/lib/catalogue/kinds";
 import { lookAlikeKey, normaliseNumber, stripPrefix } from "@/lib/catalogue/normalise";
-import { latestNumbers } from "@/lib/catalogue/supersessions";
+import { latestNumbersAndCrossCounts } from "@/lib/catalogue/supersessions";
 
 export type MatchedBy = "exact" | "normalised" | "misread" | "similar";
 
@@ -76,15 +76,12 @@ export async function findPartsByNumber(query: string, limit: number): Promise<L
   // Similar numbers only when nothing matched outright: a restorer with an exact hit has found the part.
   if (found.size === 0 && keys[keys.length - 1].length >= 3) {
     const key = keys[keys.length - 1];
-    // A similarity threshold for this query only: short numbers with a typo share few trigrams.
-    const nearest = await sequelize.transaction(async (transaction) => {
-      await sequelize.query("SET LOCAL pg_trgm.similarity_threshold = 0.3", { transaction });
-      return sequelize.query<PartRow>(
-        `SELECT ${COLUMNS} FROM original_parts p JOIN makers m ON m.id = p.maker_id
-         WHERE p.number_key % :key ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
-        { replacements: { key }, type: QueryTypes.SELECT, transaction },
-      );
-    });
+    // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
+    const nearest = await sequelize.query<PartRow>(
+      `SELECT ${COLUMNS} FROM original_parts p JOIN makers m ON m.id = p.maker_id
+       WHERE p.number_key % :key ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
+      { replacements: { key }, type: QueryTypes.SELECT },
+    );
     const fuse = new Fuse(nearest, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
     for (const hit of fuse.search(key)) {
       found.set(hit.item.id, { row: hit.item, matchedBy: "similar", score: Math.round((1 - (hit.score ?? 1)) * 0.85 * 1000) / 1000 });
@@ -94,7 +91,7 @@ export async function findPartsByNumber(query: string, limit: number): Promise<L
   const ranked = [...found.values()].sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number)).slice(0, limit);
   if (ranked.length === 0) return [];
   const ids = ranked.map((r) => r.row.id);
-  const [latest, counts] = await Promise.all([latestNumbers(ids), approvedCrossCounts(ids)]);
+  const { latest, counts } = await latestNumbersAndCrossCounts(ids);
   return ranked.map(({ row, matchedBy, score }) => ({
     id: row.id,
     maker: row.maker,
@@ -109,10 +106,3 @@ export async function findPartsByNumber(query: string, limit: number): Promise<L
   }));
 }
 
-async function approvedCrossCounts(ids: number[]): Promise<Map<number, number>> {
-  const rows = await sequelize.query<{ id: number; count: string }>(
-    "SELECT original_part_id AS id, count(*) AS count FROM crosses WHERE status = 'approved' AND original_part_id IN (:ids) GROUP BY original_part_id",
-    { replacements: { ids }, type: QueryTypes.SELECT },
-  );
-  return new Map(rows.map((r) => [r.id, Number(r.count)]));
-}

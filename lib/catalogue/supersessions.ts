@@ -4,25 +4,33 @@ import { resolveChain, type ChainResult, type SupersessionEdge } from "@/lib/cat
 import type { SupersessionKind } from "@/lib/catalogue/kinds";
 
 /**
- * The latest number each part has been superseded by, for many parts in one query. The recursive walk keeps the
- * path it has taken and will not revisit a part, so a loop in the records ends it.
+ * For many parts in one round trip: the latest number each has been superseded by, and its count of approved
+ * crosses. The recursive walk keeps the path it has taken and will not revisit a part, so a loop in the records ends it.
  */
-export async function latestNumbers(ids: number[]): Promise<Map<number, string>> {
-  if (ids.length === 0) return new Map();
-  const rows = await sequelize.query<{ start_id: number; number: string }>(
+export async function latestNumbersAndCrossCounts(ids: number[]): Promise<{ latest: Map<number, string>; counts: Map<number, number> }> {
+  if (ids.length === 0) return { latest: new Map(), counts: new Map() };
+  const rows = await sequelize.query<{ start_id: number; number: string; crosses: string }>(
     `WITH RECURSIVE walk(start_id, part_id, depth, path) AS (
        SELECT id, id, 0, ARRAY[id] FROM original_parts WHERE id IN (:ids)
        UNION ALL
        SELECT w.start_id, s.new_part_id, w.depth + 1, w.path || s.new_part_id
        FROM walk w JOIN supersessions s ON s.old_part_id = w.part_id
        WHERE NOT s.new_part_id = ANY(w.path) AND w.depth < 25
+     ),
+     latest AS (
+       SELECT DISTINCT ON (w.start_id) w.start_id, p.number
+       FROM walk w JOIN original_parts p ON p.id = w.part_id
+       ORDER BY w.start_id, w.depth DESC, w.part_id
      )
-     SELECT DISTINCT ON (w.start_id) w.start_id, p.number
-     FROM walk w JOIN original_parts p ON p.id = w.part_id
-     ORDER BY w.start_id, w.depth DESC, w.part_id`,
+     SELECT l.start_id, l.number,
+            (SELECT count(*) FROM crosses c WHERE c.original_part_id = l.start_id AND c.status = 'approved') AS crosses
+     FROM latest l`,
     { replacements: { ids }, type: QueryTypes.SELECT },
   );
-  return new Map(rows.map((r) => [r.start_id, r.number]));
+  return {
+    latest: new Map(rows.map((r) => [r.start_id, r.number])),
+    counts: new Map(rows.map((r) => [r.start_id, Number(r.crosses)])),
+  };
 }
 
 /** Every supersession record connected to a part, either way, as far as the chain goes (loop-safe). */
