@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { SESSION_COOKIE } from "@/lib/auth/cookie";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
-const SESSION_COOKIE = "understudy_session";
 
 /** The origin a mutating request claims to come from, from Origin or else Referer. */
 function requestSource(request: NextRequest): string | null {

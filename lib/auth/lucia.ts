@@ -1,9 +1,8 @@
 import { Lucia, TimeSpan } from "lucia";
 import { sequelizeAdapter } from "@/lib/auth/adapter";
+import { SESSION_COOKIE } from "@/lib/auth/cookie";
 import type { Role } from "@/lib/auth/roles";
 import { isProduction } from "@/lib/env";
-
-export const SESSION_COOKIE = "understudy_session";
 
 export const lucia = new Lucia(sequelizeAdapter, {
   sessionExpiresIn: new TimeSpan(30, "d"),

@@ -1,10 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
-import { CATEGORY_NAMES, type Fit, type PartCategory, type StandardKind, type SupersessionKind } from "@/lib/catalogue/kinds";
+import { CATEGORY_NAMES, type CautionKind, type Fit, type PartCategory, type StandardKind, type SupersessionKind } from "@/lib/catalogue/kinds";
 import { loadChain } from "@/lib/catalogue/supersessions";
 import { AppError } from "@/lib/errors";
-
-export type CautionKind = "bearings" | "belts" | "coolant" | "seals";
 
 export interface ChainLink {
   id: number;

@@ -20,6 +20,9 @@ export type SupersessionKind = (typeof SUPERSESSION_KINDS)[number];
 export const MACHINE_KINDS = ["tractor", "crawler", "engine"] as const;
 export type MachineKind = (typeof MACHINE_KINDS)[number];
 
+/** The kinds of work that carry a caution on screen. */
+export type CautionKind = "bearings" | "belts" | "coolant" | "seals";
+
 export const CATEGORY_NAMES: Record<PartCategory, string> = {
   bearing: "Ball bearing",
   lip_seal: "Lip seal",

@@ -69,10 +69,6 @@ export const nominalQuery = z.object({
   surface: z.enum(SURFACES as [string, ...string[]], { error: `Choose one of: ${SURFACES.join(", ")}.` }).default("none"),
 });
 
-export function queryOf(request: Request): Record<string, string> {
-  return Object.fromEntries(new URL(request.url).searchParams);
-}
-
 /** Runs engine code on a field's input; the engine's refusal becomes a 400 naming that field. */
 export function forField<T>(field: string, run: () => T): T {
   try {

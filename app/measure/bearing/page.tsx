@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { BearingCalculator } from "@/components/measure/bearing-calculator";
-import { Cautions } from "@/components/measure/cautions";
+import { Cautions } from "@/components/safety/cautions";
 
 export const metadata: Metadata = { title: "Measure a ball bearing" };
 

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { BeltCalculator } from "@/components/measure/belt-calculator";
-import { Cautions } from "@/components/measure/cautions";
+import { Cautions } from "@/components/safety/cautions";
 import { BELT_MEASURING_NOTES } from "@/lib/standards/belts";
 
 export const metadata: Metadata = { title: "Measure a V-belt" };

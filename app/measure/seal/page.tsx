@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { Cautions } from "@/components/measure/cautions";
+import { Cautions } from "@/components/safety/cautions";
 import { SealCalculator } from "@/components/measure/seal-calculator";
 
 export const metadata: Metadata = { title: "Measure a lip seal" };

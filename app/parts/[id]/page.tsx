@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { Cautions } from "@/components/measure/cautions";
+import { Cautions } from "@/components/safety/cautions";
 import { BearingDrawing } from "@/components/measure/bearing-drawing";
 import { BeltDrawing } from "@/components/measure/belt-drawing";
 import { SealDrawing } from "@/components/measure/seal-drawing";

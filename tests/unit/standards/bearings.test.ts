@@ -110,6 +110,7 @@ describe("decoding a designation", () => {
 
 describe("matching a measured bearing", () => {
   it("finds 6205 first for 25.02 × 51.98 × 15.0 mm", () => {
+    // 6205 is 25 × 52 × 15 mm: DIN 625-1 as tabulated in BOLTS data/bearings.blt.
     const { candidates, warnings } = matchBearing({ boreMm: 25.02, outsideDiameterMm: 51.98, widthMm: 15, toleranceMm: 0.1, unit: "mm" });
     expect(candidates[0].designation).toBe("6205");
     expect(candidates[0].deviations.map((d) => d.name)).toEqual(["bore", "od", "width"]);
@@ -117,6 +118,7 @@ describe("matching a measured bearing", () => {
   });
 
   it("finds the inch R16 for 1 × 2 × 3/8 in, and answers in inches", () => {
+    // R16: 1 × 2 × 3/8 in (ABMA inch series, from memory; the 16/16 in bore follows the numbering rule).
     const { candidates } = matchBearing({ boreMm: 25.4, outsideDiameterMm: 50.8, widthMm: 9.525, toleranceMm: 0.1, unit: "in" });
     expect(candidates[0]).toMatchObject({ designation: "R16", system: "inch" });
     expect(candidates[0].deviations[0].nominal).toBeCloseTo(1, 4);
@@ -128,6 +130,7 @@ describe("matching a measured bearing", () => {
   });
 
   it("tells apart 6206 (30 mm) from an inch bearing near it, and says same size is not the same part", () => {
+    // 6206 is 30 × 62 × 16 mm (DIN 625-1, BOLTS); NU 206 shares dimension series 02 (ISO 15 dimension plan).
     const { candidates } = matchBearing({ boreMm: 30, outsideDiameterMm: 62, widthMm: 16, toleranceMm: 0.1, unit: "mm" });
     expect(candidates[0].designation).toBe("6206");
     expect(candidates[0].warnings.join(" ")).toMatch(/Same size is not the same part/);

@@ -45,11 +45,13 @@ describe("press fit of a seal in its housing", () => {
 
 describe("matching a measured seal", () => {
   it("finds 1-1/4 × 2 × 3/8 in for an inch shaft worn a little small", () => {
+    // An inch size commonly stocked (common practice, no published source); a worn shaft reads small.
     const { candidates } = matchSeal({ shaftMm: 1.248 * 25.4, boreMm: 2.0 * 25.4, widthMm: 0.375 * 25.4, toleranceMm: 0.1016, unit: "in" });
     expect(candidates[0]).toMatchObject({ system: "inch", size: "1-1/4 × 2 × 3/8 in" });
   });
 
   it("finds 35 × 52 × 8 mm for a metric housing", () => {
+    // 35 × 52 × 8 mm: an ISO 6194-1 nominal size (from memory of the standard's table).
     const { candidates } = matchSeal({ shaftMm: 34.97, boreMm: 52.02, widthMm: 8, toleranceMm: 0.1, unit: "mm" });
     expect(candidates[0].size).toBe("35 × 52 × 8 mm");
   });

@@ -1,6 +1,7 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { decodeBearing } from "@/lib/standards/bearings";
-import { bearingDecodeQuery, forField, queryOf } from "@/lib/validation/standards";
+import { bearingDecodeQuery, forField } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

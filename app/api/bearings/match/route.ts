@@ -1,7 +1,8 @@
 import { findPartsBySize } from "@/lib/catalogue/find-by-size";
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { matchBearing } from "@/lib/standards/bearings";
-import { bearingMatchQuery, queryOf, readOptionalSize, readSize, readTolerance } from "@/lib/validation/standards";
+import { bearingMatchQuery, readOptionalSize, readSize, readTolerance } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

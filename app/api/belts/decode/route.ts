@@ -1,6 +1,7 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { decodeBelt } from "@/lib/standards/belts";
-import { beltDecodeQuery, forField, queryOf } from "@/lib/validation/standards";
+import { beltDecodeQuery, forField } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

@@ -1,8 +1,9 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { findSection, standardLengthsForPitch } from "@/lib/standards/belts";
 import { adjustablePulleyRange, solveDrive } from "@/lib/standards/drive";
 import { fromMm, toMm } from "@/lib/standards/units";
-import { driveQuery, forField, queryOf, readOptionalSize, readSize } from "@/lib/validation/standards";
+import { driveQuery, forField, readOptionalSize, readSize } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

@@ -1,6 +1,7 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { BELT_MEASURING_NOTES, identifySection } from "@/lib/standards/belts";
-import { beltIdentifyQuery, queryOf, readOptionalSize, readSize } from "@/lib/validation/standards";
+import { beltIdentifyQuery, readOptionalSize, readSize } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

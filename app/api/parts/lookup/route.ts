@@ -1,8 +1,8 @@
 import { findPartsByNumber } from "@/lib/catalogue/find-parts";
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { lookupQuery } from "@/lib/validation/catalogue";
 import { parseWith } from "@/lib/validation/parse";
-import { queryOf } from "@/lib/validation/standards";
 
 export const runtime = "nodejs";
 

@@ -1,7 +1,8 @@
 import { findPartsBySize } from "@/lib/catalogue/find-by-size";
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { checkShaft, matchSeal } from "@/lib/standards/seals";
-import { queryOf, readOptionalSize, readSize, readTolerance, sealMatchQuery } from "@/lib/validation/standards";
+import { readOptionalSize, readSize, readTolerance, sealMatchQuery } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

@@ -1,6 +1,7 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { checkPressFit } from "@/lib/standards/seals";
-import { pressFitQuery, queryOf, readSize } from "@/lib/validation/standards";
+import { pressFitQuery, readSize } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

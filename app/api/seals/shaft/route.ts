@@ -1,6 +1,7 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { checkShaft } from "@/lib/standards/seals";
-import { queryOf, readSize, shaftCheckQuery } from "@/lib/validation/standards";
+import { readSize, shaftCheckQuery } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

@@ -1,6 +1,7 @@
 import { handle } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
 import { nearMissFor, nominalCandidates, type Surface } from "@/lib/standards/nominal";
-import { nominalQuery, queryOf, readSize } from "@/lib/validation/standards";
+import { nominalQuery, readSize } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";

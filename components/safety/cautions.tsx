@@ -1,4 +1,4 @@
-export type CautionKind = "bearings" | "belts" | "coolant" | "seals";
+import type { CautionKind } from "@/lib/catalogue/kinds";
 
 const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
   bearings: {
