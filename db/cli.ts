@@ -3,6 +3,7 @@ import { createMigrator } from "@/db/migrator";
 import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
 import { seedLargeCatalogue } from "@/db/seeders/large";
+import { sendProposalDigest } from "@/lib/community/digest";
 
 const usage = `Usage: tsx db/cli.ts <command>
   migrate          apply every pending migration
@@ -10,7 +11,8 @@ const usage = `Usage: tsx db/cli.ts <command>
   migrate:status   list applied and pending migrations
   seed             load the demo data (refused in production)
   seed:if-empty    load the demo data only into an empty database
-  seed:large       load a synthetic catalogue for benchmarks (--parts N, default 250000)`;
+  seed:large       load a synthetic catalogue for benchmarks (--parts N, default 250000)
+  digest           mail reviewers one summary of the proposals that arrived since the last one`;
 
 async function main(command: string | undefined, flags: string[]): Promise<void> {
   const log = (message: string) => console.log(`[db] ${message}`);
@@ -41,6 +43,12 @@ async function main(command: string | undefined, flags: string[]): Promise<void>
       const parts = at >= 0 ? Number(flags[at + 1]) : 250_000;
       if (!Number.isInteger(parts) || parts < 1 || parts > 5_000_000) throw new Error("--parts takes a whole number from 1 to 5000000.");
       await seedLargeCatalogue(parts, log);
+      break;
+    }
+    case "digest": {
+      const result = await sendProposalDigest();
+      log(result.proposals === 0 ? "no new proposals; nothing sent" : `${result.proposals} new proposals; summary sent to ${result.sent} of ${result.recipients} reviewers`);
+      if (result.recipients > 0 && result.sent === 0) process.exitCode = 1;
       break;
     }
     default:

@@ -3,6 +3,7 @@ import { AccountToken } from "@/db/models/account-token";
 import { Session } from "@/db/models/session";
 import { SignInFailure } from "@/db/models/sign-in-failure";
 import { User } from "@/db/models/user";
+import { AuditEvent, Submission, SubmissionPhoto } from "@/db/models/community";
 import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, StandardPart, Supersession } from "@/db/models/catalogue";
 
 // Associations live here only, once, after every model is defined. Aliases are spelled out (and every model
@@ -26,5 +27,14 @@ Cross.belongsTo(StandardPart, { foreignKey: "standardPartId", as: "standardPart"
 Cross.hasMany(Confirmation, { foreignKey: "crossId", as: "confirmations" });
 Confirmation.belongsTo(Cross, { foreignKey: "crossId", as: "cross" });
 
+User.hasMany(Submission, { foreignKey: "userId", as: "submissions" });
+Submission.belongsTo(User, { foreignKey: "userId", as: "user" });
+Submission.belongsTo(OriginalPart, { foreignKey: "originalPartId", as: "originalPart" });
+Submission.belongsTo(StandardPart, { foreignKey: "standardPartId", as: "standardPart" });
+Submission.hasMany(SubmissionPhoto, { foreignKey: "submissionId", as: "photos" });
+SubmissionPhoto.belongsTo(Submission, { foreignKey: "submissionId", as: "submission" });
+Submission.hasMany(Confirmation, { foreignKey: "submissionId", as: "confirmations" });
+
 export { sequelize, AccountToken, Session, SignInFailure, User };
+export { AuditEvent, Submission, SubmissionPhoto };
 export { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, StandardPart, Supersession };

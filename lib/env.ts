@@ -37,6 +37,10 @@ const schema = z.object({
   AUTH_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   AUTH_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
   AUTH_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+
+  // Per member, per rolling hour: proposals saved and photo uploads granted.
+  SUBMISSIONS_PER_HOUR: z.coerce.number().int().min(1).default(20),
+  UPLOADS_PER_HOUR: z.coerce.number().int().min(1).default(60),
 });
 
 export type Env = z.infer<typeof schema>;

@@ -1,8 +1,10 @@
 import * as accounts from "@/db/migrations/0001-accounts";
 import * as catalogue from "@/db/migrations/0002-catalogue";
+import * as community from "@/db/migrations/0003-community";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
   { name: "0001-accounts", ...accounts },
   { name: "0002-catalogue", ...catalogue },
+  { name: "0003-community", ...community },
 ];

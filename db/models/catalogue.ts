@@ -172,10 +172,11 @@ Cross.init(
 
 export class Confirmation extends Model<InferAttributes<Confirmation>, InferCreationAttributes<Confirmation>> {
   declare id: CreationOptional<number>;
-  declare crossId: number;
+  declare crossId: number | null;
+  declare submissionId: number | null;
   declare userId: string;
   declare note: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
-Confirmation.init({ id: id(), crossId: DataTypes.INTEGER, userId: DataTypes.STRING(40), note: DataTypes.TEXT, ...stamps }, { sequelize, modelName: "Confirmation", tableName: "confirmations" });
+Confirmation.init({ id: id(), crossId: DataTypes.INTEGER, submissionId: DataTypes.INTEGER, userId: DataTypes.STRING(40), note: DataTypes.TEXT, ...stamps }, { sequelize, modelName: "Confirmation", tableName: "confirmations" });

@@ -1,5 +1,7 @@
 import { Op } from "sequelize";
-import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Supersession, User } from "@/db";
+import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, Supersession, User } from "@/db";
+import type { Measurement } from "@/lib/community/kinds";
+import type { DemoStandardPart } from "@/fixtures/catalogue/build";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { searchForms } from "@/lib/catalogue/normalise";
 
@@ -37,8 +39,35 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
       t,
     );
     await Supersession.bulkCreate(demo.supersessions.map((s) => ({ oldPartId: partIds.get(s.oldKey)!, newPartId: partIds.get(s.newKey)!, kind: s.kind, note: s.note })), t);
+    // Pending crosses with a standard part are members' proposals waiting in the review queue: they are loaded as
+    // submissions by the club members, sent over the last few weeks, so the queue has work in it from the start.
+    const proposals = demo.crosses.filter((c) => c.status === "pending" && c.standardKey && confirmers.length > 0);
+    const crosses = demo.crosses.filter((c) => !proposals.includes(c));
+    const standardByKey = new Map(demo.standardParts.map((sp) => [sp.key, sp]));
+    const now = Date.now();
+    await Submission.bulkCreate(
+      proposals.map((c, i) => {
+        const sent = new Date(now - (proposals.length - i) * 4 * 3600_000 - 24 * 3600_000);
+        return {
+          userId: confirmers[i % confirmers.length].id,
+          status: "pending" as const,
+          originalPartId: partIds.get(c.partKey)!,
+          newPart: null,
+          standardPartId: standard.get(c.standardKey!)!,
+          newStandard: null,
+          fit: c.fit,
+          measurements: demoMeasurements(standardByKey.get(c.standardKey!)!, i),
+          notes: c.notes ?? "Fitted on our club's machine; running well since.",
+          checks: [],
+          digestSentAt: sent,
+          createdAt: sent,
+          updatedAt: sent,
+        };
+      }),
+      t,
+    );
     const crossRows = await Cross.bulkCreate(
-      demo.crosses.map((c) => ({
+      crosses.map((c) => ({
         originalPartId: partIds.get(c.partKey)!,
         standardPartId: c.standardKey ? standard.get(c.standardKey)! : null,
         repairMethod: c.repairMethod,
@@ -51,11 +80,23 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
       { ...t, returning: true },
     );
     await Confirmation.bulkCreate(
-      demo.crosses.flatMap((c, i) => confirmers.slice(0, c.confirmations).map((user) => ({ crossId: crossRows[i].id, userId: user.id, note: null }))),
+      crosses.flatMap((c, i) => confirmers.slice(0, c.confirmations).map((user) => ({ crossId: crossRows[i].id, userId: user.id, note: null }))),
       t,
     );
   });
-  log(`demo catalogue: ${demo.makers.length} makers, ${demo.machines.length} machines, ${demo.parts.length} parts, ${demo.crosses.length} crosses`);
+  const proposals = demo.crosses.filter((c) => c.status === "pending" && c.standardKey).length;
+  log(`demo catalogue: ${demo.makers.length} makers, ${demo.machines.length} machines, ${demo.parts.length} parts, ${demo.crosses.length - proposals} crosses, ${proposals} proposals to review`);
+}
+
+/** What a member would have measured on the worn part: near the standard sizes, a little off as worn parts are. */
+function demoMeasurements(sp: DemoStandardPart, i: number): Measurement[] {
+  const wear = [0.02, -0.03, 0.05, 0.01][i % 4];
+  const out: Measurement[] = [];
+  if (sp.innerMm) out.push({ dimension: "inner", value: Math.round((sp.innerMm - Math.abs(wear)) * 100) / 100, unit: "mm" });
+  if (sp.outerMm) out.push({ dimension: "outer", value: Math.round((sp.outerMm + wear) * 100) / 100, unit: "mm" });
+  if (sp.widthMm && sp.kind !== "v_belt") out.push({ dimension: "width", value: Math.round((sp.widthMm - Math.abs(wear)) * 100) / 100, unit: "mm" });
+  if (sp.lengthMm) out.push({ dimension: "length", value: Math.round(sp.lengthMm + 4), unit: "mm", label: "outside length, measured with a tape" });
+  return out;
 }
 
 export async function isCatalogueEmpty(): Promise<boolean> {

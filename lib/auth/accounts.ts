@@ -7,7 +7,7 @@ import type { Role } from "@/lib/auth/roles";
 import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "@/lib/auth/throttle";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
-import { sendMail } from "@/lib/mail/send";
+import { sendMail, trySend } from "@/lib/mail/send";
 import { accountExistsMail, resetPasswordMail, verifyEmailMail } from "@/lib/mail/templates";
 
 export interface AccountView {
@@ -24,16 +24,6 @@ export function toAccountView(user: User): AccountView {
 const link = (path: string, token: string) => `${env.APP_URL}${path}?token=${encodeURIComponent(token)}`;
 
 /** Mail is sent after the database work has committed; a mail failure is reported, never half-written. */
-async function trySend(send: () => Promise<void>): Promise<boolean> {
-  try {
-    await send();
-    return true;
-  } catch (error) {
-    console.error("[understudy] mail could not be sent", error);
-    return false;
-  }
-}
-
 export const SIGN_IN_REFUSED = "That e-mail and password do not match an account.";
 
 /**

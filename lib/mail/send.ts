@@ -31,3 +31,14 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
 export async function checkMail(): Promise<void> {
   await getTransporter().verify();
 }
+
+/** Sends, and reports instead of throwing: the change that caused the mail stands whether or not it went out. */
+export async function trySend(send: () => Promise<void>): Promise<boolean> {
+  try {
+    await send();
+    return true;
+  } catch (error) {
+    console.error("[understudy] mail could not be sent", error);
+    return false;
+  }
+}

@@ -18,7 +18,7 @@ function compose(to: string, letter: Letter): OutgoingMail {
   if (letter.action) textParts.push(`${letter.action.label}:\n${letter.action.url}`);
   textParts.push(...(letter.after ?? []), "— Understudy, the standard-part catalogue for old machines");
 
-  const p = (s: string) => `<p style="margin:0 0 14px">${escapeHtml(s)}</p>`;
+  const p = (s: string) => `<p style="margin:0 0 14px;white-space:pre-line">${escapeHtml(s)}</p>`;
   const button = letter.action
     ? `<p style="margin:20px 0"><a href="${escapeHtml(letter.action.url)}" style="background:#8a5d12;color:#fff;padding:12px 18px;border-radius:6px;text-decoration:none;font-weight:bold">${escapeHtml(letter.action.label)}</a></p>
        <p style="margin:0 0 14px;font-size:13px;color:#555">If the button does not work, copy this address into your browser:<br>${escapeHtml(letter.action.url)}</p>`
@@ -66,5 +66,64 @@ export function resetPasswordMail(to: string, url: string): OutgoingMail {
     paragraphs: ["You asked to set a new password for your Understudy account. The link works for one hour, once."],
     action: { label: "Set a new password", url },
     after: ["If you did not ask for this, ignore this message; your password stays as it is."],
+  });
+}
+
+export interface DecisionLetter {
+  outcome: "approved" | "rejected" | "changes_requested";
+  partNumber: string;
+  standard: string;
+  message: string;
+  url: string;
+}
+
+export function decisionMail(to: string, letter: DecisionLetter): OutgoingMail {
+  const what = `${letter.partNumber} → ${letter.standard}`;
+  const byOutcome = {
+    approved: {
+      subject: `Your cross is in the catalogue: ${what}`,
+      paragraphs: [`A moderator checked your proposal ${what} and it is now in the catalogue, where other restorers will find it.`, "Thank you for taking the time to write it up."],
+      label: "See your proposals",
+    },
+    rejected: {
+      subject: `Your proposal was not accepted: ${what}`,
+      paragraphs: [`A moderator checked your proposal ${what} and did not accept it.`],
+      label: "See your proposals",
+    },
+    changes_requested: {
+      subject: `Your proposal needs a change: ${what}`,
+      paragraphs: [`A moderator checked your proposal ${what} and sent it back to you. Change it and send it again; it keeps its place.`],
+      label: "Change the proposal",
+    },
+  }[letter.outcome];
+  const message = letter.message ? [`The moderator wrote: “${letter.message}”`] : [];
+  return compose(to, {
+    subject: byOutcome.subject,
+    greeting: "Hello,",
+    paragraphs: [...byOutcome.paragraphs, ...message],
+    action: { label: byOutcome.label, url: letter.url },
+    after: ["You get these messages because you proposed a cross. You can turn them off on your account page."],
+  });
+}
+
+export interface DigestItem {
+  id: number;
+  partNumber: string;
+  standard: string;
+  submittedAt: string;
+}
+
+export function digestMail(to: string, items: DigestItem[], queueUrl: string, waitingTotal: number): OutgoingMail {
+  const lines = items.slice(0, 25).map((i) => `#${i.id}  ${i.partNumber} → ${i.standard}  (sent ${i.submittedAt})`);
+  if (items.length > 25) lines.push(`… and ${items.length - 25} more.`);
+  return compose(to, {
+    subject: `${items.length} new ${items.length === 1 ? "proposal" : "proposals"} to review`,
+    greeting: "Hello,",
+    paragraphs: [
+      `Members sent ${items.length} new ${items.length === 1 ? "proposal" : "proposals"} since the last summary; ${waitingTotal} in all are waiting in the review queue.`,
+      lines.join("\n"),
+    ],
+    action: { label: "Open the review queue", url: queueUrl },
+    after: ["You get this summary because you review proposals. You can turn it off on your account page."],
   });
 }

@@ -26,7 +26,7 @@ interface Options {
 }
 
 /** A same-site JSON request, as the app's own pages send it (with an Origin header). */
-export function send(method: "post" | "patch" | "get", path: string, body?: unknown, options: Options = {}) {
+export function send(method: "post" | "patch" | "get" | "delete", path: string, body?: unknown, options: Options = {}) {
   let req = request(APP_URL)[method](path);
   if (options.origin !== null && method !== "get") req = req.set("Origin", options.origin ?? APP_URL);
   if (options.cookie) req = req.set("Cookie", options.cookie);

@@ -1,0 +1,17 @@
+import { User } from "@/db";
+import { recordAudit } from "@/lib/audit/record";
+import { requirePermission } from "@/lib/auth/session";
+import { handle, readJson } from "@/lib/http/handle";
+import { parseWith } from "@/lib/validation/parse";
+import { notificationsInput } from "@/lib/validation/submissions";
+
+export const runtime = "nodejs";
+
+/** The member's own settings: for now, whether Understudy may e-mail them about proposals. */
+export const PATCH = handle(async (request) => {
+  const user = await requirePermission("account:use");
+  const { notifyByEmail } = parseWith(notificationsInput, await readJson(request));
+  await User.update({ notifyByEmail }, { where: { id: user.id } });
+  await recordAudit({ actorId: user.id, action: "account.notifications", subjectType: "user", subjectId: user.id, after: { notifyByEmail } });
+  return Response.json({ notifyByEmail });
+});

@@ -1,0 +1,15 @@
+import { requirePermission } from "@/lib/auth/session";
+import { confirmCross } from "@/lib/community/submissions";
+import { handle, readJson } from "@/lib/http/handle";
+import { parseWith } from "@/lib/validation/parse";
+import { confirmationInput, idParam } from "@/lib/validation/submissions";
+
+export const runtime = "nodejs";
+
+/** "I fitted this too": once per member and cross. */
+export const POST = handle<{ params: Promise<{ id: string }> }>(async (request, { params }) => {
+  const user = await requirePermission("proposals:create");
+  const { id } = parseWith(idParam, await params);
+  const { note } = parseWith(confirmationInput, await readJson(request));
+  return Response.json(await confirmCross(user, id, note), { status: 201 });
+});

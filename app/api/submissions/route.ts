@@ -1,0 +1,28 @@
+import { requirePermission } from "@/lib/auth/session";
+import { createSubmission } from "@/lib/community/submissions";
+import { listMine, listQueue } from "@/lib/community/views";
+import { handle, readJson } from "@/lib/http/handle";
+import { queryOf } from "@/lib/http/query";
+import { parseWith } from "@/lib/validation/parse";
+import { submissionInput, submissionsQuery } from "@/lib/validation/submissions";
+
+export const runtime = "nodejs";
+
+export const POST = handle(async (request) => {
+  const user = await requirePermission("proposals:create");
+  const input = parseWith(submissionInput, await readJson(request));
+  const result = await createSubmission(user, input);
+  return Response.json(result, { status: result.outcome === "submitted" ? 201 : 200 });
+});
+
+/** `?mine=1`: the signed-in member's own proposals. Without it: the review queue, for reviewers. */
+export const GET = handle(async (request) => {
+  const query = parseWith(submissionsQuery, queryOf(request));
+  if (query.mine) {
+    const user = await requirePermission("proposals:create");
+    return Response.json({ submissions: await listMine(user.id) });
+  }
+  await requirePermission("proposals:review");
+  const { rows, total } = await listQueue({ status: query.status, category: query.category, makerId: query.maker, limit: query.limit });
+  return Response.json({ submissions: rows, total });
+});

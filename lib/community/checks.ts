@@ -1,0 +1,150 @@
+import { decodeBearing } from "@/lib/standards/bearings";
+import { decodeBelt } from "@/lib/standards/belts";
+import { StandardsInputError } from "@/lib/standards/errors";
+import { INCH_SEALS, METRIC_SEALS } from "@/lib/standards/seal-sizes";
+import { MM_PER_INCH, round, toMm } from "@/lib/standards/units";
+import type { StandardKind } from "@/lib/catalogue/kinds";
+import type { Measurement, NewStandardInput, ProposalCheck } from "@/lib/community/kinds";
+
+export interface StandardDims {
+  innerMm: number | null;
+  outerMm: number | null;
+  widthMm: number | null;
+  lengthMm: number | null;
+}
+
+export interface CheckedStandard extends StandardDims {
+  kind: StandardKind;
+  designation: string;
+  attributes: Record<string, unknown>;
+  checks: ProposalCheck[];
+}
+
+// How far an entered size may sit from the engine's before the two are said to disagree.
+const AGREE_MM = 0.05;
+
+const DIM_WORDS: Record<keyof StandardDims, string> = { innerMm: "bore", outerMm: "outside diameter", widthMm: "width", lengthMm: "length" };
+
+function compareEntered(designation: string, engine: Partial<StandardDims>, entered: Partial<StandardDims>, checks: ProposalCheck[]): void {
+  for (const key of Object.keys(DIM_WORDS) as Array<keyof StandardDims>) {
+    const e = engine[key];
+    const given = entered[key];
+    if (e == null || given == null) continue;
+    if (Math.abs(e - given) > AGREE_MM) {
+      checks.push({
+        level: "warning",
+        field: `standard.${key}`,
+        message: `${designation} has a ${DIM_WORDS[key]} of ${round(e, 2)} mm, but ${round(given, 2)} mm was entered. One of them is wrong.`,
+      });
+    }
+  }
+}
+
+const SEAL_SIZE = /(\d+(?:[.,]\d+)?)\s*[x×*]\s*(\d+(?:[.,]\d+)?)\s*[x×*]\s*(\d+(?:[.,]\d+)?)/i;
+
+/**
+ * Reads a proposed standard part through the standards engine: a bearing or belt designation gives its sizes, and
+ * sizes entered that contradict it are flagged; a seal's shaft × bore × width is read from its designation.
+ * Nothing here refuses a proposal: the checks are shown to the member and to the moderator who decides.
+ */
+export function checkStandard(input: NewStandardInput): CheckedStandard {
+  const entered: StandardDims = { innerMm: input.innerMm ?? null, outerMm: input.outerMm ?? null, widthMm: input.widthMm ?? null, lengthMm: input.lengthMm ?? null };
+  const checks: ProposalCheck[] = [];
+  const designation = input.designation.trim().replace(/\s+/g, " ");
+
+  if (input.kind === "bearing") {
+    try {
+      const decoded = decodeBearing(designation);
+      const engine = { innerMm: decoded.boreMm, outerMm: decoded.outsideDiameterMm, widthMm: decoded.widthMm };
+      checks.push({
+        level: "ok",
+        field: "standard.designation",
+        message: `${decoded.designation}: ${decoded.seriesName}, ${engine.innerMm} × ${engine.outerMm} × ${engine.widthMm} mm, ${decoded.closures.text}.`,
+      });
+      compareEntered(decoded.designation, engine, entered, checks);
+      return { kind: "bearing", designation: decoded.designation, ...engine, lengthMm: null, attributes: { closures: decoded.closures.text }, checks };
+    } catch (error) {
+      if (!(error instanceof StandardsInputError)) throw error;
+      checks.push({ level: "warning", field: "standard.designation", message: `${error.message} The sizes entered are kept as given.` });
+      return { kind: "bearing", designation, ...entered, attributes: {}, checks };
+    }
+  }
+
+  if (input.kind === "v_belt") {
+    try {
+      const belt = decodeBelt(designation);
+      const toMmLen = (v: number) => (belt.unit === "in" ? round(v * MM_PER_INCH, 1) : v);
+      const engine = { widthMm: belt.unit === "in" ? round(belt.topWidth * MM_PER_INCH, 2) : belt.topWidth, lengthMm: toMmLen(belt.pitchLength) };
+      checks.push({
+        level: "ok",
+        field: "standard.designation",
+        message: `${belt.designation}: section ${belt.section}, pitch length ${engine.lengthMm} mm, top width ${engine.widthMm} mm.`,
+      });
+      // A belt's length may be given as inside, pitch or outside; only a length that matches none of them disagrees.
+      const lengths = [belt.insideLength, belt.pitchLength, belt.outsideLength].map(toMmLen);
+      if (entered.lengthMm != null && !lengths.some((l) => Math.abs(l - entered.lengthMm!) <= 2)) {
+        checks.push({
+          level: "warning",
+          field: "standard.lengthMm",
+          message: `${belt.designation} is ${lengths[0]} mm inside, ${lengths[1]} mm pitch and ${lengths[2]} mm outside; ${entered.lengthMm} mm was entered. One of them is wrong.`,
+        });
+      }
+      compareEntered(belt.designation, { widthMm: engine.widthMm }, { widthMm: entered.widthMm }, checks);
+      return { kind: "v_belt", designation: belt.designation, innerMm: null, outerMm: null, ...engine, attributes: { section: belt.section }, checks };
+    } catch (error) {
+      if (!(error instanceof StandardsInputError)) throw error;
+      checks.push({ level: "warning", field: "standard.designation", message: `${error.message} The sizes entered are kept as given.` });
+      return { kind: "v_belt", designation, ...entered, attributes: {}, checks };
+    }
+  }
+
+  if (input.kind === "lip_seal") {
+    const m = SEAL_SIZE.exec(designation);
+    const dims = { ...entered };
+    if (m) {
+      const [shaft, bore, width] = [m[1], m[2], m[3]].map((v) => Number(v.replace(",", ".")));
+      const inch = /\bin\b|"|inch/i.test(designation) || (shaft < 10 && bore < 10 && width < 2);
+      const read = inch
+        ? { innerMm: toMm(shaft, "in"), outerMm: toMm(bore, "in"), widthMm: toMm(width, "in") }
+        : { innerMm: shaft, outerMm: bore, widthMm: width };
+      compareEntered(`${designation}`, read, entered, checks);
+      Object.assign(dims, read);
+      const listed = (inch ? INCH_SEALS.map(([a, b, c]) => [a * MM_PER_INCH, b * MM_PER_INCH, c * MM_PER_INCH]) : METRIC_SEALS).some(
+        ([a, b, c]) => Math.abs(a - read.innerMm) < 0.1 && Math.abs(b - read.outerMm) < 0.1 && Math.abs(c - read.widthMm) < 0.1,
+      );
+      checks.push(
+        listed
+          ? { level: "ok", field: "standard.designation", message: `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm is a listed standard seal size.` }
+          : { level: "warning", field: "standard.designation", message: `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm is not in our table of common seal sizes; check that it can be bought.` },
+      );
+    } else if (entered.innerMm == null || entered.outerMm == null || entered.widthMm == null) {
+      checks.push({ level: "warning", field: "standard.designation", message: "A lip seal is ordered by shaft × bore × width: write them in the designation (35 × 52 × 7) or enter the three sizes." });
+    }
+    return { kind: "lip_seal", designation, ...dims, attributes: {}, checks };
+  }
+
+  return { kind: input.kind, designation, ...entered, attributes: {}, checks };
+}
+
+export interface MeasurementDeviation {
+  dimension: Measurement["dimension"];
+  label: string;
+  measuredMm: number;
+  nominalMm: number;
+  deviationMm: number;
+}
+
+const FOR_DIMENSION = { inner: "innerMm", outer: "outerMm", width: "widthMm", length: "lengthMm" } as const;
+
+/** Each measured size beside the standard part's nominal one, in millimetres (measured minus nominal). */
+export function measurementDeviations(measurements: Measurement[], standard: StandardDims): MeasurementDeviation[] {
+  const out: MeasurementDeviation[] = [];
+  for (const m of measurements) {
+    if (m.dimension === "other") continue;
+    const nominal = standard[FOR_DIMENSION[m.dimension]];
+    if (nominal == null) continue;
+    const measuredMm = round(toMm(m.value, m.unit), 3);
+    out.push({ dimension: m.dimension, label: m.label || m.dimension, measuredMm, nominalMm: nominal, deviationMm: round(measuredMm - nominal, 3) });
+  }
+  return out;
+}

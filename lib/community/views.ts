@@ -1,0 +1,217 @@
+import { QueryTypes } from "sequelize";
+import { Maker, Machine, Assembly, OriginalPart, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
+import { hasPermission, type Role } from "@/lib/auth/roles";
+import { CATEGORY_NAMES, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
+import { measurementDeviations, type MeasurementDeviation, type StandardDims } from "@/lib/community/checks";
+import type { Measurement, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
+import { AppError } from "@/lib/errors";
+
+export interface SubmissionRow {
+  id: number;
+  status: SubmissionStatus;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+  partId: number | null;
+  partNumber: string;
+  maker: string;
+  category: PartCategory;
+  categoryName: string;
+  standard: string;
+  fit: Fit;
+  photos: number;
+  confirmations: number;
+  warnings: number;
+  moderatorMessage: string | null;
+  submitter: string;
+  crossId: number | null;
+}
+
+interface RawRow {
+  id: number; status: SubmissionStatus; version: number; created_at: Date; updated_at: Date; part_id: number | null; part_number: string; maker: string;
+  category: PartCategory; standard: string; fit: Fit; photos: string; confirmations: string; warnings: number; moderator_message: string | null; submitter: string; cross_id: number | null;
+}
+
+// A proposal names its part either by id or, for a part new to the catalogue, in new_part; likewise its standard.
+const SELECT_ROWS = `
+  SELECT s.id, s.status, s.version, s.created_at, s.updated_at, s.original_part_id AS part_id,
+         COALESCE(p.number, s.new_part->>'number') AS part_number,
+         mk.name AS maker,
+         COALESCE(p.category::text, s.new_part->>'category') AS category,
+         COALESCE(sp.designation, s.new_standard->>'designation') AS standard,
+         s.fit, s.moderator_message, u.email AS submitter, s.cross_id,
+         (SELECT count(*) FROM submission_photos ph WHERE ph.submission_id = s.id) AS photos,
+         (SELECT count(*) FROM confirmations c WHERE c.submission_id = s.id) AS confirmations,
+         (SELECT count(*) FROM jsonb_array_elements(s.checks) e WHERE e->>'level' = 'warning')::int AS warnings
+  FROM submissions s
+  JOIN users u ON u.id = s.user_id
+  LEFT JOIN original_parts p ON p.id = s.original_part_id
+  LEFT JOIN standard_parts sp ON sp.id = s.standard_part_id
+  JOIN makers mk ON mk.id = COALESCE(p.maker_id, (s.new_part->>'makerId')::int)`;
+
+function toRow(r: RawRow): SubmissionRow {
+  return {
+    id: r.id,
+    status: r.status,
+    version: r.version,
+    createdAt: r.created_at.toISOString(),
+    updatedAt: r.updated_at.toISOString(),
+    partId: r.part_id,
+    partNumber: r.part_number,
+    maker: r.maker,
+    category: r.category,
+    categoryName: CATEGORY_NAMES[r.category] ?? r.category,
+    standard: r.standard,
+    fit: r.fit,
+    photos: Number(r.photos),
+    confirmations: Number(r.confirmations),
+    warnings: r.warnings,
+    moderatorMessage: r.moderator_message,
+    submitter: r.submitter,
+    crossId: r.cross_id,
+  };
+}
+
+export async function listMine(userId: string): Promise<SubmissionRow[]> {
+  const rows = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE s.user_id = :userId ORDER BY s.updated_at DESC LIMIT 500`, { replacements: { userId }, type: QueryTypes.SELECT });
+  return rows.map(toRow);
+}
+
+export interface QueueFilters {
+  status?: SubmissionStatus;
+  category?: PartCategory;
+  makerId?: number;
+  limit: number;
+}
+
+/** The review queue: oldest first, so nobody's proposal waits for ever behind newer ones. */
+export async function listQueue(filters: QueueFilters): Promise<{ rows: SubmissionRow[]; total: number }> {
+  const where = ["s.status = :status"];
+  if (filters.category) where.push("COALESCE(p.category::text, s.new_part->>'category') = :category");
+  if (filters.makerId) where.push("mk.id = :makerId");
+  const replacements = { status: filters.status ?? "pending", category: filters.category ?? null, makerId: filters.makerId ?? null, limit: filters.limit };
+  const rows = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE ${where.join(" AND ")} ORDER BY s.created_at, s.id LIMIT :limit`, { replacements, type: QueryTypes.SELECT });
+  const [{ total }] = await sequelize.query<{ total: string }>(
+    `SELECT count(*) AS total FROM submissions s LEFT JOIN original_parts p ON p.id = s.original_part_id
+     JOIN makers mk ON mk.id = COALESCE(p.maker_id, (s.new_part->>'makerId')::int) WHERE ${where.join(" AND ")}`,
+    { replacements, type: QueryTypes.SELECT },
+  );
+  return { rows: rows.map(toRow), total: Number(total) };
+}
+
+export interface StandardView extends StandardDims {
+  id: number | null;
+  kind: StandardKind;
+  designation: string;
+  isNew: boolean;
+}
+
+export interface SubmissionDetail extends SubmissionRow {
+  mine: boolean;
+  part: {
+    id: number | null;
+    isNew: boolean;
+    number: string;
+    maker: string;
+    makerId: number;
+    description: string;
+    category: PartCategory;
+    machine: string | null;
+    machineId: number | null;
+    assembly: string | null;
+    assemblyId: number | null;
+    dims: StandardDims;
+  };
+  standardPart: StandardView;
+  measurements: Measurement[];
+  deviations: MeasurementDeviation[];
+  notes: string | null;
+  checks: ProposalCheck[];
+  photoList: Array<{ id: number; url: string; fileName: string | null }>;
+  existingCrosses: Array<{ id: number; designation: string | null; repairMethod: string | null; fit: Fit; status: string; origin: string; confirmations: number }>;
+  submitterRecord: { approved: number; rejected: number; open: number };
+  decidedAt: string | null;
+}
+
+/** One proposal with all a reviewer needs beside it; the submitter may see their own, reviewers any. */
+export async function getSubmissionDetail(id: number, viewer: { id: string; role: Role }): Promise<SubmissionDetail> {
+  const [raw] = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE s.id = :id`, { replacements: { id }, type: QueryTypes.SELECT });
+  const submission = raw ? await Submission.findByPk(id) : null;
+  if (!raw || !submission) throw new AppError("not_found", "There is no proposal with that id.");
+  const mine = submission.userId === viewer.id;
+  if (!mine && !hasPermission(viewer.role, "proposals:review")) throw new AppError("not_found", "There is no proposal with that id.");
+
+  const part = submission.originalPartId ? await OriginalPart.findByPk(submission.originalPartId) : null;
+  const makerId = part?.makerId ?? submission.newPart!.makerId;
+  const maker = await Maker.findByPk(makerId);
+  const machine = submission.newPart?.machineId ? await Machine.findByPk(submission.newPart.machineId) : null;
+  const assembly = submission.newPart?.assemblyId ? await Assembly.findByPk(submission.newPart.assemblyId) : null;
+  const std = submission.standardPartId ? await StandardPart.findByPk(submission.standardPartId) : null;
+  const standardPart: StandardView = std
+    ? { id: std.id, kind: std.kind, designation: std.designation, innerMm: std.innerMm, outerMm: std.outerMm, widthMm: std.widthMm, lengthMm: std.lengthMm, isNew: false }
+    : {
+        id: null,
+        kind: submission.newStandard!.kind,
+        designation: submission.newStandard!.designation,
+        innerMm: submission.newStandard!.innerMm ?? null,
+        outerMm: submission.newStandard!.outerMm ?? null,
+        widthMm: submission.newStandard!.widthMm ?? null,
+        lengthMm: submission.newStandard!.lengthMm ?? null,
+        isNew: true,
+      };
+  const photos = await SubmissionPhoto.findAll({ where: { submissionId: id }, order: [["id", "ASC"]] });
+  const existingCrosses = part
+    ? await sequelize.query<{ id: number; designation: string | null; repair_method: string | null; fit: Fit; status: string; origin: string; confirmations: string }>(
+        `SELECT c.id, sp.designation, c.repair_method, c.fit, c.status, c.origin, (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations
+         FROM crosses c LEFT JOIN standard_parts sp ON sp.id = c.standard_part_id
+         WHERE c.original_part_id = :partId AND c.status <> 'rejected' ORDER BY c.status, c.fit, c.id`,
+        { replacements: { partId: part.id }, type: QueryTypes.SELECT },
+      )
+    : [];
+  const [record] = await sequelize.query<{ approved: string; rejected: string; open: string }>(
+    `SELECT count(*) FILTER (WHERE status = 'approved') AS approved, count(*) FILTER (WHERE status = 'rejected') AS rejected,
+            count(*) FILTER (WHERE status IN ('pending', 'changes_requested')) AS open
+     FROM submissions WHERE user_id = :userId`,
+    { replacements: { userId: submission.userId }, type: QueryTypes.SELECT },
+  );
+  const submitter = await User.findByPk(submission.userId, { attributes: ["email"] });
+
+  return {
+    ...toRow(raw),
+    submitter: submitter?.email ?? raw.submitter,
+    mine,
+    part: {
+      id: part?.id ?? null,
+      isNew: !part,
+      number: part?.number ?? submission.newPart!.number,
+      maker: maker?.name ?? "?",
+      makerId,
+      description: part?.description ?? submission.newPart!.description,
+      category: part?.category ?? submission.newPart!.category,
+      machine: machine?.model ?? null,
+      machineId: machine?.id ?? null,
+      assembly: assembly?.name ?? null,
+      assemblyId: assembly?.id ?? null,
+      dims: { innerMm: part?.innerMm ?? null, outerMm: part?.outerMm ?? null, widthMm: part?.widthMm ?? null, lengthMm: part?.lengthMm ?? null },
+    },
+    standardPart,
+    measurements: submission.measurements,
+    deviations: measurementDeviations(submission.measurements, standardPart),
+    notes: submission.notes,
+    checks: submission.checks,
+    photoList: photos.map((p) => ({ id: p.id, url: `/api/photos/${p.id}`, fileName: p.fileName })),
+    existingCrosses: existingCrosses.map((c) => ({ id: c.id, designation: c.designation, repairMethod: c.repair_method, fit: c.fit, status: c.status, origin: c.origin, confirmations: Number(c.confirmations) })),
+    submitterRecord: { approved: Number(record.approved), rejected: Number(record.rejected), open: Number(record.open) },
+    decidedAt: submission.decidedAt?.toISOString() ?? null,
+  };
+}
+
+/** Whether this viewer may see this photo: its uploader, a reviewer, or anyone once its proposal is approved. */
+export async function photoForViewer(photoId: number, viewer: { id: string; role: Role } | null) {
+  const photo = await SubmissionPhoto.findByPk(photoId);
+  if (!photo) return null;
+  if (viewer && (photo.userId === viewer.id || hasPermission(viewer.role, "proposals:review"))) return photo;
+  if (!photo.submissionId) return null;
+  const submission = await Submission.findByPk(photo.submissionId, { attributes: ["status"] });
+  return submission?.status === "approved" ? photo : null;
+}

@@ -1,0 +1,129 @@
+import { z } from "zod";
+import { FITS, PART_CATEGORIES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
+import { DECISIONS, MEASURED_DIMENSIONS, PHOTO_MAX_BYTES, PHOTO_TYPES, PHOTOS_PER_SUBMISSION } from "@/lib/community/kinds";
+
+// One schema for the proposal form in the browser and for POST/PATCH /api/submissions on the server.
+const id = (what: string) =>
+  z.number({ error: `Choose ${what}.` }).int(`Choose ${what}.`).positive(`Choose ${what}.`).max(2_147_483_647, `No such ${what}.`);
+
+const mm = (what: string) =>
+  z
+    .number({ error: `${what} is a number in millimetres.` })
+    .positive(`${what} is more than 0 mm.`)
+    .max(5000, `${what} is at most 5000 mm.`)
+    .nullable()
+    .optional();
+
+const original = z
+  .object({
+    mode: z.enum(["existing", "new"], { error: "Say whether the part is in the catalogue or new." }),
+    partId: id("the part").nullable().optional(),
+    makerId: id("the maker").nullable().optional(),
+    number: z.string().trim().max(60, "A factory number is at most 60 characters.").optional(),
+    description: z.string().trim().max(200, "A description is at most 200 characters.").optional(),
+    category: z.enum(PART_CATEGORIES, { error: "Choose what kind of part it is." }).nullable().optional(),
+    machineId: id("the machine").nullable().optional(),
+    assemblyId: id("the assembly").nullable().optional(),
+  })
+  .superRefine((value, ctx) => {
+    if (value.mode === "existing") {
+      if (!value.partId) ctx.addIssue({ code: "custom", path: ["partId"], message: "Pick the part from the catalogue." });
+      return;
+    }
+    if (!value.makerId) ctx.addIssue({ code: "custom", path: ["makerId"], message: "Choose the maker." });
+    if (!value.number || value.number.length < 2) ctx.addIssue({ code: "custom", path: ["number"], message: "Type the factory number as stamped." });
+    if (!value.description || value.description.length < 3) ctx.addIssue({ code: "custom", path: ["description"], message: "Say what the part is, e.g. “fan shaft bearing, front”." });
+    if (!value.category) ctx.addIssue({ code: "custom", path: ["category"], message: "Choose what kind of part it is." });
+    if (value.machineId && !value.assemblyId) ctx.addIssue({ code: "custom", path: ["assemblyId"], message: "Say where on the machine it sits." });
+  });
+
+const standard = z
+  .object({
+    mode: z.enum(["existing", "new"], { error: "Say whether the standard part is in the catalogue or new." }),
+    standardPartId: id("the standard part").nullable().optional(),
+    kind: z.enum(STANDARD_KINDS, { error: "Choose the kind of standard part." }).nullable().optional(),
+    designation: z.string().trim().max(80, "A designation is at most 80 characters.").optional(),
+    innerMm: mm("The bore"),
+    outerMm: mm("The outside diameter"),
+    widthMm: mm("The width"),
+    lengthMm: mm("The length"),
+  })
+  .superRefine((value, ctx) => {
+    if (value.mode === "existing") {
+      if (!value.standardPartId) ctx.addIssue({ code: "custom", path: ["standardPartId"], message: "Pick the standard part." });
+      return;
+    }
+    if (!value.kind) ctx.addIssue({ code: "custom", path: ["kind"], message: "Choose the kind of standard part." });
+    if (!value.designation || value.designation.length < 2) {
+      ctx.addIssue({ code: "custom", path: ["designation"], message: "Type the designation, e.g. 6205-2RS, 35 × 52 × 7 or B43." });
+    }
+  });
+
+export const measurementSchema = z.object({
+  dimension: z.enum(MEASURED_DIMENSIONS, { error: "Say which size this is." }),
+  label: z.string().trim().max(60, "A label is at most 60 characters.").optional(),
+  value: z.number({ error: "A measurement is a number." }).positive("A measurement is more than 0.").max(5000, "A measurement is at most 5000."),
+  unit: z.enum(["mm", "in"], { error: "The unit is mm or in." }),
+});
+
+export const submissionInput = z.object({
+  original,
+  standard,
+  fit: z.enum(FITS, { error: "Choose how it fitted." }),
+  measurements: z.array(measurementSchema).max(12, "At most 12 measurements.").default([]),
+  notes: z.string().trim().max(2000, "Notes are at most 2000 characters.").default(""),
+  photoIds: z.array(id("the photo")).max(PHOTOS_PER_SUBMISSION, `At most ${PHOTOS_PER_SUBMISSION} photos.`).default([]),
+});
+export type SubmissionInput = z.output<typeof submissionInput>;
+export type SubmissionFormValues = z.input<typeof submissionInput>;
+
+export const decisionInput = z
+  .object({
+    action: z.enum(DECISIONS, { error: "The action is approve, reject or request_changes." }),
+    message: z.string().trim().max(2000, "The message is at most 2000 characters.").default(""),
+    version: z.number().int().positive().optional(),
+  })
+  .superRefine((value, ctx) => {
+    if (value.action !== "approve" && value.message.length < 3) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["message"],
+        message: value.action === "reject" ? "Give the member a reason." : "Tell the member what to change.",
+      });
+    }
+  });
+
+export const confirmationInput = z.object({
+  note: z.string().trim().max(500, "A note is at most 500 characters.").default(""),
+});
+
+export const presignInput = z.object({
+  contentType: z.enum(PHOTO_TYPES, { error: "Photos are JPEG, PNG or WebP images." }),
+  size: z
+    .number({ error: "size is the file's size in bytes." })
+    .int("size is a whole number of bytes.")
+    .positive("The file is empty.")
+    .max(PHOTO_MAX_BYTES, `A photo is at most ${PHOTO_MAX_BYTES / 1024 / 1024} MB.`),
+  fileName: z.string().trim().max(200, "A file name is at most 200 characters.").optional(),
+});
+
+export const idParam = z.object({
+  id: z.coerce.number({ error: "An id is a number." }).int("An id is a whole number.").positive("An id is positive.").max(2_147_483_647, "Nothing has that id."),
+});
+
+export const submissionsQuery = z.object({
+  mine: z.enum(["1", "true"]).optional(),
+  status: z.enum(["pending", "changes_requested", "approved", "rejected"]).optional(),
+  category: z.enum(PART_CATEGORIES).optional(),
+  maker: z.coerce.number().int().positive().optional(),
+  limit: z.coerce.number().int().min(1).max(200).default(100),
+});
+
+export const notificationsInput = z.object({
+  notifyByEmail: z.boolean({ error: "notifyByEmail is true or false." }),
+});
+
+export const auditQuery = z.object({
+  limit: z.coerce.number().int().min(1, "limit is at least 1.").max(200, "limit is at most 200.").default(50),
+  before: z.coerce.number().int().positive().optional(),
+});
