@@ -1,6 +1,9 @@
 import type { Metadata } from "next";
 import { signOutAction } from "@/app/actions";
+import { NotificationsToggle } from "@/components/account/notifications-toggle";
 import { Button } from "@/components/ui/button";
+import { User } from "@/db";
+import { hasPermission } from "@/lib/auth/roles";
 import { requirePagePermission } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Your account" };
@@ -13,6 +16,7 @@ const roleText = {
 
 export default async function AccountPage() {
   const user = await requirePagePermission("account:use", "/account");
+  const row = await User.findByPk(user.id, { attributes: ["notifyByEmail"] });
   return (
     <div className="max-w-2xl space-y-6">
       <h1 className="text-3xl">Your account</h1>
@@ -26,6 +30,12 @@ export default async function AccountPage() {
           <dd>
             <span className="capitalize">{user.role}</span>
             <p className="text-sm text-ink-soft">{roleText[user.role]}</p>
+          </dd>
+        </div>
+        <div className="grid gap-1 p-4 sm:grid-cols-[10rem_1fr]">
+          <dt className="font-bold">Notifications</dt>
+          <dd>
+            <NotificationsToggle initial={row?.notifyByEmail ?? true} reviewer={hasPermission(user.role, "proposals:review")} />
           </dd>
         </div>
       </dl>

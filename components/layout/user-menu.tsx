@@ -25,6 +25,14 @@ export function UserMenu({ email, role }: { email: string; role: Role }) {
         <Link href="/account" className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk">
           Your account
         </Link>
+        <Link href="/proposals" className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk">
+          Your proposals
+        </Link>
+        {role === "admin" && (
+          <Link href="/audit" className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk">
+            Audit log
+          </Link>
+        )}
         <form action={signOutAction}>
           <button type="submit" className="block w-full rounded-md px-3 py-2 text-left hover:bg-ground-sunk">
             Sign out

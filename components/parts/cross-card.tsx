@@ -1,3 +1,4 @@
+import { ConfirmButton } from "@/components/parts/confirm-button";
 import { FitBadge } from "@/components/parts/fit-badge";
 import type { CrossView } from "@/lib/catalogue/get-part";
 
@@ -15,7 +16,7 @@ function sureness(cross: CrossView): string {
   return cross.fit === "dimensions_only" ? "Size match only: not yet fitted by anyone" : "Not yet confirmed by a member";
 }
 
-export function CrossCard({ cross }: { cross: CrossView }) {
+export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signedIn?: boolean }) {
   return (
     <article className="space-y-2 rounded-lg border-2 border-rule bg-ground-raised p-4" data-testid="cross">
       <div className="flex flex-wrap items-center gap-3">
@@ -31,7 +32,20 @@ export function CrossCard({ cross }: { cross: CrossView }) {
         </p>
       )}
       {cross.repairMethod && <p className={cross.standard ? "text-ink-soft" : "text-lg"}>{cross.repairMethod}</p>}
-      {cross.notes && <p className="border-l-2 border-brass pl-2 text-sm">{cross.notes}</p>}
+      {cross.notes && <p className="whitespace-pre-line border-l-2 border-brass pl-2 text-sm">{cross.notes}</p>}
+      {cross.photos.length > 0 && (
+        <ul className="flex flex-wrap gap-2" aria-label="Photos from the member who fitted it">
+          {cross.photos.map((id) => (
+            <li key={id}>
+              <a href={`/api/photos/${id}`} target="_blank" rel="noreferrer">
+                {/* eslint-disable-next-line @next/next/no-img-element -- photos come from the app's own route */}
+                <img src={`/api/photos/${id}`} alt="Photo of the fitted part" className="h-20 w-20 rounded border border-rule object-cover" />
+              </a>
+            </li>
+          ))}
+        </ul>
+      )}
+      <ConfirmButton crossId={cross.id} signedIn={signedIn} />
     </article>
   );
 }

@@ -19,6 +19,8 @@ export interface CrossView {
   notes: string | null;
   origin: string;
   confirmations: number;
+  /** Photos from the member's proposal that put this cross in the catalogue. */
+  photos: number[];
 }
 
 export interface PartDetail {
@@ -92,6 +94,14 @@ export async function getPart(id: number): Promise<PartDetail> {
     ),
   ]);
 
+  const photoRows = crosses.length
+    ? await sequelize.query<{ cross_id: number; id: number }>(
+        `SELECT s.cross_id, ph.id FROM submissions s JOIN submission_photos ph ON ph.submission_id = s.id
+         WHERE s.status = 'approved' AND s.cross_id IN (:ids) ORDER BY ph.id`,
+        { replacements: { ids: crosses.map((c) => c.id) }, type: QueryTypes.SELECT },
+      )
+    : [];
+
   const cautions = new Set<CautionKind>();
   const byCategory = CATEGORY_CAUTIONS[part.category];
   if (byCategory) cautions.add(byCategory);
@@ -114,6 +124,7 @@ export async function getPart(id: number): Promise<PartDetail> {
       notes: c.notes,
       origin: c.origin,
       confirmations: Number(c.confirmations),
+      photos: photoRows.filter((p) => p.cross_id === c.id).map((p) => p.id),
     })),
     whereUsed: whereUsed.map((u) => ({
       machineId: u.machine_id,

@@ -39,3 +39,14 @@ export const FIT_NAMES: Record<Fit, { word: string; mark: string; text: string }
   with_modification: { word: "With modification", mark: "◐", text: "fits after the change described in the notes" },
   dimensions_only: { word: "Dimensions only", mark: "○", text: "the sizes agree; nobody has reported fitting it yet" },
 };
+
+export const STANDARD_KIND_NAMES: Record<StandardKind, string> = {
+  bearing: "Ball bearing",
+  lip_seal: "Lip seal",
+  v_belt: "V-belt",
+  key: "Key",
+  plug: "Plug",
+  felt: "Felt",
+  sleeve: "Shaft repair sleeve",
+  gasket_sheet: "Gasket sheet",
+};

@@ -81,7 +81,10 @@ export interface QueueFilters {
   status?: SubmissionStatus;
   category?: PartCategory;
   makerId?: number;
+  /** Part number, designation or member's e-mail, any part of it. */
+  q?: string;
   limit: number;
+  offset?: number;
 }
 
 /** The review queue: oldest first, so nobody's proposal waits for ever behind newer ones. */
@@ -89,10 +92,15 @@ export async function listQueue(filters: QueueFilters): Promise<{ rows: Submissi
   const where = ["s.status = :status"];
   if (filters.category) where.push("COALESCE(p.category::text, s.new_part->>'category') = :category");
   if (filters.makerId) where.push("mk.id = :makerId");
-  const replacements = { status: filters.status ?? "pending", category: filters.category ?? null, makerId: filters.makerId ?? null, limit: filters.limit };
-  const rows = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE ${where.join(" AND ")} ORDER BY s.created_at, s.id LIMIT :limit`, { replacements, type: QueryTypes.SELECT });
+  if (filters.q) {
+    where.push(`(COALESCE(p.number, s.new_part->>'number') ILIKE :q OR COALESCE(sp.designation, s.new_standard->>'designation') ILIKE :q
+      OR (SELECT email FROM users WHERE id = s.user_id) ILIKE :q)`);
+  }
+  const replacements = { status: filters.status ?? "pending", category: filters.category ?? null, makerId: filters.makerId ?? null, q: filters.q ? `%${filters.q.replace(/[%_\\]/g, "")}%` : null, limit: filters.limit, offset: filters.offset ?? 0 };
+  const rows = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE ${where.join(" AND ")} ORDER BY s.created_at, s.id LIMIT :limit OFFSET :offset`, { replacements, type: QueryTypes.SELECT });
   const [{ total }] = await sequelize.query<{ total: string }>(
     `SELECT count(*) AS total FROM submissions s LEFT JOIN original_parts p ON p.id = s.original_part_id
+     LEFT JOIN standard_parts sp ON sp.id = s.standard_part_id
      JOIN makers mk ON mk.id = COALESCE(p.maker_id, (s.new_part->>'makerId')::int) WHERE ${where.join(" AND ")}`,
     { replacements, type: QueryTypes.SELECT },
   );

@@ -4,13 +4,18 @@ export type PostResult<T> = { ok: true; data: T } | { ok: false; status: number;
 
 /** Posts JSON from the browser and returns the body or the API's error shape; a network failure becomes one too. */
 export async function postJson<T>(url: string, body: unknown): Promise<PostResult<T>> {
+  return sendJson<T>("POST", url, body);
+}
+
+/** The same for PATCH and DELETE. */
+export async function sendJson<T>(method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown): Promise<PostResult<T>> {
   try {
     const response = await fetch(url, {
-      method: "POST",
-      headers: { "content-type": "application/json" },
-      body: JSON.stringify(body),
+      method,
+      headers: body === undefined ? {} : { "content-type": "application/json" },
+      body: body === undefined ? undefined : JSON.stringify(body),
     });
-    const data = await response.json().catch(() => ({}));
+    const data = response.status === 204 ? {} : await response.json().catch(() => ({}));
     if (response.ok) return { ok: true, data: data as T };
     const error = (data as Partial<ErrorBody>).error
       ? (data as ErrorBody)

@@ -115,8 +115,10 @@ export const submissionsQuery = z.object({
   mine: z.enum(["1", "true"]).optional(),
   status: z.enum(["pending", "changes_requested", "approved", "rejected"]).optional(),
   category: z.enum(PART_CATEGORIES).optional(),
-  maker: z.coerce.number().int().positive().optional(),
-  limit: z.coerce.number().int().min(1).max(200).default(100),
+  maker: z.coerce.number({ error: "maker is a maker's id." }).int("maker is a maker's id.").positive("maker is a maker's id.").max(2_147_483_647, "No maker has that id.").optional(),
+  q: z.string().trim().max(80, "q is at most 80 characters.").optional(),
+  limit: z.coerce.number({ error: "limit must be a number." }).int("limit must be a whole number.").min(1, "limit is at least 1.").max(200, "limit is at most 200.").default(100),
+  offset: z.coerce.number({ error: "offset must be a number." }).int("offset must be a whole number.").min(0, "offset is at least 0.").max(1_000_000, "offset is at most 1000000.").default(0),
 });
 
 export const notificationsInput = z.object({

@@ -93,6 +93,9 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     expect(queue.status).toBe(200);
     const dates = queue.body.submissions.map((s: { createdAt: string }) => s.createdAt);
     expect(dates).toEqual([...dates].sort());
+    const searched = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: moderator });
+    expect(searched.body).toMatchObject({ total: 1, submissions: [expect.objectContaining({ id, partNumber: number })] });
+    expect((await send("get", "/api/submissions?maker=abc", undefined, { cookie: moderator })).body.field).toBe("maker");
 
     const decided = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
     expect(decided.status).toBe(200);

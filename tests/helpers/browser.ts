@@ -42,3 +42,13 @@ export function pagePerTest(viewport = { width: 390, height: 844 }): () => Page 
     return page;
   };
 }
+
+/** Signs in through the sign-in page, as a person would, and waits to be sent on. */
+export async function signInAs(page: Page, email: string, password = "understudy-demo"): Promise<void> {
+  const base = process.env.APP_URL ?? "http://127.0.0.1:3100";
+  await page.goto(`${base}/sign-in`);
+  await page.getByLabel("E-mail", { exact: true }).fill(email);
+  await page.getByLabel("Password", { exact: true }).fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+}

@@ -9,6 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { getPart, type PartDetail } from "@/lib/catalogue/get-part";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
 import { loadByIdOr404 } from "@/lib/http/load-or-404";
+import { getCurrentSession } from "@/lib/auth/session";
 
 const load = (idText: string): Promise<PartDetail> => loadByIdOr404(idText, getPart);
 
@@ -28,6 +29,7 @@ function Drawing({ part }: { part: PartDetail }) {
 
 export default async function PartPage({ params }: { params: Promise<{ id: string }> }) {
   const part = await load((await params).id);
+  const { user } = await getCurrentSession();
   const chain = [...part.chain.before, { id: part.id, number: part.number, kind: null, note: null }, ...part.chain.after];
   const dims = part.dimensions;
   const documented = [
@@ -61,15 +63,18 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           Standard equivalents
         </h2>
         {part.crosses.length === 0 ? (
-          <Notice>No approved cross for this number yet. If you have fitted one, a member can propose it.</Notice>
+          <Notice>No approved cross for this number yet. If you have fitted one, propose it below.</Notice>
         ) : (
           <div className="grid gap-3 md:grid-cols-2">
             {part.crosses.map((c) => (
-              <CrossCard key={c.id} cross={c} />
+              <CrossCard key={c.id} cross={c} signedIn={Boolean(user)} />
             ))}
           </div>
         )}
         <p className="text-sm text-ink-soft">Ranked by fit, then by how many members fitted each. None is guaranteed: measure before you order.</p>
+        <p>
+          <Link href={`/propose?part=${part.id}`}>Fitted something else that works? Propose a cross for this part</Link>
+        </p>
       </section>
 
       {(documented.length > 0 || ["bearing", "lip_seal", "v_belt"].includes(part.category)) && (

@@ -1,0 +1,60 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { listAudit } from "@/lib/audit/record";
+import { requirePagePermission } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Audit log" };
+
+function changed(before: Record<string, unknown> | null, after: Record<string, unknown> | null): string {
+  if (!before) return after ? Object.entries(after).map(([k, v]) => `${k}: ${JSON.stringify(v)}`).slice(0, 4).join("; ") : "";
+  if (!after) return "removed";
+  return Object.keys({ ...before, ...after })
+    .filter((k) => JSON.stringify(before[k]) !== JSON.stringify(after[k]))
+    .map((k) => `${k}: ${JSON.stringify(before[k])} → ${JSON.stringify(after[k])}`)
+    .join("; ");
+}
+
+export default async function AuditPage({ searchParams }: { searchParams: Promise<{ before?: string }> }) {
+  await requirePagePermission("audit:read", "/audit");
+  const before = Number((await searchParams).before);
+  const { events, next } = await listAudit(100, Number.isInteger(before) && before > 0 ? before : undefined);
+  return (
+    <div className="space-y-6">
+      <header className="space-y-1">
+        <h1 className="text-3xl">Audit log</h1>
+        <p className="text-ink-soft">Who changed what, newest first. Each entry keeps the record as it was before and after; the full records are in GET /api/audit.</p>
+      </header>
+      <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
+        <table className="w-full text-left text-sm">
+          <thead className="bg-ground-sunk">
+            <tr>
+              <th scope="col" className="p-3">When (UTC)</th>
+              <th scope="col" className="p-3">Who</th>
+              <th scope="col" className="p-3">What</th>
+              <th scope="col" className="p-3">Record</th>
+              <th scope="col" className="p-3">Changed</th>
+            </tr>
+          </thead>
+          <tbody>
+            {events.map((e) => (
+              <tr key={e.id} className="border-t border-rule align-top" data-testid="audit-row">
+                <td className="num whitespace-nowrap p-3">{e.at.slice(0, 19).replace("T", " ")}</td>
+                <td className="break-all p-3">{e.actor ?? "—"}</td>
+                <td className="p-3 font-bold">{e.action}</td>
+                <td className="p-3">
+                  {e.subjectType === "submission" ? <Link href={`/review/${e.subjectId}`}>proposal #{e.subjectId}</Link> : `${e.subjectType} ${e.subjectId}`}
+                </td>
+                <td className="num max-w-xl break-words p-3">{changed(e.before, e.after)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {next && (
+        <p>
+          <Link href={`/audit?before=${next}`}>Older entries →</Link>
+        </p>
+      )}
+    </div>
+  );
+}

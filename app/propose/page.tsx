@@ -1,0 +1,52 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { ProposalForm } from "@/components/proposals/proposal-form";
+import { Cautions } from "@/components/safety/cautions";
+import { OriginalPart, Maker } from "@/db";
+import { requirePagePermission } from "@/lib/auth/session";
+import { loadFormChoices } from "@/lib/community/form-choices";
+
+export const metadata: Metadata = { title: "Propose a cross" };
+
+export default async function ProposePage({ searchParams }: { searchParams: Promise<{ part?: string }> }) {
+  const { part: partParam } = await searchParams;
+  await requirePagePermission("proposals:create", `/propose${partParam ? `?part=${encodeURIComponent(partParam)}` : ""}`);
+  const choices = await loadFormChoices();
+  const partId = Number(partParam);
+  const part = Number.isInteger(partId) && partId > 0 && partId < 2 ** 31 ? await OriginalPart.findByPk(partId) : null;
+  const maker = part ? await Maker.findByPk(part.makerId) : null;
+
+  return (
+    <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
+      <div className="space-y-6">
+        <header className="space-y-2">
+          <h1 className="text-3xl">Propose a cross</h1>
+          <p className="max-w-2xl text-lg">
+            Tell other restorers which standard part you fitted in place of an obsolete one. A moderator checks every proposal before it reaches the catalogue, because a wrong cross can
+            cost someone a rebuild.
+          </p>
+          <p className="text-ink-soft">
+            Already sent some? <Link href="/proposals">See your proposals</Link>.
+          </p>
+        </header>
+        <ProposalForm
+          choices={choices}
+          defaults={{
+            original: part ? { mode: "existing", partId: part.id } : { mode: "existing", partId: null },
+            standard: { mode: "existing", standardPartId: null },
+            fit: undefined as never,
+            measurements: [],
+            notes: "",
+            photoIds: [],
+          }}
+          pickedPart={part && maker ? { id: part.id, number: part.number, maker: maker.name, description: part.description } : null}
+          pickedStandard={null}
+          photos={[]}
+        />
+      </div>
+      <div className="space-y-4">
+        <Cautions kinds={["bearings", "seals", "belts"]} />
+      </div>
+    </div>
+  );
+}
