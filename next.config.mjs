@@ -8,6 +8,8 @@ const nextConfig = {
   experimental: {
     // forbidden() and app/forbidden.tsx for pages a role may not open.
     authInterrupts: true,
+    // proxy.ts sees every request, so Next buffers bodies for it; CSV imports may be up to 50 MB (lib/imports/kinds.ts).
+    proxyClientMaxBodySize: "52mb",
   },
 };
 

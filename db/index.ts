@@ -4,6 +4,8 @@ import { Session } from "@/db/models/session";
 import { SignInFailure } from "@/db/models/sign-in-failure";
 import { User } from "@/db/models/user";
 import { AuditEvent, Submission, SubmissionPhoto } from "@/db/models/community";
+import { Import, ImportMapping } from "@/db/models/imports";
+import { JobList, JobListLine } from "@/db/models/lists";
 import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, StandardPart, Supersession } from "@/db/models/catalogue";
 
 // Associations live here only, once, after every model is defined. Aliases are spelled out (and every model
@@ -35,6 +37,10 @@ Submission.hasMany(SubmissionPhoto, { foreignKey: "submissionId", as: "photos" }
 SubmissionPhoto.belongsTo(Submission, { foreignKey: "submissionId", as: "submission" });
 Submission.hasMany(Confirmation, { foreignKey: "submissionId", as: "confirmations" });
 
+JobList.hasMany(JobListLine, { foreignKey: "listId", as: "lines" });
+JobListLine.belongsTo(JobList, { foreignKey: "listId", as: "list" });
+
 export { sequelize, AccountToken, Session, SignInFailure, User };
 export { AuditEvent, Submission, SubmissionPhoto };
+export { Import, ImportMapping, JobList, JobListLine };
 export { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, StandardPart, Supersession };

@@ -1,10 +1,12 @@
 import * as accounts from "@/db/migrations/0001-accounts";
 import * as catalogue from "@/db/migrations/0002-catalogue";
 import * as community from "@/db/migrations/0003-community";
+import * as importsAndLists from "@/db/migrations/0004-imports-and-lists";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
   { name: "0001-accounts", ...accounts },
   { name: "0002-catalogue", ...catalogue },
   { name: "0003-community", ...community },
+  { name: "0004-imports-and-lists", ...importsAndLists },
 ];

@@ -1,0 +1,45 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
+import { sequelize } from "@/db/sequelize";
+
+const id = () => ({ type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true });
+
+export class JobList extends Model<InferAttributes<JobList>, InferCreationAttributes<JobList>> {
+  declare id: CreationOptional<number>;
+  declare userId: string;
+  declare title: string;
+  declare machineId: number | null;
+  declare notes: string | null;
+  declare shareToken: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+JobList.init(
+  { id: id(), userId: DataTypes.STRING(40), title: DataTypes.STRING(120), machineId: DataTypes.INTEGER, notes: DataTypes.TEXT, shareToken: DataTypes.STRING(64), createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE },
+  { sequelize, modelName: "JobList", tableName: "job_lists" },
+);
+
+export class JobListLine extends Model<InferAttributes<JobListLine>, InferCreationAttributes<JobListLine>> {
+  declare id: CreationOptional<number>;
+  declare listId: number;
+  declare partId: number;
+  declare requestedNumber: string | null;
+  declare standardPartId: number | null;
+  declare quantity: number;
+  declare notes: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+JobListLine.init(
+  {
+    id: id(),
+    listId: DataTypes.INTEGER,
+    partId: DataTypes.INTEGER,
+    requestedNumber: DataTypes.STRING(60),
+    standardPartId: DataTypes.INTEGER,
+    quantity: DataTypes.INTEGER,
+    notes: DataTypes.TEXT,
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, modelName: "JobListLine", tableName: "job_list_lines" },
+);
