@@ -1,0 +1,219 @@
+import { readFileSync } from "node:fs";
+import iconv from "iconv-lite";
+import Papa from "papaparse";
+import request from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { Cross, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, User } from "@/db";
+import { runCommit, startCommit } from "@/lib/imports/imports";
+import { getObject } from "@/lib/storage/s3";
+import { APP_URL, send, signIn } from "../helpers/api";
+
+afterAll(() => sequelize.close());
+
+const SAMPLE = readFileSync("fixtures/imports/club-interchange-sample.csv");
+
+let admin: string;
+let moderator: string;
+let member: string;
+
+beforeAll(async () => {
+  [admin, moderator, member] = await Promise.all([signIn("admin@understudy.test"), signIn("moderator@understudy.test"), signIn("member@understudy.test")]);
+});
+
+function upload(cookie: string, bytes: Buffer, name = "club.csv", fields: Record<string, string> = {}) {
+  let req = request(APP_URL).post("/api/imports").set("Origin", APP_URL);
+  if (cookie) req = req.set("Cookie", cookie);
+  for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+  return req.attach("file", bytes, { filename: name, contentType: "text/csv" });
+}
+
+/** Polls the import until the server-side work has finished. */
+async function settled(cookie: string, id: number) {
+  const deadline = Date.now() + 30_000;
+  for (;;) {
+    const { body } = await send("get", `/api/imports/${id}`, undefined, { cookie });
+    if (!["uploaded", "parsing", "committing"].includes(body.status)) return body;
+    if (Date.now() > deadline) throw new Error(`Import ${id} still ${body.status}`);
+    await new Promise((r) => setTimeout(r, 200));
+  }
+}
+
+async function catalogueSnapshot() {
+  const [parts, crosses, standards, makers, usages] = await Promise.all([OriginalPart.count(), Cross.count(), StandardPart.count(), Maker.count(), PartUsage.count()]);
+  const [[fits]] = (await sequelize.query("SELECT md5(string_agg(id || ':' || fit || ':' || coalesce(notes, '') || ':' || status, ',' ORDER BY id)) AS h FROM crosses")) as [Array<{ h: string }>, unknown];
+  return { parts, crosses, standards, makers, usages, fits };
+}
+
+const hm210Fit = async () => {
+  const [[row]] = (await sequelize.query(
+    `SELECT c.fit FROM crosses c JOIN original_parts p ON p.id = c.original_part_id JOIN standard_parts s ON s.id = c.standard_part_id
+     WHERE p.number = 'HM 210 007' AND s.designation = '6203-2Z'`,
+  )) as [Array<{ fit: string }>, unknown];
+  return row.fit;
+};
+
+describe("importing the sample club spreadsheet", () => {
+  let firstId: number;
+  let before: Awaited<ReturnType<typeof catalogueSnapshot>>;
+
+  it("refuses visitors and members", async () => {
+    expect((await upload("", SAMPLE)).status).toBe(401);
+    expect((await upload(member, SAMPLE)).status).toBe(403);
+    expect((await upload(moderator, SAMPLE, "club.csv", { target: "catalogue" })).status).toBe(403);
+  });
+
+  it("stores the file as it came, then shows the dry run's counts and every rejected row with its line, column and reason", async () => {
+    before = await catalogueSnapshot();
+    const response = await upload(admin, SAMPLE, "club-interchange-sample.csv");
+    expect(response.status).toBe(202);
+    firstId = response.body.id;
+    const stored = await getObject(response.body.objectKey);
+    expect(Buffer.from(stored.body).equals(SAMPLE)).toBe(true);
+
+    const body = await settled(admin, firstId);
+    expect(body).toMatchObject({ status: "parsed", encoding: "utf-8", delimiter: ",", missing: [] });
+    expect(body.mapping).toMatchObject({ maker: "Maker", number: "Part No.", category: "Kind", innerMm: "Bore (mm)", outerMm: "OD (mm)", designation: "Standard designation", assembly: "Place on the machine" });
+    expect(body.counts).toEqual({ rows: 14, newParts: 3, newCrosses: 3, updates: 1, unchanged: 3, rejected: 7, newMakers: 1, newStandardParts: 1 });
+    expect(body.rejections.map((r: { line: number; column: string }) => [r.line, r.column])).toEqual([
+      [9, "Kind"],
+      [10, "OD (mm)"],
+      [11, "Bore (mm)"],
+      [12, "Standard designation"],
+      [13, "Standard designation"],
+      [14, "Fit"],
+      [15, "Description"],
+    ]);
+    const reasons = body.rejections.map((r: { reason: string }) => r.reason);
+    expect(reasons[0]).toContain('Unknown category "sprocket"');
+    // ISO 15:2017 series 62 (DIN 625-1 via BOLTS): 6205 is 25 × 52 × 15 mm, so an OD of 47 mm contradicts it.
+    expect(reasons[1]).toContain("52 mm");
+    expect(reasons[2]).toContain("cannot be read as a size");
+    expect(reasons[3]).toContain("line 5");
+    expect(await catalogueSnapshot()).toEqual(before);
+  });
+
+  it("offers the rejected rows as a CSV, as they were in the file", async () => {
+    const response = await send("get", `/api/imports/${firstId}/rejected.csv`, undefined, { cookie: admin });
+    expect(response.status).toBe(200);
+    expect(response.headers["content-type"]).toContain("text/csv");
+    const parsed = Papa.parse<Record<string, string>>(response.text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: true });
+    expect(parsed.data).toHaveLength(7);
+    expect(parsed.data[1]).toMatchObject({ line: "10", column: "OD (mm)", "Part No.": "HM 299 001", "OD (mm)": "47" });
+  });
+
+  it("commits every accepted row in one go", async () => {
+    expect((await send("post", `/api/imports/${firstId}/commit`, {}, { cookie: moderator })).status).toBe(403);
+    const started = await send("post", `/api/imports/${firstId}/commit`, {}, { cookie: admin });
+    expect(started.status).toBe(202);
+    const body = await settled(admin, firstId);
+    expect(body.status).toBe("committed");
+    expect(body.committedCounts).toMatchObject({ newParts: 3, newCrosses: 3, updates: 1, unchanged: 3, rejected: 7 });
+    expect((await send("post", `/api/imports/${firstId}/commit`, {}, { cookie: admin })).status).toBe(409);
+
+    const after = await catalogueSnapshot();
+    expect(after).toMatchObject({ parts: before.parts + 3, crosses: before.crosses + 3, standards: before.standards + 1, makers: before.makers + 1, usages: before.usages + 1 });
+    expect(await hm210Fit()).toBe("direct");
+    const found = (await send("get", "/api/parts/lookup?q=PW-7701")).body.results[0];
+    expect(found).toMatchObject({ number: "PW-7701", crossCount: 1 });
+    const crawler = await send("get", `/api/parts/${(await OriginalPart.findOne({ where: { number: "CV-9902-X" } }))!.id}`);
+    expect(crawler.body.whereUsed).toEqual([expect.objectContaining({ model: "K-40 Crawler", assembly: "Track roller" })]);
+
+    const rows = await send("get", `/api/imports/${firstId}/rows`, undefined, { cookie: admin });
+    expect(rows.body.changes.filter((c: { action: string }) => c.action === "update")).toEqual([expect.objectContaining({ line: 4, table: "crosses" })]);
+  });
+
+  it("changes nothing when the same file is imported again", async () => {
+    const committed = await catalogueSnapshot();
+    const again = await upload(admin, SAMPLE, "club-interchange-sample.csv");
+    const parsed = await settled(admin, again.body.id);
+    expect(parsed.counts).toEqual({ rows: 14, newParts: 0, newCrosses: 0, updates: 0, unchanged: 7, rejected: 7, newMakers: 0, newStandardParts: 0 });
+    await send("post", `/api/imports/${again.body.id}/commit`, {}, { cookie: admin });
+    expect((await settled(admin, again.body.id)).status).toBe("committed");
+    expect(await catalogueSnapshot()).toEqual(committed);
+    expect((await send("get", `/api/imports/${again.body.id}/rows`, undefined, { cookie: admin })).body.total).toBe(0);
+  });
+
+  it("rolls the whole import back, for admins only", async () => {
+    expect((await send("post", `/api/imports/${firstId}/rollback`, {}, { cookie: moderator })).status).toBe(403);
+    const rolled = await send("post", `/api/imports/${firstId}/rollback`, {}, { cookie: admin });
+    expect(rolled.status).toBe(200);
+    expect(rolled.body).toMatchObject({ restored: 1, import: { status: "rolled_back" } });
+    expect(await catalogueSnapshot()).toEqual(before);
+    expect(await hm210Fit()).toBe("with_modification");
+    expect((await send("post", `/api/imports/${firstId}/rollback`, {}, { cookie: admin })).status).toBe(409);
+  });
+
+  it("leaves the catalogue as it was when a commit fails part-way", async () => {
+    const unchanged = await catalogueSnapshot();
+    const response = await upload(admin, SAMPLE, "club-interchange-sample.csv");
+    await settled(admin, response.body.id);
+    const adminUser = await User.findOne({ where: { email: "admin@understudy.test" } });
+    const actor = { id: adminUser!.id, role: "admin" as const };
+    await startCommit(actor, response.body.id);
+    await runCommit(actor, response.body.id, { failAfterRows: 1 });
+    expect(await catalogueSnapshot()).toEqual(unchanged);
+    const body = await settled(admin, response.body.id);
+    expect(body.status).toBe("parsed");
+    expect(body.errorMessage).toContain("nothing was changed");
+  });
+});
+
+describe("other files", () => {
+  it("reads a Windows-1252 file with semicolons and decimal commas", async () => {
+    const text = [
+      "Hersteller;Teilenummer;Bezeichnung;Kind;Bore (mm);OD (mm);Width (mm);Standard designation;Fit",
+      "Halvard Maskinfabrik;HM 777 001;Lager für die Lüfterwelle, Sønderby-Ausführung;bearing;17,0;40,0;12;6203-2RS;direct",
+      "",
+    ].join("\r\n");
+    const bytes = iconv.encode(text, "win1252");
+    expect(bytes.includes(0xfc)).toBe(true); // ü as one Windows-1252 byte, not UTF-8
+    const response = await upload(admin, bytes, "lager.csv");
+    const body = await settled(admin, response.body.id);
+    expect(body).toMatchObject({ encoding: "windows-1252", delimiter: ";", counts: { rows: 1, newParts: 1, newCrosses: 1, rejected: 0 } });
+    await send("post", `/api/imports/${response.body.id}/commit`, {}, { cookie: admin });
+    expect((await settled(admin, response.body.id)).status).toBe("committed");
+    const part = await OriginalPart.findOne({ where: { number: "HM 777 001" } });
+    expect(part!.description).toBe("Lager für die Lüfterwelle, Sønderby-Ausführung");
+  });
+
+  it("asks for a column it cannot match, takes a corrected mapping, and reuses a saved one", async () => {
+    const text = "Maker,Stamped as,Description,Kind,Replacement\r\nPellworth & Sons,PW-8801,Magneto drive bearing,bearing,6201-2RS\r\n";
+    const first = await upload(admin, Buffer.from(text), "unusual.csv");
+    const parsed = await settled(admin, first.body.id);
+    expect(parsed.counts).toBeNull();
+    expect(parsed.errorMessage).toContain("Factory number");
+    const mapping = { ...parsed.mapping, number: "Stamped as" };
+    expect((await send("patch", `/api/imports/${first.body.id}`, { mapping }, { cookie: admin })).status).toBe(202);
+    expect((await settled(admin, first.body.id)).counts).toMatchObject({ rows: 1, newParts: 1 });
+
+    const saved = await send("post", "/api/import-mappings", { name: `Pellworth club ${Date.now()}`, mapping }, { cookie: admin });
+    expect(saved.status).toBe(201);
+    const second = await upload(admin, Buffer.from(text), "unusual-again.csv", { mappingId: String(saved.body.id) });
+    expect((await settled(admin, second.body.id)).counts).toMatchObject({ rows: 1, newParts: 1 });
+  });
+
+  it("refuses a file that is not a table, naming the file field", async () => {
+    const response = await upload(admin, Buffer.from("just one line of words\n"), "notes.csv");
+    expect(response.status).toBe(400);
+    expect(response.body.field).toBe("file");
+    const empty = await upload(admin, Buffer.alloc(0), "empty.csv");
+    expect(empty.status).toBe(400);
+  });
+
+  it("lets a moderator import into the review queue, as proposals someone else decides", async () => {
+    const number = `CV-88${Date.now() % 100000}-Q`;
+    const text = `Maker,Part No.,Description,Kind,Standard designation,Fit\r\nCorvane Tractor Works,${number},Governor weight bearing,bearing,6200-2RS,direct\r\nNew Maker Ltd,NM-1,Something,bearing,6200,direct\r\n`;
+    const response = await upload(moderator, Buffer.from(text), "for-review.csv");
+    expect(response.status).toBe(202);
+    expect(response.body.target).toBe("review_queue");
+    const parsed = await settled(moderator, response.body.id);
+    expect(parsed.counts).toMatchObject({ rows: 2, newCrosses: 1, rejected: 1 });
+    expect(parsed.rejections[0]).toMatchObject({ line: 3, column: "Maker" });
+    await send("post", `/api/imports/${response.body.id}/commit`, {}, { cookie: moderator });
+    expect((await settled(moderator, response.body.id)).status).toBe("committed");
+    expect(await OriginalPart.findOne({ where: { number } })).toBeNull();
+    const queue = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: admin });
+    expect(queue.body.submissions).toEqual([expect.objectContaining({ partNumber: number, standard: "6200-2RS", submitter: "moderator@understudy.test" })]);
+    expect(await Submission.count({ where: { status: "pending" } })).toBeGreaterThan(0);
+  });
+});

@@ -1,0 +1,117 @@
+import Papa from "papaparse";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { sequelize } from "@/db";
+import { send, signIn } from "../helpers/api";
+
+afterAll(() => sequelize.close());
+
+let owner: string;
+let other: string;
+
+beforeAll(async () => {
+  [owner, other] = await Promise.all([signIn("club.member6@understudy.test"), signIn("club.member7@understudy.test")]);
+});
+
+async function newList(title = "Water pump rebuild, customer's 1948 crawler") {
+  const response = await send("post", "/api/lists", { title }, { cookie: owner });
+  expect(response.status).toBe(201);
+  return response.body.id as number;
+}
+
+describe("job lists belong to their owner", () => {
+  it("refuses visitors, checks the title, and hides one member's list from another (404)", async () => {
+    expect((await send("get", "/api/lists")).status).toBe(401);
+    expect((await send("post", "/api/lists", { title: "" }, { cookie: owner })).body.field).toBe("title");
+    const id = await newList();
+    expect((await send("get", `/api/lists/${id}`, undefined, { cookie: other })).status).toBe(404);
+    expect((await send("patch", `/api/lists/${id}`, { title: "Mine now" }, { cookie: other })).status).toBe(404);
+    expect((await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: other })).status).toBe(404);
+    expect((await send("delete", `/api/lists/${id}`, undefined, { cookie: other })).status).toBe(404);
+    const mine = await send("get", "/api/lists", undefined, { cookie: owner });
+    expect(mine.body.lists.map((l: { id: number }) => l.id)).toContain(id);
+    expect((await send("get", "/api/lists", undefined, { cookie: other })).body.lists.map((l: { id: number }) => l.id)).not.toContain(id);
+  });
+
+  it("adds a typed number as its latest number with the best equivalent, and merges a repeat", async () => {
+    const id = await newList();
+    // CV-3003-A is superseded by CV-3003-B in the demo catalogue.
+    const added = await send("post", `/api/lists/${id}/lines`, { number: "cv 3003a", quantity: 2 }, { cookie: owner });
+    expect(added.status).toBe(201);
+    expect(added.body.superseded).toBe(true);
+    const again = await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: owner });
+    expect(again.status).toBe(200);
+    const { body } = await send("get", `/api/lists/${id}`, undefined, { cookie: owner });
+    expect(body.lines).toHaveLength(1);
+    expect(body.lines[0]).toMatchObject({ number: "CV-3003-B", requestedNumber: "cv 3003a", quantity: 3, chosen: expect.objectContaining({ designation: "6203-2RS", fit: "direct" }) });
+    expect(body.totals).toEqual([{ category: "bearing", name: "Ball bearing", lines: 1, quantity: 3 }]);
+
+    const unknown = await send("post", `/api/lists/${id}/lines`, { number: "ZZ-0000-Q" }, { cookie: owner });
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.field).toBe("number");
+  });
+
+  it("edits a line's quantity and equivalent within the rules, and removes it", async () => {
+    const id = await newList();
+    const { body: added } = await send("post", `/api/lists/${id}/lines`, { number: "HM 210 007" }, { cookie: owner });
+    const url = `/api/lists/${id}/lines/${added.lineId}`;
+    expect((await send("patch", url, { quantity: 0 }, { cookie: owner })).body.field).toBe("quantity");
+    expect((await send("patch", url, { standardPartId: 1 }, { cookie: owner })).status).toBe(400);
+    const list = (await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body;
+    const shielded = list.lines[0].equivalents.find((e: { designation: string }) => e.designation === "6203-2Z");
+    expect((await send("patch", url, { quantity: 4, standardPartId: shielded.standardPartId, notes: "customer supplies the slinger" }, { cookie: owner })).status).toBe(200);
+    const after = (await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body;
+    expect(after.lines[0]).toMatchObject({ quantity: 4, notes: "customer supplies the slinger", chosen: { designation: "6203-2Z", fit: "with_modification" } });
+    expect(after.lines[0].warnings[0]).toContain("With modification");
+    expect((await send("delete", url, undefined, { cookie: owner })).status).toBe(204);
+    expect((await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body.lines).toEqual([]);
+  });
+
+  it("adds the rest of a part's assembly in one step", async () => {
+    const id = await newList();
+    const { body: added } = await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: owner });
+    const rest = await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, {}, { cookie: owner });
+    expect(rest.status).toBe(200);
+    expect(rest.body.added).toBeGreaterThan(0);
+    expect(rest.body.assembly).toBe("Water pump");
+    const list = (await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body;
+    expect(list.lines).toHaveLength(1 + rest.body.added);
+    expect((await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, {}, { cookie: owner })).body.added).toBe(0);
+  });
+});
+
+describe("export and sharing", () => {
+  it("exports CSV that reads back through papaparse line for line", async () => {
+    const id = await newList("Export check");
+    await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B", quantity: 2, notes: "front, \"sealed\" please" }, { cookie: owner });
+    await send("post", `/api/lists/${id}/lines`, { number: "CV-3008-A" }, { cookie: owner });
+    const response = await send("get", `/api/lists/${id}/export.csv`, undefined, { cookie: owner });
+    expect(response.status).toBe(200);
+    expect(response.headers["content-disposition"]).toContain("export-check.csv");
+    const parsed = Papa.parse<Record<string, string>>(response.text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: true });
+    expect(parsed.errors).toEqual([]);
+    expect(parsed.data).toEqual([
+      expect.objectContaining({ "Factory number": "CV-3003-B", "Standard designation": "6203-2RS", "Bore mm": "17", "Outside mm": "40", "Width mm": "12", Quantity: "2", Notes: 'front, "sealed" please' }),
+      expect.objectContaining({ "Factory number": "CV-3008-A", "Standard designation": "32 × 47 × 8 mm, spring-loaded lip, rubber OD", Quantity: "1" }),
+    ]);
+    expect((await send("get", `/api/lists/${id}/export.csv`, undefined, { cookie: other })).status).toBe(404);
+  });
+
+  it("shares a read-only link, and stops when sharing is turned off", async () => {
+    const id = await newList("Shared with the customer");
+    await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: owner });
+    const shared = await send("post", `/api/lists/${id}/share`, { enabled: true }, { cookie: owner });
+    const token = shared.body.token as string;
+    expect(shared.body.url).toContain(`token=${token}`);
+
+    const read = await send("get", `/api/lists/${id}?token=${token}`);
+    expect(read.status).toBe(200);
+    expect(read.body).toMatchObject({ readOnly: true, shareToken: null, title: "Shared with the customer" });
+    expect((await send("get", `/api/lists/${id}/export.csv?token=${token}`)).status).toBe(200);
+    expect((await send("patch", `/api/lists/${id}?token=${token}`, { title: "Changed" })).status).toBe(401);
+    expect((await send("post", `/api/lists/${id}/lines?token=${token}`, { number: "HM 210 007" }, { cookie: other })).status).toBe(404);
+    expect((await send("get", `/api/lists/${id}?token=${token.slice(0, -2)}xx`)).status).toBe(404);
+
+    await send("post", `/api/lists/${id}/share`, { enabled: false }, { cookie: owner });
+    expect((await send("get", `/api/lists/${id}?token=${token}`)).status).toBe(404);
+  });
+});
