@@ -6,6 +6,8 @@
  *   services  the services alone, for running `next dev` or vitest by hand
  *   bench     its own services with a 250,000-part synthetic catalogue (kept between runs), the built app, and the
  *             look-up benchmark against it (npm run bench)
+ *   bench-import  the benchmark's services and catalogue, and the CSV import benchmark: a 100,000-row file through
+ *             dry run, commit and rollback, with rows/s and peak memory (npm run bench:import)
  * A service whose address in the environment is not on this machine (a real S3 bucket, an SMTP relay,
  * a managed database) is not started; the app simply uses it.
  */
@@ -16,8 +18,8 @@ import { startMailFake } from "./mail-fake";
 import { PostgresCluster } from "./postgres";
 import { startS3Fake } from "./s3-fake";
 
-type Mode = "start" | "dev" | "test" | "services" | "bench";
-const modes: Mode[] = ["start", "dev", "test", "services", "bench"];
+type Mode = "start" | "dev" | "test" | "services" | "bench" | "bench-import";
+const modes: Mode[] = ["start", "dev", "test", "services", "bench", "bench-import"];
 const mode = process.argv[2] as Mode;
 const passThrough = process.argv.slice(3);
 if (!modes.includes(mode)) {
@@ -26,7 +28,8 @@ if (!modes.includes(mode)) {
 }
 
 const root = process.cwd();
-const quiet = mode === "test" || mode === "bench";
+const benchLike = mode === "bench" || mode === "bench-import";
+const quiet = mode === "test" || benchLike;
 const log = (message: string) => {
   if (!quiet || process.env.UNDERSTUDY_VERBOSE) console.log(`[understudy] ${message}`);
 };
@@ -76,7 +79,7 @@ const benchSettings: Record<string, string> = {
 
 if (mode === "test") {
   Object.assign(process.env, testSettings);
-} else if (mode === "bench") {
+} else if (benchLike) {
   Object.assign(process.env, benchSettings);
 } else {
   if (existsSync(".env")) process.loadEnvFile(".env");
@@ -89,7 +92,7 @@ process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED = "true";
 const { env } = await import("@/lib/env");
 
 const isLocal = (address: string) => ["127.0.0.1", "localhost", "[::1]"].includes(new URL(address).hostname);
-const dataDir = path.join(root, mode === "test" ? ".data/test" : mode === "bench" ? ".data/bench" : ".data");
+const dataDir = path.join(root, mode === "test" ? ".data/test" : benchLike ? ".data/bench" : ".data");
 
 const cleanups: Array<() => Promise<void> | void> = [];
 let children: ChildProcess[] = [];
@@ -213,7 +216,7 @@ async function main(): Promise<number> {
     await seedDemo(log);
   }
   if (env.APP_ENV !== "production" && (await isCatalogueEmpty())) await seedDemoCatalogue(log);
-  if (mode === "bench") {
+  if (benchLike) {
     const { OriginalPart } = await import("@/db");
     if ((await OriginalPart.count()) < 200_000) {
       const { seedLargeCatalogue } = await import("@/db/seeders/large");
@@ -226,6 +229,11 @@ async function main(): Promise<number> {
   if (mode === "services") {
     console.log("[understudy] services running; Ctrl-C stops them.");
     return new Promise<number>(() => {});
+  }
+  if (mode === "bench-import") {
+    // The import runs in the benchmark's own process, so that its memory is what gets measured.
+    const bench = run(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "tests/bench/import.ts", ...passThrough]);
+    return finished(bench);
   }
 
   const serverLog = mode === "test" || mode === "bench" ? path.join(dataDir, "next.log") : undefined;

@@ -14,7 +14,7 @@ export const AREAS: Area[] = [
   { label: "Machines", href: "/machines", ready: true },
   { label: "Measure a part", href: "/measure/bearing", ready: true },
   { label: "Propose a cross", href: "/propose", permission: "proposals:create", ready: true },
-  { label: "Job lists", href: "/lists", permission: "lists:manage", ready: false },
+  { label: "Job lists", href: "/lists", permission: "lists:manage", ready: true },
   { label: "Review queue", href: "/review", permission: "proposals:review", ready: true },
-  { label: "Imports", href: "/admin/imports", permission: "imports:review-queue", ready: false },
+  { label: "Imports", href: "/admin/imports", permission: "imports:review-queue", ready: true },
 ];

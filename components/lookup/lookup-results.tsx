@@ -1,12 +1,13 @@
 "use client";
 
 import Link from "next/link";
+import { AddToList } from "@/components/lists/add-to-list";
 import { MatchBadge } from "@/components/lookup/match-badge";
 import { Notice } from "@/components/ui/notice";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
 import { useLookup } from "@/lib/hooks/use-lookup";
 
-export function LookupResults({ query }: { query: string }) {
+export function LookupResults({ query, signedIn = false }: { query: string; signedIn?: boolean }) {
   const { results, error, isLoading } = useLookup(query, 30);
   if (!query.trim()) return <p className="text-ink-soft">Type a factory number above.</p>;
   if (error) return <Notice tone="caution" role="alert">{error.message}</Notice>;
@@ -44,6 +45,11 @@ export function LookupResults({ query }: { query: string }) {
                 {r.crossCount > 0 ? `${r.crossCount} approved ${r.crossCount === 1 ? "cross" : "crosses"}` : "No approved cross yet"}
               </span>
             </Link>
+            {signedIn && (
+              <div className="mt-1 pl-4">
+                <AddToList partId={r.id} number={r.number} compact />
+              </div>
+            )}
           </li>
         ))}
       </ol>

@@ -23,7 +23,7 @@ export interface CheckedStandard extends StandardDims {
 // How far an entered size may sit from the engine's before the two are said to disagree.
 const AGREE_MM = 0.05;
 
-const DIM_WORDS: Record<keyof StandardDims, string> = { innerMm: "bore", outerMm: "outside diameter", widthMm: "width", lengthMm: "length" };
+const DIM_WORDS: Record<keyof StandardDims, string> = { innerMm: "a bore", outerMm: "an outside diameter", widthMm: "a width", lengthMm: "a length" };
 
 function compareEntered(designation: string, engine: Partial<StandardDims>, entered: Partial<StandardDims>, checks: ProposalCheck[]): void {
   for (const key of Object.keys(DIM_WORDS) as Array<keyof StandardDims>) {
@@ -34,7 +34,7 @@ function compareEntered(designation: string, engine: Partial<StandardDims>, ente
       checks.push({
         level: "warning",
         field: `standard.${key}`,
-        message: `${designation} has a ${DIM_WORDS[key]} of ${round(e, 2)} mm, but ${round(given, 2)} mm was entered. One of them is wrong.`,
+        message: `${designation} has ${DIM_WORDS[key]} of ${round(e, 2)} mm, but ${round(given, 2)} mm was entered. One of them is wrong.`,
       });
     }
   }

@@ -211,6 +211,7 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
 
     // 3. Decide each row, writing it when committing.
     const newCrossRows: Array<{ line: number; values: CreationAttributes<Cross> }> = [];
+    const newPartRows: Array<{ placeholder: number; key: string; line: number; values: CreationAttributes<OriginalPart>; usage: { machineId: number; assemblyId: number } | null }> = [];
     const newSubmissionRows: Array<{ line: number; values: CreationAttributes<Submission> }> = [];
     for (const a of accepted) {
       const { row } = a;
@@ -248,19 +249,16 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
         }
         if (target === "catalogue") {
           counts.newParts += 1;
+          // Placeholders now; the chunk's new parts are inserted together below and the real ids put in.
+          partId = fakeId--;
           if (commit) {
-            const created = await OriginalPart.create(
-              { makerId: a.maker!.id, number: row.number.toUpperCase(), numberNormalized: a.normalised, numberKey: a.numberKey, description: row.description, category, innerMm: row.innerMm, outerMm: row.outerMm, widthMm: row.widthMm, lengthMm: row.lengthMm, dimensionsNote: null },
-              t,
-            );
-            partId = created.id;
-            changes.push({ importId: options.importId, line: a.line, tableName: "original_parts", recordId: created.id, action: "insert", before: null });
-            if (a.machineId && a.assemblyId) {
-              const usage = await PartUsage.create({ partId, machineId: a.machineId, assemblyId: a.assemblyId, quantity: 1, serialNote: null }, t);
-              changes.push({ importId: options.importId, line: a.line, tableName: "part_usages", recordId: usage.id, action: "insert", before: null });
-            }
-          } else {
-            partId = fakeId--;
+            newPartRows.push({
+              placeholder: partId,
+              key: partKey,
+              line: a.line,
+              values: { makerId: a.maker!.id, number: row.number.toUpperCase(), numberNormalized: a.normalised, numberKey: a.numberKey, description: row.description, category, innerMm: row.innerMm, outerMm: row.outerMm, widthMm: row.widthMm, lengthMm: row.lengthMm, dimensionsNote: null },
+              usage: a.machineId && a.assemblyId ? { machineId: a.machineId, assemblyId: a.assemblyId } : null,
+            });
           }
           plannedParts.set(partKey, partId);
         }
@@ -340,6 +338,22 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
       }
     }
 
+    if (commit && newPartRows.length > 0) {
+      const created = await OriginalPart.bulkCreate(newPartRows.map((r) => r.values), { ...t, returning: true });
+      const realId = new Map<number, number>();
+      created.forEach((part, i) => {
+        const planned = newPartRows[i];
+        realId.set(planned.placeholder, part.id);
+        plannedParts.set(planned.key, part.id);
+        changes.push({ importId: options.importId, line: planned.line, tableName: "original_parts", recordId: part.id, action: "insert", before: null });
+      });
+      const usages = newPartRows.filter((r) => r.usage).map((r) => ({ line: r.line, values: { partId: realId.get(r.placeholder)!, ...r.usage!, quantity: 1, serialNote: null } }));
+      if (usages.length > 0) {
+        const createdUsages = await PartUsage.bulkCreate(usages.map((u) => u.values), { ...t, returning: true });
+        createdUsages.forEach((u, i) => changes.push({ importId: options.importId, line: usages[i].line, tableName: "part_usages", recordId: u.id, action: "insert", before: null }));
+      }
+      for (const row of newCrossRows) if (row.values.originalPartId < 0) row.values.originalPartId = realId.get(row.values.originalPartId)!;
+    }
     if (commit && newCrossRows.length > 0) {
       const created = await Cross.bulkCreate(newCrossRows.map((r) => r.values), { ...t, returning: true });
       created.forEach((c, i) => changes.push({ importId: options.importId, line: newCrossRows[i].line, tableName: "crosses", recordId: c.id, action: "insert", before: null }));

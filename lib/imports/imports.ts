@@ -6,7 +6,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { hasPermission, type Role } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
 import { runPass, type Rejection } from "@/lib/imports/engine";
-import { IMPORT_MAX_BYTES, type ImportCounts, type ImportMappingValue, type ImportTarget } from "@/lib/imports/kinds";
+import { IMPORT_MAX_BYTES, type ImportCounts, type ImportMappingValue, type ImportStatus, type ImportTarget } from "@/lib/imports/kinds";
 import { cleanMapping, missingRequired, proposeMapping } from "@/lib/imports/mapping";
 import { detectShape, readSample, type FileShape } from "@/lib/imports/read";
 import { putObject } from "@/lib/storage/s3";
@@ -220,7 +220,7 @@ export async function rollbackImport(actor: Actor, id: number): Promise<{ remove
 export interface ImportView {
   id: number;
   target: ImportTarget;
-  status: Import["status"];
+  status: ImportStatus;
   fileName: string;
   sizeBytes: number;
   encoding: string | null;
@@ -276,7 +276,7 @@ export async function getImport(actor: Actor, id: number, rejectionLimit = 200):
 
 export async function listImports(actor: Actor): Promise<Array<Pick<ImportView, "id" | "fileName" | "status" | "target" | "createdAt" | "by" | "counts" | "committedCounts">>> {
   if (!hasPermission(actor.role, "imports:review-queue")) throw new AppError("forbidden", "Your account's role does not allow imports.");
-  const rows = await sequelize.query<{ id: number; file_name: string; status: Import["status"]; target: ImportTarget; created_at: Date; email: string | null; counts: ImportCounts | null; committed_counts: ImportCounts | null }>(
+  const rows = await sequelize.query<{ id: number; file_name: string; status: ImportStatus; target: ImportTarget; created_at: Date; email: string | null; counts: ImportCounts | null; committed_counts: ImportCounts | null }>(
     `SELECT i.id, i.file_name, i.status, i.target, i.created_at, u.email, i.counts, i.committed_counts
      FROM imports i LEFT JOIN users u ON u.id = i.user_id ORDER BY i.id DESC LIMIT 100`,
     { type: QueryTypes.SELECT },

@@ -60,28 +60,47 @@ export interface CsvRecord {
 
 /**
  * The stored file's rows, one at a time, decoded and parsed as they stream from storage: a 100,000-row file never
- * sits in memory whole. `line` counts the header as line 1 and blank lines too; a quoted cell with line breaks in it counts as one line. `onBytes` reports progress through the file.
+ * sits in memory whole. `line` counts the header as line 1 and blank lines too; a quoted cell with line breaks in it
+ * counts as one line. `onBytes` reports progress through the file.
  */
 export async function* streamRows(key: string, shape: FileShape, onBytes: (bytes: number) => void): AsyncGenerator<CsvRecord> {
   const result = await storageClient().send(new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));
   if (!result.Body) throw new Error(`Stored import ${key} has no body`);
-  let bytes = 0;
+  yield* rowsFromStream(result.Body as Readable, shape, onBytes);
+}
+
+/**
+ * Parses a byte stream of CSV into records keyed by the column titles. papaparse's own header mode is not used:
+ * when streaming, it treats repeated cell values in data rows as repeated titles and renames them (`""` becomes
+ * `"_1"`), so rows are read as arrays and keyed here.
+ */
+export async function* rowsFromStream(bytes: Readable, shape: FileShape, onBytes: (bytes: number) => void = () => {}): AsyncGenerator<CsvRecord> {
+  let count = 0;
   const counter = new Transform({
     transform(chunk: Buffer, _encoding, callback) {
-      bytes += chunk.length;
-      onBytes(bytes);
+      count += chunk.length;
+      onBytes(count);
       callback(null, chunk);
     },
   });
-  const source = (result.Body as Readable).pipe(counter);
-  const decoded = source.pipe(iconv.decodeStream(shape.encoding === "utf-8" ? "utf8" : "win1252", { stripBOM: true }));
-  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { header: true, delimiter: shape.delimiter, transformHeader: (h: string) => h.trim() });
+  const decoded = bytes.pipe(counter).pipe(iconv.decodeStream(shape.encoding === "utf-8" ? "utf8" : "win1252", { stripBOM: true }));
+  const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { header: false, delimiter: shape.delimiter });
   const rows = decoded.pipe(parser as unknown as NodeJS.WritableStream) as unknown as Readable;
-  let line = 1;
-  for await (const record of rows) {
+  let line = 0;
+  let headers: string[] | null = null;
+  for await (const cells of rows) {
     line += 1;
+    const values = cells as string[];
+    if (!headers) {
+      headers = values.map((h) => h.trim());
+      continue;
+    }
     // Blank lines are skipped but still counted, so that line numbers match what a text editor shows.
-    if (Object.values(record as Record<string, unknown>).every((v) => v === undefined || v === null || (typeof v === "string" && v.trim() === ""))) continue;
-    yield { line, record: record as Record<string, string | undefined> };
+    if (values.every((v) => v.trim() === "")) continue;
+    const record: Record<string, string | undefined> = {};
+    headers.forEach((h, i) => {
+      if (h) record[h] = values[i];
+    });
+    yield { line, record };
   }
 }

@@ -171,6 +171,14 @@ export async function getList(access: { userId: string } | { token: string }, id
   }
   const cautions = new Set<CautionKind>();
   for (const l of view) if (CAUTIONS[l.category]) cautions.add(CAUTIONS[l.category]!);
+  // The places the parts are fitted carry their own cautions (a water pump: hot coolant under pressure).
+  if (view.length > 0) {
+    const places = await sequelize.query<{ caution: CautionKind }>(
+      "SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id = u.assembly_id WHERE u.part_id IN (:ids) AND a.caution IS NOT NULL",
+      { replacements: { ids: view.map((l) => l.partId) }, type: QueryTypes.SELECT },
+    );
+    for (const p of places) cautions.add(p.caution);
+  }
   return {
     id: list.id,
     title: list.title,

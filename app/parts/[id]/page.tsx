@@ -5,6 +5,7 @@ import { BearingDrawing } from "@/components/measure/bearing-drawing";
 import { BeltDrawing } from "@/components/measure/belt-drawing";
 import { SealDrawing } from "@/components/measure/seal-drawing";
 import { CrossCard } from "@/components/parts/cross-card";
+import { AddToList } from "@/components/lists/add-to-list";
 import { Notice } from "@/components/ui/notice";
 import { getPart, type PartDetail } from "@/lib/catalogue/get-part";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
@@ -47,6 +48,11 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
         </p>
         <h1 className="num text-4xl">{part.number}</h1>
         <p className="text-xl">{part.description}</p>
+        {user && (
+          <div className="no-print">
+            <AddToList partId={part.id} number={part.number} />
+          </div>
+        )}
         {part.chain.latest.id !== part.id && (
           <Notice tone="caution">
             Superseded. The latest number is{" "}

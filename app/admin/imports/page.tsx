@@ -1,0 +1,71 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { ImportUpload } from "@/components/imports/import-upload";
+import { Notice } from "@/components/ui/notice";
+import { hasPermission } from "@/lib/auth/roles";
+import { requirePagePermission } from "@/lib/auth/session";
+import { listImports, listMappings } from "@/lib/imports/imports";
+import { STATUS_WORDS } from "@/lib/imports/kinds";
+
+export const metadata: Metadata = { title: "Imports" };
+
+export default async function ImportsPage() {
+  const user = await requirePagePermission("imports:review-queue", "/admin/imports");
+  const [imports, mappings] = await Promise.all([listImports(user), listMappings()]);
+  const isAdmin = hasPermission(user.role, "imports:commit");
+  return (
+    <div className="space-y-8">
+      <header className="space-y-1">
+        <h1 className="text-3xl">Imports</h1>
+        <p className="max-w-3xl text-ink-soft">
+          Load a club&apos;s or a shop&apos;s interchange spreadsheet. The file is stored as it came, read in a dry run that changes nothing, and committed only when you have checked what it
+          would do. {isAdmin ? "A committed import can be rolled back as a whole." : "As a moderator you import into the review queue, where another moderator decides each row."}
+        </p>
+      </header>
+      <ImportUpload canCommitToCatalogue={isAdmin} mappings={mappings.map((m) => ({ id: m.id, name: m.name }))} />
+      <section aria-labelledby="past-heading" className="space-y-3">
+        <h2 id="past-heading" className="text-2xl">
+          Earlier imports
+        </h2>
+        {imports.length === 0 ? (
+          <Notice>No imports yet.</Notice>
+        ) : (
+          <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
+            <table className="w-full text-left">
+              <thead className="bg-ground-sunk text-sm">
+                <tr>
+                  <th scope="col" className="p-3">File</th>
+                  <th scope="col" className="p-3">State</th>
+                  <th scope="col" className="p-3">Into</th>
+                  <th scope="col" className="p-3">Rows</th>
+                  <th scope="col" className="p-3">By, when (UTC)</th>
+                </tr>
+              </thead>
+              <tbody>
+                {imports.map((i) => {
+                  const c = i.committedCounts ?? i.counts;
+                  return (
+                    <tr key={i.id} className="border-t border-rule align-top">
+                      <td className="p-3">
+                        <Link href={`/admin/imports/${i.id}`} className="break-all font-bold">
+                          {i.fileName}
+                        </Link>
+                      </td>
+                      <td className="p-3">{STATUS_WORDS[i.status]}</td>
+                      <td className="p-3">{i.target === "catalogue" ? "catalogue" : "review queue"}</td>
+                      <td className="num p-3">{c ? `${c.rows} (${c.rejected} rejected)` : "—"}</td>
+                      <td className="p-3 text-sm">
+                        {i.by ?? "?"}
+                        <span className="num block">{i.createdAt.slice(0, 16).replace("T", " ")}</span>
+                      </td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </section>
+    </div>
+  );
+}

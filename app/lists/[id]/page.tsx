@@ -1,0 +1,38 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { ListEditor } from "@/components/lists/list-editor";
+import { Cautions } from "@/components/safety/cautions";
+import { requirePagePermission } from "@/lib/auth/session";
+import { AppError } from "@/lib/errors";
+import { getList } from "@/lib/lists/lists";
+
+export const metadata: Metadata = { title: "Job list" };
+
+export default async function ListPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id: idText } = await params;
+  const user = await requirePagePermission("lists:manage", `/lists/${idText}`);
+  const id = Number(idText);
+  if (!Number.isInteger(id) || id <= 0 || id >= 2 ** 31) notFound();
+  const view = await getList({ userId: user.id }, id).catch((error) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  return (
+    <div className="space-y-6">
+      <header className="space-y-1">
+        <p>
+          <Link href="/lists">← Your job lists</Link>
+        </p>
+        <h1 className="text-3xl">{view.title}</h1>
+        {view.machine && (
+          <p className="text-ink-soft">
+            For the <Link href={`/machines/${view.machine.id}`}>{view.machine.maker} {view.machine.model}</Link>
+          </p>
+        )}
+      </header>
+      <ListEditor initial={view} />
+      {view.cautions.length > 0 && <Cautions kinds={view.cautions} />}
+    </div>
+  );
+}

@@ -1,0 +1,299 @@
+"use client";
+
+import type { ColumnDef } from "@tanstack/react-table";
+import Link from "next/link";
+import { useEffect, useMemo, useState } from "react";
+import useSWR from "swr";
+import { FitBadge } from "@/components/parts/fit-badge";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import { SortableTable } from "@/components/ui/sortable-table";
+import { standardSizes } from "@/lib/catalogue/sizes";
+import { sendJson } from "@/lib/http/post-json";
+import type { ListLine, ListView } from "@/lib/lists/lists";
+
+async function fetchList(url: string): Promise<ListView> {
+  const response = await fetch(url);
+  if (!response.ok) throw new Error("The list could not be loaded.");
+  return response.json();
+}
+
+function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number) => Promise<string | null> }) {
+  const [value, setValue] = useState(String(line.quantity));
+  const [error, setError] = useState<string | null>(null);
+  const commit = async () => {
+    const n = Number(value);
+    if (n === line.quantity) return;
+    if (!Number.isInteger(n) || n < 1 || n > 9999) {
+      setError("1 to 9999");
+      return;
+    }
+    setError(await save(n));
+  };
+  return (
+    <div>
+      <input
+        aria-label={`Quantity of ${line.number}`}
+        inputMode="numeric"
+        value={value}
+        onChange={(e) => setValue(e.target.value)}
+        onBlur={commit}
+        onKeyDown={(e) => {
+          if (e.key === "Enter") {
+            e.preventDefault();
+            void commit();
+          }
+        }}
+        className={`num w-20 rounded-md border-2 bg-ground px-2 py-1 text-lg ${error ? "border-caution" : "border-rule-strong"}`}
+      />
+      {error && <p className="text-sm font-bold text-caution">{error}</p>}
+    </div>
+  );
+}
+
+/** The job list as its owner works on it: add by number, edit quantities inline, pick equivalents, share, export. */
+export function ListEditor({ initial }: { initial: ListView }) {
+  const { data, mutate } = useSWR(`/api/lists/${initial.id}`, fetchList, { fallbackData: initial, revalidateOnFocus: false });
+  const view = data ?? initial;
+  const [number, setNumber] = useState("");
+  const [quantity, setQuantity] = useState("1");
+  const [message, setMessage] = useState<{ tone: "success" | "caution"; text: string } | null>(null);
+  const [adding, setAdding] = useState(false);
+  const [shareUrl, setShareUrl] = useState<string | null>(initial.shareToken ? `/lists/shared/${initial.id}?token=${initial.shareToken}` : null);
+  const [origin, setOrigin] = useState("");
+  useEffect(() => setOrigin(window.location.origin), []);
+
+  const columns = useMemo<Array<ColumnDef<ListLine>>>(() => {
+    const patch = async (line: ListLine, body: Record<string, unknown>) => {
+      const result = await sendJson("PATCH", `/api/lists/${view.id}/lines/${line.id}`, body);
+      await mutate();
+      return result.ok ? null : result.error.message;
+    };
+    return [
+      {
+        accessorKey: "number",
+        header: "Factory number",
+        cell: ({ row }) => (
+          <>
+            <Link href={`/parts/${row.original.partId}`} className="num whitespace-nowrap font-bold">
+              {row.original.number}
+            </Link>
+            {row.original.requestedNumber && <span className="block text-sm text-ink-soft">asked for as {row.original.requestedNumber}</span>}
+          </>
+        ),
+      },
+      {
+        accessorKey: "description",
+        header: "Part",
+        cell: ({ row }) => (
+          <>
+            {row.original.description}
+            <span className="block text-sm text-ink-soft">
+              {row.original.maker} · {row.original.categoryName}
+            </span>
+          </>
+        ),
+      },
+      {
+        id: "standard",
+        accessorFn: (l) => l.chosen?.designation ?? "",
+        header: "Order as",
+        cell: ({ row }) => {
+          const l = row.original;
+          if (!l.chosen) return <span className="text-ink-soft">no approved cross</span>;
+          return (
+            <div className="space-y-1">
+              {l.equivalents.length > 1 ? (
+                <select
+                  aria-label={`Standard part for ${l.number}`}
+                  value={l.chosen.standardPartId}
+                  onChange={(e) => void patch(l, { standardPartId: Number(e.target.value) })}
+                  className="num max-w-64 rounded-md border-2 border-rule-strong bg-ground px-2 py-1"
+                >
+                  {l.equivalents.map((e) => (
+                    <option key={e.standardPartId} value={e.standardPartId}>
+                      {e.designation}
+                    </option>
+                  ))}
+                </select>
+              ) : (
+                <span className="num font-bold">{l.chosen.designation}</span>
+              )}
+              <span className="num block text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
+              <FitBadge fit={l.chosen.fit} />
+            </div>
+          );
+        },
+      },
+      { accessorKey: "quantity", header: "Qty", cell: ({ row }) => <QuantityCell key={row.original.quantity} line={row.original} save={(q) => patch(row.original, { quantity: q })} /> },
+      {
+        id: "warnings",
+        header: "Check",
+        enableSorting: false,
+        cell: ({ row }) =>
+          row.original.warnings.length === 0 ? (
+            <span className="text-sm text-ink-soft">—</span>
+          ) : (
+            <ul className="space-y-1 text-sm">
+              {row.original.warnings.map((w) => (
+                <li key={w} className="font-bold text-caution">
+                  ⚠ {w}
+                </li>
+              ))}
+            </ul>
+          ),
+      },
+      {
+        id: "actions",
+        header: "",
+        enableSorting: false,
+        cell: ({ row }) => (
+          <div className="flex flex-col items-start gap-1 text-sm">
+            {row.original.hasAssembly && (
+              <button
+                type="button"
+                className="underline"
+                onClick={async () => {
+                  const result = await sendJson<{ added: number; machine: string; assembly: string }>("POST", `/api/lists/${view.id}/lines/${row.original.id}/assembly`, {});
+                  await mutate();
+                  setMessage(
+                    result.ok
+                      ? { tone: "success", text: result.data.added === 0 ? `Everything from the ${result.data.assembly} (${result.data.machine}) is already on the list.` : `Added ${result.data.added} more ${result.data.added === 1 ? "part" : "parts"} of the ${result.data.assembly} (${result.data.machine}).` }
+                      : { tone: "caution", text: result.error.message },
+                  );
+                }}
+              >
+                Add the rest of the assembly
+              </button>
+            )}
+            <button
+              type="button"
+              className="underline"
+              onClick={async () => {
+                await sendJson("DELETE", `/api/lists/${view.id}/lines/${row.original.id}`);
+                await mutate();
+              }}
+            >
+              Remove
+            </button>
+          </div>
+        ),
+      },
+    ];
+  }, [view.id, mutate]);
+
+  return (
+    <div className="space-y-6">
+      <form
+        className="flex flex-wrap items-end gap-3 rounded-lg border border-rule bg-ground-raised p-4"
+        onSubmit={async (e) => {
+          e.preventDefault();
+          setAdding(true);
+          setMessage(null);
+          const result = await sendJson<{ superseded: boolean; merged: boolean }>("POST", `/api/lists/${view.id}/lines`, { number, quantity: Number(quantity) || 1 });
+          setAdding(false);
+          if (result.ok) {
+            setNumber("");
+            setQuantity("1");
+            setMessage({ tone: "success", text: result.data.merged ? "Already on the list: its quantity was raised." : result.data.superseded ? "Added under its latest number (the one you typed is superseded)." : "Added." });
+            await mutate();
+          } else setMessage({ tone: "caution", text: result.error.message });
+        }}
+      >
+        <div className="min-w-56 flex-1 space-y-1">
+          <label htmlFor="add-number" className="block font-bold">
+            Add a part by factory number
+          </label>
+          <input id="add-number" value={number} onChange={(e) => setNumber(e.target.value)} required className="num block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg" />
+        </div>
+        <div className="w-24 space-y-1">
+          <label htmlFor="add-quantity" className="block font-bold">
+            Qty
+          </label>
+          <input id="add-quantity" inputMode="numeric" value={quantity} onChange={(e) => setQuantity(e.target.value)} className="num block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg" />
+        </div>
+        <Button type="submit" pending={adding}>
+          Add
+        </Button>
+      </form>
+      {message && (
+        <Notice tone={message.tone} role={message.tone === "caution" ? "alert" : "status"}>
+          {message.text}
+        </Notice>
+      )}
+
+      {view.lines.length === 0 ? (
+        <Notice>The list is empty. Add parts by number above, or from a part page or the look-up results.</Notice>
+      ) : (
+        <SortableTable rows={view.lines} columns={columns} count={(shown) => `${shown} ${shown === 1 ? "line" : "lines"}, ${view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all`} rowTestId="list-line" />
+      )}
+
+      {view.totals.length > 0 && (
+        <section aria-labelledby="totals-heading" className="space-y-2">
+          <h2 id="totals-heading" className="text-xl">
+            Totals by kind
+          </h2>
+          <ul className="flex flex-wrap gap-3">
+            {view.totals.map((t) => (
+              <li key={t.category} className="rounded-md border border-rule bg-ground-raised px-3 py-2">
+                {t.name}: <span className="num font-bold">{t.quantity}</span> ({t.lines} {t.lines === 1 ? "line" : "lines"})
+              </li>
+            ))}
+          </ul>
+          {view.warnings > 0 && (
+            <Notice tone="caution">
+              {view.warnings} {view.warnings === 1 ? "line needs" : "lines need"} a check before ordering: see the Check column.
+            </Notice>
+          )}
+        </section>
+      )}
+
+      <section aria-labelledby="out-heading" className="grid gap-4 md:grid-cols-2">
+        <div className="space-y-2 rounded-lg border border-rule bg-ground-raised p-4">
+          <h2 id="out-heading" className="text-xl">
+            Order and print
+          </h2>
+          <p className="flex flex-wrap gap-4">
+            <a href={`/api/lists/${view.id}/export.csv`} download className="font-bold">
+              Download CSV
+            </a>
+            <Link href={`/lists/${view.id}/print`} className="font-bold">
+              Printable sheet
+            </Link>
+          </p>
+          <p className="text-sm text-ink-soft">One line a part: factory number, standard designation, sizes, quantity and notes.</p>
+        </div>
+        <div className="space-y-2 rounded-lg border border-rule bg-ground-raised p-4">
+          <h2 className="text-xl">Share</h2>
+          {shareUrl ? (
+            <>
+              <p className="text-sm">Anyone with this link can read the list (not change it):</p>
+              <input readOnly aria-label="Share link" value={`${origin}${shareUrl}`} className="num w-full rounded-md border border-rule-strong bg-ground px-2 py-1 text-sm" onFocus={(e) => e.target.select()} />
+              <button
+                type="button"
+                className="text-sm underline"
+                onClick={async () => {
+                  await sendJson("POST", `/api/lists/${view.id}/share`, { enabled: false });
+                  setShareUrl(null);
+                }}
+              >
+                Stop sharing
+              </button>
+            </>
+          ) : (
+            <Button
+              type="button"
+              variant="secondary"
+              onClick={async () => {
+                const result = await sendJson<{ token: string }>("POST", `/api/lists/${view.id}/share`, { enabled: true });
+                if (result.ok) setShareUrl(`/lists/shared/${view.id}?token=${result.data.token}`);
+              }}
+            >
+              Make a read-only link
+            </Button>
+          )}
+        </div>
+      </section>
+    </div>
+  );
+}

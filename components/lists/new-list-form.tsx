@@ -1,0 +1,48 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { postJson } from "@/lib/http/post-json";
+
+/** A new job list: a title that says the job, and the machine if it is for one. */
+export function NewListForm({ machines }: { machines: Array<{ id: number; label: string }> }) {
+  const router = useRouter();
+  const [title, setTitle] = useState("");
+  const [machineId, setMachineId] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  return (
+    <form
+      className="space-y-4 rounded-lg border border-rule bg-ground-raised p-4"
+      onSubmit={async (e) => {
+        e.preventDefault();
+        setBusy(true);
+        const result = await postJson<{ id: number }>("/api/lists", { title, machineId: machineId ? Number(machineId) : null });
+        setBusy(false);
+        if (result.ok) router.push(`/lists/${result.data.id}`);
+        else setError(result.error.message);
+      }}
+    >
+      <h2 className="text-xl">Start a list for a job</h2>
+      <Field id="list-title" label="What is the job?" hint="For example: water pump rebuild, customer's 1948 crawler." value={title} onChange={(e) => setTitle(e.target.value)} error={error ?? undefined} />
+      <div className="space-y-1">
+        <label htmlFor="list-machine" className="block font-bold">
+          Machine (optional)
+        </label>
+        <select id="list-machine" value={machineId} onChange={(e) => setMachineId(e.target.value)} className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg">
+          <option value="">Not for one machine</option>
+          {machines.map((m) => (
+            <option key={m.id} value={m.id}>
+              {m.label}
+            </option>
+          ))}
+        </select>
+      </div>
+      <Button type="submit" pending={busy}>
+        Start the list
+      </Button>
+    </form>
+  );
+}
