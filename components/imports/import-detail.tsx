@@ -135,6 +135,28 @@ function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => voi
   );
 }
 
+const TABLE_WORDS: Record<string, string> = { original_parts: "part", crosses: "cross", standard_parts: "standard part", makers: "maker", part_usages: "where used", submissions: "proposal" };
+
+/** What a committed import wrote, by file line, with links to what can be opened. */
+function WrittenRows({ id }: { id: number }) {
+  const { data } = useSWR(`/api/imports/${id}/rows`, async (url: string) => (await fetch(url)).json() as Promise<{ changes: Array<{ line: number; table: string; recordId: number; action: string }>; total: number }>);
+  if (!data || data.total === 0) return null;
+  return (
+    <details className="rounded-lg border border-rule bg-ground-raised p-4">
+      <summary className="cursor-pointer font-bold">What it wrote: {data.total.toLocaleString("en-GB")} records, by line of the file</summary>
+      {data.total > data.changes.length && <p className="text-sm text-ink-soft">The first {data.changes.length} are listed.</p>}
+      <ul className="mt-2 columns-1 text-sm sm:columns-2">
+        {data.changes.map((c) => (
+          <li key={`${c.table}-${c.recordId}-${c.action}`}>
+            line <span className="num">{c.line}</span>: {c.action === "insert" ? "added" : "changed"} {TABLE_WORDS[c.table] ?? c.table}{" "}
+            {c.table === "original_parts" ? <Link href={`/parts/${c.recordId}`}>#{c.recordId}</Link> : `#${c.recordId}`}
+          </li>
+        ))}
+      </ul>
+    </details>
+  );
+}
+
 /** One import: progress while the server works, then the dry run to check, commit, and roll back. */
 export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmin: boolean }) {
   const { data, mutate } = useSWR(`/api/imports/${initial.id}`, fetchImport, {
@@ -203,9 +225,10 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
         </div>
       )}
 
+      {view.status === "committed" && <WrittenRows id={view.id} />}
+
       {view.status === "committed" && (
         <div className="flex flex-wrap items-center gap-4">
-          <Link href={`/api/imports/${view.id}/rows`}>What it wrote, row by row (JSON)</Link>
           {isAdmin && (
             <Button
               type="button"

@@ -18,6 +18,28 @@ async function fetchList(url: string): Promise<ListView> {
   return response.json();
 }
 
+function NotesCell({ line, save }: { line: ListLine; save: (notes: string) => Promise<string | null> }) {
+  const [value, setValue] = useState(line.notes ?? "");
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <div>
+      <input
+        aria-label={`Notes for ${line.number}`}
+        value={value}
+        maxLength={500}
+        placeholder="e.g. customer supplies"
+        onChange={(e) => setValue(e.target.value)}
+        onBlur={async () => {
+          if (value === (line.notes ?? "")) return;
+          setError(await save(value));
+        }}
+        className="w-40 rounded-md border-2 border-rule-strong bg-ground px-2 py-1 text-sm"
+      />
+      {error && <p className="text-sm font-bold text-caution">{error}</p>}
+    </div>
+  );
+}
+
 function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number) => Promise<string | null> }) {
   const [value, setValue] = useState(String(line.quantity));
   const [error, setError] = useState<string | null>(null);
@@ -126,6 +148,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
         },
       },
       { accessorKey: "quantity", header: "Qty", cell: ({ row }) => <QuantityCell key={row.original.quantity} line={row.original} save={(q) => patch(row.original, { quantity: q })} /> },
+      { accessorKey: "notes", header: "Notes", enableSorting: false, cell: ({ row }) => <NotesCell key={row.original.notes ?? ""} line={row.original} save={(n) => patch(row.original, { notes: n })} /> },
       {
         id: "warnings",
         header: "Check",

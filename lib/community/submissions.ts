@@ -127,6 +127,20 @@ async function assertSubmissionRate(userId: string): Promise<void> {
   }
 }
 
+/** The columns a proposal's form fills, for a new proposal and for one changed after being sent back. */
+function proposalFields(original: ResolvedOriginal, standard: ResolvedStandard, input: SubmissionInput) {
+  return {
+    originalPartId: original.partId,
+    newPart: original.newPart,
+    standardPartId: standard.standardPartId,
+    newStandard: standard.newStandard,
+    fit: input.fit,
+    measurements: input.measurements,
+    notes: input.notes || null,
+    checks: standard.checks,
+  };
+}
+
 function snapshot(s: Submission): Record<string, unknown> {
   return {
     status: s.status,
@@ -181,17 +195,7 @@ export async function createSubmission(user: Actor, input: SubmissionInput): Pro
   const photos = await checkUploadedPhotos(user.id, input.photoIds, null);
   const submission = await sequelize.transaction(async (transaction) => {
     const created = await Submission.create(
-      {
-        userId: user.id,
-        originalPartId: original.partId,
-        newPart: original.newPart,
-        standardPartId: standard.standardPartId,
-        newStandard: standard.newStandard,
-        fit: input.fit,
-        measurements: input.measurements,
-        notes: input.notes || null,
-        checks: standard.checks,
-      },
+      { userId: user.id, ...proposalFields(original, standard, input) },
       { transaction },
     );
     if (photos.usable.length > 0) await SubmissionPhoto.update({ submissionId: created.id }, { where: { id: photos.usable, userId: user.id }, transaction });
@@ -218,14 +222,7 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
     const before = snapshot(existing);
     const [count, rows] = await Submission.update(
       {
-        originalPartId: original.partId,
-        newPart: original.newPart,
-        standardPartId: standard.standardPartId,
-        newStandard: standard.newStandard,
-        fit: input.fit,
-        measurements: input.measurements,
-        notes: input.notes || null,
-        checks: standard.checks,
+        ...proposalFields(original, standard, input),
         status: "pending",
         version: existing.version + 1,
         digestSentAt: null,

@@ -1,10 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { ListEditor } from "@/components/lists/list-editor";
 import { Cautions } from "@/components/safety/cautions";
 import { requirePagePermission } from "@/lib/auth/session";
-import { AppError } from "@/lib/errors";
+import { loadByIdOr404 } from "@/lib/http/load-or-404";
 import { getList } from "@/lib/lists/lists";
 
 export const metadata: Metadata = { title: "Job list" };
@@ -12,12 +11,7 @@ export const metadata: Metadata = { title: "Job list" };
 export default async function ListPage({ params }: { params: Promise<{ id: string }> }) {
   const { id: idText } = await params;
   const user = await requirePagePermission("lists:manage", `/lists/${idText}`);
-  const id = Number(idText);
-  if (!Number.isInteger(id) || id <= 0 || id >= 2 ** 31) notFound();
-  const view = await getList({ userId: user.id }, id).catch((error) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const view = await loadByIdOr404(idText, (id) => getList({ userId: user.id }, id));
   return (
     <div className="space-y-6">
       <header className="space-y-1">

@@ -1,16 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { FitBadge } from "@/components/parts/fit-badge";
 import { StatusBadge } from "@/components/proposals/status-badge";
 import { DecisionPanel } from "@/components/review/decision-panel";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
+import { loadByIdOr404 } from "@/lib/http/load-or-404";
 import { CATEGORY_NAMES, STANDARD_KIND_NAMES } from "@/lib/catalogue/kinds";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import { MEASURED_NAMES } from "@/lib/community/kinds";
 import { getSubmissionDetail } from "@/lib/community/views";
-import { AppError } from "@/lib/errors";
 
 export const metadata: Metadata = { title: "Review a proposal" };
 
@@ -26,12 +25,7 @@ function deviationWord(d: number): string {
 export default async function ReviewProposalPage({ params }: { params: Promise<{ id: string }> }) {
   const { id: idText } = await params;
   const user = await requirePagePermission("proposals:review", `/review/${idText}`);
-  const id = Number(idText);
-  if (!Number.isInteger(id) || id <= 0 || id >= 2 ** 31) notFound();
-  const d = await getSubmissionDetail(id, user).catch((error) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const d = await loadByIdOr404(idText, (id) => getSubmissionDetail(id, user));
   const warnings = d.checks.filter((c) => c.level === "warning");
 
   return (

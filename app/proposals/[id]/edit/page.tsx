@@ -4,22 +4,17 @@ import { notFound } from "next/navigation";
 import { ProposalForm } from "@/components/proposals/proposal-form";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
+import { loadByIdOr404 } from "@/lib/http/load-or-404";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import { loadFormChoices } from "@/lib/community/form-choices";
 import { getSubmissionDetail } from "@/lib/community/views";
-import { AppError } from "@/lib/errors";
 
 export const metadata: Metadata = { title: "Change your proposal" };
 
 export default async function EditProposalPage({ params }: { params: Promise<{ id: string }> }) {
   const { id: idText } = await params;
   const user = await requirePagePermission("proposals:create", `/proposals/${idText}/edit`);
-  const id = Number(idText);
-  if (!Number.isInteger(id) || id <= 0 || id >= 2 ** 31) notFound();
-  const detail = await getSubmissionDetail(id, user).catch((error) => {
-    if (error instanceof AppError && error.code === "not_found") notFound();
-    throw error;
-  });
+  const detail = await loadByIdOr404(idText, (id) => getSubmissionDetail(id, user));
   if (!detail.mine) notFound();
 
   if (detail.status !== "changes_requested") {
@@ -47,7 +42,7 @@ export default async function EditProposalPage({ params }: { params: Promise<{ i
         </Notice>
       </header>
       <ProposalForm
-        editId={id}
+        editId={detail.id}
         choices={choices}
         defaults={{
           original: p.isNew
