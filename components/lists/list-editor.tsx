@@ -108,12 +108,12 @@ export function ListEditor({ initial }: { initial: ListView }) {
         accessorKey: "description",
         header: "Part",
         cell: ({ row }) => (
-          <>
+          <div className="min-w-40">
             {row.original.description}
             <span className="block text-sm text-ink-soft">
               {row.original.maker} · {row.original.categoryName}
             </span>
-          </>
+          </div>
         ),
       },
       {
