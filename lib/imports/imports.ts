@@ -96,7 +96,7 @@ const progressWriter = (id: number, phase: "parsing" | "committing", totalBytes:
   return async (rows: number, bytes: number) => {
     if (Date.now() - last < 250) return;
     last = Date.now();
-    await sequelize.query("UPDATE imports SET progress = :progress WHERE id = :id", { replacements: { id, progress: JSON.stringify({ phase, rows, bytes, totalBytes }) } });
+    await sequelize.query("UPDATE imports SET progress = :progress, updated_at = now() WHERE id = :id", { replacements: { id, progress: JSON.stringify({ phase, rows, bytes, totalBytes }) } });
   };
 };
 
@@ -241,8 +241,25 @@ export interface ImportView {
   rejectionsTotal: number;
 }
 
+// Work that has written no progress for this long was cut off (the server stopped); a commit's transaction died with it.
+const STALLED_MS = 10 * 60 * 1000;
+
+async function recoverStalled(row: Import): Promise<void> {
+  if (!["uploaded", "parsing", "committing"].includes(row.status) || Date.now() - row.updatedAt.getTime() < STALLED_MS) return;
+  const message =
+    row.status === "committing"
+      ? "The commit was interrupted (the server stopped), so nothing was changed. Commit again."
+      : "Reading the file was interrupted (the server stopped). Run the dry run again.";
+  const status = row.status === "committing" ? "parsed" : "failed";
+  await sequelize.query("UPDATE imports SET status = :status, error_message = :message, updated_at = now() WHERE id = :id AND status = :was", {
+    replacements: { status, message, id: row.id, was: row.status },
+  });
+  await row.reload();
+}
+
 export async function getImport(actor: Actor, id: number, rejectionLimit = 200): Promise<ImportView> {
   const row = await loadFor(actor, id);
+  await recoverStalled(row);
   const [by] = await sequelize.query<{ email: string }>("SELECT email FROM users WHERE id = :id", { replacements: { id: row.userId ?? "" }, type: QueryTypes.SELECT });
   const rejections = await sequelize.query<{ line: number; column_name: string | null; reason: string }>(
     "SELECT line, column_name, reason FROM import_rejections WHERE import_id = :id ORDER BY line LIMIT :limit",
@@ -294,7 +311,8 @@ export async function rejectedCsv(actor: Actor, id: number): Promise<string> {
   const fields = ["line", "column", "reason", ...row.headers.filter(Boolean)];
   return Papa.unparse(
     { fields, data: rejections.map((r) => [r.line, r.column_name ?? "", r.reason, ...row.headers.filter(Boolean).map((h) => r.raw[h] ?? "")]) },
-    { newline: "\r\n" },
+    // A cell starting with = + - @ is quoted with a leading ' so that a spreadsheet does not run it as a formula.
+    { newline: "\r\n", escapeFormulae: true },
   );
 }
 

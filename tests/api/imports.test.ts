@@ -192,6 +192,17 @@ describe("other files", () => {
     expect((await settled(admin, second.body.id)).counts).toMatchObject({ rows: 1, newParts: 1 });
   });
 
+  it("notices work cut off by a server stop, and lets the dry run run again", async () => {
+    const response = await upload(admin, SAMPLE, "interrupted.csv");
+    const id = response.body.id;
+    await settled(admin, id);
+    await sequelize.query("UPDATE imports SET status = 'parsing', updated_at = now() - interval '11 minutes' WHERE id = :id", { replacements: { id } });
+    const stalled = (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body;
+    expect(stalled).toMatchObject({ status: "failed", errorMessage: expect.stringContaining("interrupted") });
+    expect((await send("patch", `/api/imports/${id}`, { mapping: stalled.mapping }, { cookie: admin })).status).toBe(202);
+    expect((await settled(admin, id)).status).toBe("parsed");
+  });
+
   it("refuses a file that is not a table, naming the file field", async () => {
     const response = await upload(admin, Buffer.from("just one line of words\n"), "notes.csv");
     expect(response.status).toBe(400);
