@@ -1,14 +1,13 @@
 import { z } from "zod";
 import { STANDARD_KINDS } from "@/lib/catalogue/kinds";
+import { idFromText } from "@/lib/validation/ids";
 
 export const lookupQuery = z.object({
   q: z.string({ error: "Type a factory number." }).trim().min(1, "Type a factory number.").max(60, "A factory number is at most 60 characters."),
   limit: z.coerce.number({ error: "limit must be a number." }).int("limit must be a whole number.").min(1, "limit is at least 1.").max(50, "limit is at most 50.").default(10),
 });
 
-export const partIdParam = z.object({
-  id: z.coerce.number({ error: "A part id is a number." }).int("A part id is a whole number.").positive("A part id is a positive number.").max(2_147_483_647, "No part has that id."),
-});
+export const partIdParam = z.object({ id: idFromText("part") });
 
 export const standardPartsQuery = z.object({
   q: z.string({ error: "Type a designation." }).trim().min(1, "Type a designation.").max(80, "A designation is at most 80 characters."),

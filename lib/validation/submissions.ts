@@ -1,10 +1,9 @@
 import { z } from "zod";
 import { FITS, PART_CATEGORIES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
+import { positiveId } from "@/lib/validation/ids";
 import { DECISIONS, MEASURED_DIMENSIONS, PHOTO_MAX_BYTES, PHOTO_TYPES, PHOTOS_PER_SUBMISSION } from "@/lib/community/kinds";
 
 // One schema for the proposal form in the browser and for POST/PATCH /api/submissions on the server.
-const id = (what: string) =>
-  z.number({ error: `Choose ${what}.` }).int(`Choose ${what}.`).positive(`Choose ${what}.`).max(2_147_483_647, `No such ${what}.`);
 
 const mm = (what: string) =>
   z
@@ -17,13 +16,13 @@ const mm = (what: string) =>
 const original = z
   .object({
     mode: z.enum(["existing", "new"], { error: "Say whether the part is in the catalogue or new." }),
-    partId: id("the part").nullable().optional(),
-    makerId: id("the maker").nullable().optional(),
+    partId: positiveId("the part").nullable().optional(),
+    makerId: positiveId("the maker").nullable().optional(),
     number: z.string().trim().max(60, "A factory number is at most 60 characters.").optional(),
     description: z.string().trim().max(200, "A description is at most 200 characters.").optional(),
     category: z.enum(PART_CATEGORIES, { error: "Choose what kind of part it is." }).nullable().optional(),
-    machineId: id("the machine").nullable().optional(),
-    assemblyId: id("the assembly").nullable().optional(),
+    machineId: positiveId("the machine").nullable().optional(),
+    assemblyId: positiveId("the assembly").nullable().optional(),
   })
   .superRefine((value, ctx) => {
     if (value.mode === "existing") {
@@ -40,7 +39,7 @@ const original = z
 const standard = z
   .object({
     mode: z.enum(["existing", "new"], { error: "Say whether the standard part is in the catalogue or new." }),
-    standardPartId: id("the standard part").nullable().optional(),
+    standardPartId: positiveId("the standard part").nullable().optional(),
     kind: z.enum(STANDARD_KINDS, { error: "Choose the kind of standard part." }).nullable().optional(),
     designation: z.string().trim().max(80, "A designation is at most 80 characters.").optional(),
     innerMm: mm("The bore"),
@@ -72,7 +71,7 @@ export const submissionInput = z.object({
   fit: z.enum(FITS, { error: "Choose how it fitted." }),
   measurements: z.array(measurementSchema).max(12, "At most 12 measurements.").default([]),
   notes: z.string().trim().max(2000, "Notes are at most 2000 characters.").default(""),
-  photoIds: z.array(id("the photo")).max(PHOTOS_PER_SUBMISSION, `At most ${PHOTOS_PER_SUBMISSION} photos.`).default([]),
+  photoIds: z.array(positiveId("the photo")).max(PHOTOS_PER_SUBMISSION, `At most ${PHOTOS_PER_SUBMISSION} photos.`).default([]),
 });
 export type SubmissionInput = z.output<typeof submissionInput>;
 export type SubmissionFormValues = z.input<typeof submissionInput>;
@@ -105,10 +104,6 @@ export const presignInput = z.object({
     .positive("The file is empty.")
     .max(PHOTO_MAX_BYTES, `A photo is at most ${PHOTO_MAX_BYTES / 1024 / 1024} MB.`),
   fileName: z.string().trim().max(200, "A file name is at most 200 characters.").optional(),
-});
-
-export const idParam = z.object({
-  id: z.coerce.number({ error: "An id is a number." }).int("An id is a whole number.").positive("An id is positive.").max(2_147_483_647, "Nothing has that id."),
 });
 
 export const submissionsQuery = z.object({

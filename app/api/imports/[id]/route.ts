@@ -4,7 +4,7 @@ import { handle, readJson } from "@/lib/http/handle";
 import { dryRun, getImport, setMapping } from "@/lib/imports/imports";
 import { mappingBody } from "@/lib/validation/imports";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

@@ -4,7 +4,7 @@ import { listAccess } from "@/lib/lists/access";
 import { deleteList, getList, updateList } from "@/lib/lists/lists";
 import { listPatch } from "@/lib/validation/lists";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

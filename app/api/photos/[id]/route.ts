@@ -4,7 +4,7 @@ import { AppError } from "@/lib/errors";
 import { handle } from "@/lib/http/handle";
 import { getObject } from "@/lib/storage/s3";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

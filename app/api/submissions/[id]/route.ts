@@ -3,7 +3,8 @@ import { deleteSubmission, updateSubmission } from "@/lib/community/submissions"
 import { getSubmissionDetail } from "@/lib/community/views";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam, submissionInput } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
+import { submissionInput } from "@/lib/validation/submissions";
 
 export const runtime = "nodejs";
 

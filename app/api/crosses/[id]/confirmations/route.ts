@@ -2,7 +2,8 @@ import { requirePermission } from "@/lib/auth/session";
 import { confirmCross } from "@/lib/community/submissions";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
-import { confirmationInput, idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
+import { confirmationInput } from "@/lib/validation/submissions";
 
 export const runtime = "nodejs";
 

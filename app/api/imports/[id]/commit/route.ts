@@ -3,7 +3,7 @@ import { requirePermission } from "@/lib/auth/session";
 import { handle } from "@/lib/http/handle";
 import { getImport, runCommit, startCommit } from "@/lib/imports/imports";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

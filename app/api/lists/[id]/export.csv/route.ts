@@ -2,7 +2,7 @@ import { handle } from "@/lib/http/handle";
 import { listAccess } from "@/lib/lists/access";
 import { csvFileName, getList, listCsv } from "@/lib/lists/lists";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

@@ -3,7 +3,7 @@ import { handle, readJson } from "@/lib/http/handle";
 import { addLine } from "@/lib/lists/lists";
 import { lineInput } from "@/lib/validation/lists";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

@@ -4,7 +4,7 @@ import { handle, readJson } from "@/lib/http/handle";
 import { setSharing } from "@/lib/lists/lists";
 import { shareInput } from "@/lib/validation/lists";
 import { parseWith } from "@/lib/validation/parse";
-import { idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
 
 export const runtime = "nodejs";
 

@@ -2,7 +2,8 @@ import { requirePermission } from "@/lib/auth/session";
 import { decide } from "@/lib/community/submissions";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
-import { decisionInput, idParam } from "@/lib/validation/submissions";
+import { idParam } from "@/lib/validation/ids";
+import { decisionInput } from "@/lib/validation/submissions";
 
 export const runtime = "nodejs";
 
