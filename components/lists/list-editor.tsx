@@ -2,7 +2,7 @@
 
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import useSWR from "swr";
 import { FitBadge } from "@/components/parts/fit-badge";
 import { Button } from "@/components/ui/button";
@@ -11,6 +11,18 @@ import { SortableTable } from "@/components/ui/sortable-table";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import { sendJson } from "@/lib/http/post-json";
 import type { ListLine, ListView } from "@/lib/lists/lists";
+
+const WIDE = "(min-width: 768px)";
+const subscribeWide = (onChange: () => void) => {
+  const query = window.matchMedia(WIDE);
+  query.addEventListener("change", onChange);
+  return () => query.removeEventListener("change", onChange);
+};
+
+/** A table on a wide screen, cards on a phone: one or the other is rendered, so each control exists once. */
+function useWideScreen(): boolean {
+  return useSyncExternalStore(subscribeWide, () => window.matchMedia(WIDE).matches, () => true);
+}
 
 async function fetchList(url: string): Promise<ListView> {
   const response = await fetch(url);
@@ -77,6 +89,7 @@ function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number)
 export function ListEditor({ initial }: { initial: ListView }) {
   const { data, mutate } = useSWR(`/api/lists/${initial.id}`, fetchList, { fallbackData: initial, revalidateOnFocus: false });
   const view = data ?? initial;
+  const wide = useWideScreen();
   const [number, setNumber] = useState("");
   const [quantity, setQuantity] = useState("1");
   const [message, setMessage] = useState<{ tone: "success" | "caution"; text: string } | null>(null);
@@ -85,125 +98,109 @@ export function ListEditor({ initial }: { initial: ListView }) {
   const [origin, setOrigin] = useState("");
   useEffect(() => setOrigin(window.location.origin), []);
 
-  const columns = useMemo<Array<ColumnDef<ListLine>>>(() => {
+  // The same cells serve the table on wide screens and the cards on a phone.
+  const cells = useMemo(() => {
     const patch = async (line: ListLine, body: Record<string, unknown>) => {
       const result = await sendJson("PATCH", `/api/lists/${view.id}/lines/${line.id}`, body);
       await mutate();
       return result.ok ? null : result.error.message;
     };
-    return [
-      {
-        accessorKey: "number",
-        header: "Factory number",
-        cell: ({ row }) => (
-          <>
-            <Link href={`/parts/${row.original.partId}`} className="num whitespace-nowrap font-bold">
-              {row.original.number}
-            </Link>
-            {row.original.requestedNumber && <span className="block text-sm text-ink-soft">asked for as {row.original.requestedNumber}</span>}
-          </>
-        ),
-      },
-      {
-        accessorKey: "description",
-        header: "Part",
-        cell: ({ row }) => (
-          <div className="min-w-40">
-            {row.original.description}
-            <span className="block text-sm text-ink-soft">
-              {row.original.maker} · {row.original.categoryName}
-            </span>
-          </div>
-        ),
-      },
-      {
-        id: "standard",
-        accessorFn: (l) => l.chosen?.designation ?? "",
-        header: "Order as",
-        cell: ({ row }) => {
-          const l = row.original;
-          if (!l.chosen) return <span className="text-ink-soft">no approved cross</span>;
-          return (
-            <div className="space-y-1">
-              {l.equivalents.length > 1 ? (
-                <select
-                  aria-label={`Standard part for ${l.number}`}
-                  value={l.chosen.standardPartId}
-                  onChange={(e) => void patch(l, { standardPartId: Number(e.target.value) })}
-                  className="num max-w-64 rounded-md border-2 border-rule-strong bg-ground px-2 py-1"
-                >
-                  {l.equivalents.map((e) => (
-                    <option key={e.standardPartId} value={e.standardPartId}>
-                      {e.designation}
-                    </option>
-                  ))}
-                </select>
-              ) : (
-                <span className="num font-bold">{l.chosen.designation}</span>
-              )}
-              <span className="num block text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
-              <FitBadge fit={l.chosen.fit} />
-            </div>
-          );
-        },
-      },
-      { accessorKey: "quantity", header: "Qty", cell: ({ row }) => <QuantityCell key={row.original.quantity} line={row.original} save={(q) => patch(row.original, { quantity: q })} /> },
-      { accessorKey: "notes", header: "Notes", enableSorting: false, cell: ({ row }) => <NotesCell key={row.original.notes ?? ""} line={row.original} save={(n) => patch(row.original, { notes: n })} /> },
-      {
-        id: "warnings",
-        header: "Check",
-        enableSorting: false,
-        cell: ({ row }) =>
-          row.original.warnings.length === 0 ? (
-            <span className="text-sm text-ink-soft">—</span>
-          ) : (
-            <ul className="space-y-1 text-sm">
-              {row.original.warnings.map((w) => (
-                <li key={w} className="font-bold text-caution">
-                  ⚠ {w}
-                </li>
-              ))}
-            </ul>
-          ),
-      },
-      {
-        id: "actions",
-        header: "",
-        enableSorting: false,
-        cell: ({ row }) => (
-          <div className="flex flex-col items-start gap-1 text-sm">
-            {row.original.hasAssembly && (
-              <button
-                type="button"
-                className="underline"
-                onClick={async () => {
-                  const result = await sendJson<{ added: number; machine: string; assembly: string }>("POST", `/api/lists/${view.id}/lines/${row.original.id}/assembly`, {});
-                  await mutate();
-                  setMessage(
-                    result.ok
-                      ? { tone: "success", text: result.data.added === 0 ? `Everything from the ${result.data.assembly} (${result.data.machine}) is already on the list.` : `Added ${result.data.added} more ${result.data.added === 1 ? "part" : "parts"} of the ${result.data.assembly} (${result.data.machine}).` }
-                      : { tone: "caution", text: result.error.message },
-                  );
-                }}
+    const addAssembly = async (line: ListLine) => {
+      const result = await sendJson<{ added: number; machine: string; assembly: string }>("POST", `/api/lists/${view.id}/lines/${line.id}/assembly`, {});
+      await mutate();
+      setMessage(
+        result.ok
+          ? { tone: "success", text: result.data.added === 0 ? `Everything from the ${result.data.assembly} (${result.data.machine}) is already on the list.` : `Added ${result.data.added} more ${result.data.added === 1 ? "part" : "parts"} of the ${result.data.assembly} (${result.data.machine}).` }
+          : { tone: "caution", text: result.error.message },
+      );
+    };
+    const remove = async (line: ListLine) => {
+      await sendJson("DELETE", `/api/lists/${view.id}/lines/${line.id}`);
+      await mutate();
+    };
+    return {
+      number: (l: ListLine) => (
+        <>
+          <Link href={`/parts/${l.partId}`} className="num whitespace-nowrap font-bold">
+            {l.number}
+          </Link>
+          {l.requestedNumber && <span className="block text-sm text-ink-soft">asked for as {l.requestedNumber}</span>}
+        </>
+      ),
+      part: (l: ListLine) => (
+        <div className="min-w-40">
+          {l.description}
+          <span className="block text-sm text-ink-soft">
+            {l.maker} · {l.categoryName}
+          </span>
+        </div>
+      ),
+      standard: (l: ListLine) => {
+        if (!l.chosen) return <span className="text-ink-soft">no approved cross</span>;
+        return (
+          <div className="space-y-1">
+            {l.equivalents.length > 1 ? (
+              <select
+                aria-label={`Standard part for ${l.number}`}
+                value={l.chosen.standardPartId}
+                onChange={(e) => void patch(l, { standardPartId: Number(e.target.value) })}
+                className="num max-w-64 rounded-md border-2 border-rule-strong bg-ground px-2 py-1"
               >
-                Add the rest of the assembly
-              </button>
+                {l.equivalents.map((e) => (
+                  <option key={e.standardPartId} value={e.standardPartId}>
+                    {e.designation}
+                  </option>
+                ))}
+              </select>
+            ) : (
+              <span className="num font-bold">{l.chosen.designation}</span>
             )}
-            <button
-              type="button"
-              className="underline"
-              onClick={async () => {
-                await sendJson("DELETE", `/api/lists/${view.id}/lines/${row.original.id}`);
-                await mutate();
-              }}
-            >
-              Remove
-            </button>
+            <span className="num block text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
+            <FitBadge fit={l.chosen.fit} />
           </div>
-        ),
+        );
       },
-    ];
+      quantity: (l: ListLine) => <QuantityCell key={l.quantity} line={l} save={(q) => patch(l, { quantity: q })} />,
+      notes: (l: ListLine) => <NotesCell key={l.notes ?? ""} line={l} save={(n) => patch(l, { notes: n })} />,
+      warnings: (l: ListLine) =>
+        l.warnings.length === 0 ? (
+          <span className="text-sm text-ink-soft">—</span>
+        ) : (
+          <ul className="space-y-1 text-sm">
+            {l.warnings.map((w) => (
+              <li key={w} className="font-bold text-caution">
+                ⚠ {w}
+              </li>
+            ))}
+          </ul>
+        ),
+      actions: (l: ListLine) => (
+        <div className="flex flex-col items-start gap-1 text-sm">
+          {l.hasAssembly && (
+            <button type="button" className="underline" onClick={() => void addAssembly(l)}>
+              Add the rest of the assembly
+            </button>
+          )}
+          <button type="button" className="underline" onClick={() => void remove(l)}>
+            Remove
+          </button>
+        </div>
+      ),
+    };
   }, [view.id, mutate]);
+
+  const columns = useMemo<Array<ColumnDef<ListLine>>>(
+    () => [
+      { accessorKey: "number", header: "Factory number", cell: ({ row }) => cells.number(row.original) },
+      { accessorKey: "description", header: "Part", cell: ({ row }) => cells.part(row.original) },
+      { id: "standard", accessorFn: (l) => l.chosen?.designation ?? "", header: "Order as", cell: ({ row }) => cells.standard(row.original) },
+      { accessorKey: "quantity", header: "Qty", cell: ({ row }) => cells.quantity(row.original) },
+      { accessorKey: "notes", header: "Notes", enableSorting: false, cell: ({ row }) => cells.notes(row.original) },
+      { id: "warnings", header: "Check", enableSorting: false, cell: ({ row }) => cells.warnings(row.original) },
+      { id: "actions", header: "", enableSorting: false, cell: ({ row }) => cells.actions(row.original) },
+    ],
+    [cells],
+  );
 
   return (
     <div className="space-y-6">
@@ -247,8 +244,31 @@ export function ListEditor({ initial }: { initial: ListView }) {
 
       {view.lines.length === 0 ? (
         <Notice>The list is empty. Add parts by number above, or from a part page or the look-up results.</Notice>
-      ) : (
+      ) : wide ? (
         <SortableTable rows={view.lines} columns={columns} count={(shown) => `${shown} ${shown === 1 ? "line" : "lines"}, ${view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all`} rowTestId="list-line" />
+      ) : (
+        <>
+          <p className="text-sm text-ink-soft" role="status">
+            {view.lines.length} {view.lines.length === 1 ? "line" : "lines"}, {view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all
+          </p>
+          <ul className="space-y-3" aria-label="Lines">
+            {view.lines.map((l) => (
+              <li key={l.id} className="space-y-2 rounded-lg border border-rule bg-ground-raised p-3" data-testid="list-line">
+                <div className="flex items-start justify-between gap-3">
+                  <div>
+                    {cells.number(l)}
+                    {cells.part(l)}
+                  </div>
+                  {cells.quantity(l)}
+                </div>
+                {cells.standard(l)}
+                {l.warnings.length > 0 && cells.warnings(l)}
+                {cells.notes(l)}
+                {cells.actions(l)}
+              </li>
+            ))}
+          </ul>
+        </>
       )}
 
       {view.totals.length > 0 && (

@@ -33,6 +33,7 @@ describe("a shop builds a job list and downloads it", () => {
     await page.getByLabel("What is the job?").fill("Water pump rebuild, customer's 1948 crawler");
     await page.getByRole("button", { name: "Start the list" }).click();
     await page.waitForURL(/\/lists\/\d+$/);
+    const listUrl = page.url();
 
     await page.getByLabel("Add a part by factory number").fill("cv 3003a");
     await page.getByRole("button", { name: "Add", exact: true }).click();
@@ -59,5 +60,13 @@ describe("a shop builds a job list and downloads it", () => {
     await page.waitForURL(/\/print$/);
     expect(await page.getByTestId("sheet-line").count()).toBe(lines);
     await page.getByRole("heading", { name: "Pressing and heating bearings" }).waitFor();
+
+    // On a phone the lines are cards, with the quantity in reach.
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto(listUrl);
+    expect(await page.getByTestId("list-line").count()).toBe(lines);
+    const phoneQuantity = page.getByLabel("Quantity of CV-3003-B");
+    expect(await phoneQuantity.isVisible()).toBe(true);
+    expect(await phoneQuantity.inputValue()).toBe("2");
   });
 });
