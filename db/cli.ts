@@ -4,6 +4,7 @@ import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
 import { seedLargeCatalogue } from "@/db/seeders/large";
 import { sendProposalDigest } from "@/lib/community/digest";
+import { sweepAbandonedPhotos } from "@/lib/community/photos";
 
 const usage = `Usage: tsx db/cli.ts <command>
   migrate          apply every pending migration
@@ -12,7 +13,8 @@ const usage = `Usage: tsx db/cli.ts <command>
   seed             load the demo data (refused in production)
   seed:if-empty    load the demo data only into an empty database
   seed:large       load a synthetic catalogue for benchmarks (--parts N, default 250000)
-  digest           mail reviewers one summary of the proposals that arrived since the last one`;
+  digest           mail reviewers one summary of the proposals that arrived since the last one
+  sweep-photos     delete photos uploaded more than a day ago and never attached to a proposal`;
 
 async function main(command: string | undefined, flags: string[]): Promise<void> {
   const log = (message: string) => console.log(`[db] ${message}`);
@@ -51,6 +53,9 @@ async function main(command: string | undefined, flags: string[]): Promise<void>
       if (result.recipients > 0 && result.sent === 0) process.exitCode = 1;
       break;
     }
+    case "sweep-photos":
+      log(`${await sweepAbandonedPhotos()} abandoned photos deleted`);
+      break;
     default:
       console.error(usage);
       process.exitCode = 2;

@@ -3,15 +3,14 @@ import Link from "next/link";
 import { NewListForm } from "@/components/lists/new-list-form";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
-import { listMakersWithMachines } from "@/lib/catalogue/browse";
+import { machineChoices } from "@/lib/catalogue/browse";
 import { listLists } from "@/lib/lists/lists";
 
 export const metadata: Metadata = { title: "Job lists" };
 
 export default async function ListsPage() {
   const user = await requirePagePermission("lists:manage", "/lists");
-  const [lists, makers] = await Promise.all([listLists(user.id), listMakersWithMachines()]);
-  const machines = makers.flatMap((m) => m.machines.map((ma) => ({ id: ma.id, label: `${m.name} ${ma.model}${ma.years ? ` (${ma.years})` : ""}` })));
+  const [lists, machines] = await Promise.all([listLists(user.id), machineChoices()]);
   return (
     <div className="grid gap-8 lg:grid-cols-[1fr_24rem]">
       <div className="space-y-4">

@@ -81,3 +81,8 @@ export async function getMachine(id: number): Promise<MachineDetail> {
     parts: parts.map((p) => ({ partId: p.part_id, number: p.number, description: p.description, category: p.category, assembly: p.assembly, quantity: p.quantity, serialNote: p.serial_note, standard: p.standard, fit: p.fit })),
   };
 }
+
+/** Every machine as one line ("Corvane Tractor Works Model 30 (1946–1952)"), for choosing one in a form. */
+export async function machineChoices(): Promise<Array<{ id: number; label: string }>> {
+  return (await listMakersWithMachines()).flatMap((m) => m.machines.map((ma) => ({ id: ma.id, label: `${m.name} ${ma.model}${ma.years ? ` (${ma.years})` : ""}` })));
+}

@@ -75,3 +75,15 @@ export async function deleteStoredPhotos(keys: string[]): Promise<void> {
     }
   }
 }
+
+/**
+ * Photos granted but never attached to a proposal (the member left the form) are deleted from storage and from the
+ * database after a day. Run by `npm run jobs:sweep-photos`.
+ */
+export async function sweepAbandonedPhotos(olderThanHours = 24): Promise<number> {
+  const abandoned = await SubmissionPhoto.findAll({ where: { submissionId: null, createdAt: { [Op.lt]: new Date(Date.now() - olderThanHours * 3_600_000) } } });
+  if (abandoned.length === 0) return 0;
+  await deleteStoredPhotos(abandoned.map((p) => p.objectKey));
+  await SubmissionPhoto.destroy({ where: { id: abandoned.map((p) => p.id), submissionId: null } });
+  return abandoned.length;
+}

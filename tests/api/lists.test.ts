@@ -27,6 +27,10 @@ describe("job lists belong to their owner", () => {
     expect((await send("patch", `/api/lists/${id}`, { title: "Mine now" }, { cookie: other })).status).toBe(404);
     expect((await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: other })).status).toBe(404);
     expect((await send("delete", `/api/lists/${id}`, undefined, { cookie: other })).status).toBe(404);
+    const renamed = await send("patch", `/api/lists/${id}`, { title: "Fan hub and water pump", notes: "Customer brings the pulley." }, { cookie: owner });
+    expect(renamed.status).toBe(200);
+    expect(renamed.body).toMatchObject({ title: "Fan hub and water pump", notes: "Customer brings the pulley.", machine: null });
+    expect((await send("patch", `/api/lists/${id}`, { machineId: 999999 }, { cookie: owner })).body.field).toBe("machineId");
     const mine = await send("get", "/api/lists", undefined, { cookie: owner });
     expect(mine.body.lists.map((l: { id: number }) => l.id)).toContain(id);
     expect((await send("get", "/api/lists", undefined, { cookie: other })).body.lists.map((l: { id: number }) => l.id)).not.toContain(id);

@@ -1,7 +1,9 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Assembly, AuditEvent, Confirmation, Cross, Maker, Machine, sequelize, StandardPart, Submission, User } from "@/db";
+import { Assembly, AuditEvent, Confirmation, Cross, Maker, Machine, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
 import { sendProposalDigest } from "@/lib/community/digest";
+import { sweepAbandonedPhotos } from "@/lib/community/photos";
+import { headObject } from "@/lib/storage/s3";
 import { send, signIn } from "../helpers/api";
 import { mailCount, waitForMail } from "../helpers/mail";
 
@@ -300,6 +302,19 @@ describe("POST /api/uploads/presign and photos", () => {
 
     await send("post", `/api/submissions/${created.body.submission.id}/decision`, { action: "approve" }, { cookie: moderator });
     expect((await send("get", photoUrl)).status).toBe(200);
+  });
+
+  it("deletes photos granted a day ago and never attached to a proposal, from storage too", async () => {
+    const bytes = Buffer.from("\xff\xd8\xff\xe0 abandoned \xff\xd9", "latin1");
+    const grant = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: bytes.length }, { cookie: member });
+    await fetch(grant.body.uploadUrl, { method: "PUT", body: bytes, headers: grant.body.headers });
+    const kept = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 10 }, { cookie: member });
+    const photo = await SubmissionPhoto.findByPk(grant.body.photoId);
+    await sequelize.query("UPDATE submission_photos SET created_at = now() - interval '25 hours' WHERE id = :id", { replacements: { id: photo!.id } });
+    expect(await sweepAbandonedPhotos()).toBeGreaterThanOrEqual(1);
+    expect(await SubmissionPhoto.findByPk(photo!.id)).toBeNull();
+    expect(await headObject(photo!.objectKey)).toBeNull();
+    expect(await SubmissionPhoto.findByPk(kept.body.photoId)).not.toBeNull();
   });
 
   it("refuses a photo that another member uploaded", async () => {

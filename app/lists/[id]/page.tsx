@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { ListDetailsForm } from "@/components/lists/list-details-form";
 import { ListEditor } from "@/components/lists/list-editor";
+import { machineChoices } from "@/lib/catalogue/browse";
 import { Cautions } from "@/components/safety/cautions";
 import { requirePagePermission } from "@/lib/auth/session";
 import { loadByIdOr404 } from "@/lib/http/load-or-404";
@@ -12,6 +14,7 @@ export default async function ListPage({ params }: { params: Promise<{ id: strin
   const { id: idText } = await params;
   const user = await requirePagePermission("lists:manage", `/lists/${idText}`);
   const view = await loadByIdOr404(idText, (id) => getList({ userId: user.id }, id));
+  const machines = await machineChoices();
   return (
     <div className="space-y-6">
       <header className="space-y-1">
@@ -24,7 +27,9 @@ export default async function ListPage({ params }: { params: Promise<{ id: strin
             For the <Link href={`/machines/${view.machine.id}`}>{view.machine.maker} {view.machine.model}</Link>
           </p>
         )}
+        {view.notes && <p className="whitespace-pre-line">{view.notes}</p>}
       </header>
+      <ListDetailsForm id={view.id} title={view.title} machineId={view.machine?.id ?? null} notes={view.notes} machines={machines} />
       <ListEditor initial={view} />
       {view.cautions.length > 0 && <Cautions kinds={view.cautions} />}
     </div>

@@ -1,0 +1,56 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { sendJson } from "@/lib/http/post-json";
+
+/** Renames the job, changes its machine or its notes. */
+export function ListDetailsForm({ id, title, machineId, notes, machines }: { id: number; title: string; machineId: number | null; notes: string | null; machines: Array<{ id: number; label: string }> }) {
+  const router = useRouter();
+  const [values, setValues] = useState({ title, machineId: machineId ? String(machineId) : "", notes: notes ?? "" });
+  const [state, setState] = useState<{ busy: boolean; error: string | null; saved: boolean }>({ busy: false, error: null, saved: false });
+  return (
+    <details className="no-print rounded-lg border border-rule bg-ground-raised p-4">
+      <summary className="cursor-pointer font-bold">Change the title, machine or notes</summary>
+      <form
+        className="mt-3 space-y-3"
+        onSubmit={async (e) => {
+          e.preventDefault();
+          setState({ busy: true, error: null, saved: false });
+          const result = await sendJson("PATCH", `/api/lists/${id}`, { title: values.title, machineId: values.machineId ? Number(values.machineId) : null, notes: values.notes });
+          setState({ busy: false, error: result.ok ? null : result.error.message, saved: result.ok });
+          if (result.ok) router.refresh();
+        }}
+      >
+        <Field id="edit-title" label="What is the job?" value={values.title} onChange={(e) => setValues({ ...values, title: e.target.value })} error={state.error ?? undefined} />
+        <div className="space-y-1">
+          <label htmlFor="edit-machine" className="block font-bold">
+            Machine
+          </label>
+          <select id="edit-machine" value={values.machineId} onChange={(e) => setValues({ ...values, machineId: e.target.value })} className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg">
+            <option value="">Not for one machine</option>
+            {machines.map((m) => (
+              <option key={m.id} value={m.id}>
+                {m.label}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div className="space-y-1">
+          <label htmlFor="edit-notes" className="block font-bold">
+            Notes for the job
+          </label>
+          <textarea id="edit-notes" rows={3} maxLength={2000} value={values.notes} onChange={(e) => setValues({ ...values, notes: e.target.value })} className="block w-full rounded-md border-2 border-rule-strong bg-ground px-3 py-2" />
+        </div>
+        <div className="flex items-center gap-3">
+          <Button type="submit" variant="secondary" pending={state.busy}>
+            Save
+          </Button>
+          {state.saved && <span role="status">Saved.</span>}
+        </div>
+      </form>
+    </details>
+  );
+}
