@@ -2,7 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { QueueTable } from "@/components/review/queue-table";
 import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { SelectField } from "@/components/ui/select-field";
 import { Maker } from "@/db";
 import { requirePagePermission } from "@/lib/auth/session";
 import { CATEGORY_NAMES, PART_CATEGORIES, type PartCategory } from "@/lib/catalogue/kinds";
@@ -17,8 +19,6 @@ const DONE: Record<string, string> = {
 };
 
 const PAGE_SIZE = 50;
-
-const selectClass = "block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 py-2 text-lg";
 
 export default async function ReviewQueuePage({ searchParams }: { searchParams: Promise<{ category?: string; maker?: string; q?: string; done?: string; page?: string }> }) {
   await requirePagePermission("proposals:review", "/review");
@@ -49,37 +49,24 @@ export default async function ReviewQueuePage({ searchParams }: { searchParams: 
         </Notice>
       )}
       <form method="get" className="flex flex-wrap items-end gap-4 rounded-lg border border-rule bg-ground-raised p-4" aria-label="Filter the queue">
-        <div className="min-w-48 space-y-1">
-          <label htmlFor="category" className="block font-bold">
-            Kind of part
-          </label>
-          <select id="category" name="category" defaultValue={category ?? ""} className={selectClass}>
-            <option value="">All kinds</option>
-            {PART_CATEGORIES.map((c) => (
-              <option key={c} value={c}>
-                {CATEGORY_NAMES[c]}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div className="min-w-48 space-y-1">
-          <label htmlFor="maker" className="block font-bold">
-            Maker
-          </label>
-          <select id="maker" name="maker" defaultValue={makerId ?? ""} className={selectClass}>
-            <option value="">All makers</option>
-            {makers.map((m) => (
-              <option key={m.id} value={m.id}>
-                {m.name}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div className="min-w-56 flex-1 space-y-1">
-          <label htmlFor="q" className="block font-bold">
-            Number, designation or member
-          </label>
-          <input id="q" name="q" type="search" defaultValue={q ?? ""} className={selectClass} />
+        <SelectField id="category" label="Kind of part" name="category" defaultValue={category ?? ""} className="min-w-48">
+          <option value="">All kinds</option>
+          {PART_CATEGORIES.map((c) => (
+            <option key={c} value={c}>
+              {CATEGORY_NAMES[c]}
+            </option>
+          ))}
+        </SelectField>
+        <SelectField id="maker" label="Maker" name="maker" defaultValue={makerId ?? ""} className="min-w-48">
+          <option value="">All makers</option>
+          {makers.map((m) => (
+            <option key={m.id} value={m.id}>
+              {m.name}
+            </option>
+          ))}
+        </SelectField>
+        <div className="min-w-56 flex-1">
+          <Field id="q" label="Number, designation or member" name="q" type="search" defaultValue={q ?? ""} />
         </div>
         <Button type="submit" variant="secondary">
           Show

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { useApiForm } from "@/components/auth/use-api-form";
+import { useApiForm } from "@/lib/hooks/use-api-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";

@@ -4,9 +4,8 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useDropzone } from "react-dropzone";
 import { Notice } from "@/components/ui/notice";
+import { SelectField } from "@/components/ui/select-field";
 import { IMPORT_MAX_BYTES, type ImportTarget } from "@/lib/imports/kinds";
-
-const selectClass = "block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 py-2 text-lg";
 
 /** Drop a CSV: it is sent as it is, stored, and the dry run starts on the server; the page for it opens. */
 export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCatalogue: boolean; mappings: Array<{ id: number; name: string }> }) {
@@ -52,28 +51,18 @@ export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCa
         Import a spreadsheet
       </h2>
       <div className="grid gap-4 sm:grid-cols-2">
-        <div className="space-y-1">
-          <label htmlFor="target" className="block font-bold">
-            Into
-          </label>
-          <select id="target" value={target} onChange={(e) => setTarget(e.target.value as ImportTarget)} className={selectClass}>
-            {canCommitToCatalogue && <option value="catalogue">The catalogue (approved crosses)</option>}
-            <option value="review_queue">The review queue (proposals for moderators)</option>
-          </select>
-        </div>
-        <div className="space-y-1">
-          <label htmlFor="mapping" className="block font-bold">
-            Column mapping
-          </label>
-          <select id="mapping" value={mappingId} onChange={(e) => setMappingId(e.target.value)} className={selectClass}>
-            <option value="">Match the columns by their titles</option>
-            {mappings.map((m) => (
-              <option key={m.id} value={m.id}>
-                Saved: {m.name}
-              </option>
-            ))}
-          </select>
-        </div>
+        <SelectField id="target" label="Into" value={target} onChange={(e) => setTarget(e.target.value as ImportTarget)}>
+          {canCommitToCatalogue && <option value="catalogue">The catalogue (approved crosses)</option>}
+          <option value="review_queue">The review queue (proposals for moderators)</option>
+        </SelectField>
+        <SelectField id="mapping" label="Column mapping" value={mappingId} onChange={(e) => setMappingId(e.target.value)}>
+          <option value="">Match the columns by their titles</option>
+          {mappings.map((m) => (
+            <option key={m.id} value={m.id}>
+              Saved: {m.name}
+            </option>
+          ))}
+        </SelectField>
       </div>
       <div
         {...getRootProps({

@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/select-field";
 import { sendJson } from "@/lib/http/post-json";
 
 /** Renames the job, changes its machine or its notes. */
@@ -25,19 +26,14 @@ export function ListDetailsForm({ id, title, machineId, notes, machines }: { id:
         }}
       >
         <Field id="edit-title" label="What is the job?" value={values.title} onChange={(e) => setValues({ ...values, title: e.target.value })} error={state.error ?? undefined} />
-        <div className="space-y-1">
-          <label htmlFor="edit-machine" className="block font-bold">
-            Machine
-          </label>
-          <select id="edit-machine" value={values.machineId} onChange={(e) => setValues({ ...values, machineId: e.target.value })} className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg">
-            <option value="">Not for one machine</option>
-            {machines.map((m) => (
-              <option key={m.id} value={m.id}>
-                {m.label}
-              </option>
-            ))}
-          </select>
-        </div>
+        <SelectField id="edit-machine" label="Machine" value={values.machineId} onChange={(e) => setValues({ ...values, machineId: e.target.value })}>
+          <option value="">Not for one machine</option>
+          {machines.map((m) => (
+            <option key={m.id} value={m.id}>
+              {m.label}
+            </option>
+          ))}
+        </SelectField>
         <div className="space-y-1">
           <label htmlFor="edit-notes" className="block font-bold">
             Notes for the job

@@ -4,6 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/select-field";
 import { postJson } from "@/lib/http/post-json";
 
 /** A new job list: a title that says the job, and the machine if it is for one. */
@@ -27,19 +28,14 @@ export function NewListForm({ machines }: { machines: Array<{ id: number; label:
     >
       <h2 className="text-xl">Start a list for a job</h2>
       <Field id="list-title" label="What is the job?" hint="For example: water pump rebuild, customer's 1948 crawler." value={title} onChange={(e) => setTitle(e.target.value)} error={error ?? undefined} />
-      <div className="space-y-1">
-        <label htmlFor="list-machine" className="block font-bold">
-          Machine (optional)
-        </label>
-        <select id="list-machine" value={machineId} onChange={(e) => setMachineId(e.target.value)} className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg">
-          <option value="">Not for one machine</option>
-          {machines.map((m) => (
-            <option key={m.id} value={m.id}>
-              {m.label}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SelectField id="list-machine" label="Machine (optional)" value={machineId} onChange={(e) => setMachineId(e.target.value)}>
+        <option value="">Not for one machine</option>
+        {machines.map((m) => (
+          <option key={m.id} value={m.id}>
+            {m.label}
+          </option>
+        ))}
+      </SelectField>
       <Button type="submit" pending={busy}>
         Start the list
       </Button>

@@ -1,19 +1,19 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useMemo, useState, type ReactNode } from "react";
-import { useFieldArray, useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
+import { useFieldArray, useWatch, type FieldErrors } from "react-hook-form";
+import { useApiForm } from "@/lib/hooks/use-api-form";
 import { PartPicker, StandardPicker, type PickedPart, type PickedStandard } from "@/components/proposals/pickers";
 import { PhotoDrop, type PhotoItem } from "@/components/proposals/photo-drop";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { SelectField } from "@/components/ui/select-field";
 import { CATEGORY_NAMES, FIT_NAMES, FITS, PART_CATEGORIES, STANDARD_KIND_NAMES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
 import { checkStandard } from "@/lib/community/checks";
 import { MEASURED_DIMENSIONS, MEASURED_NAMES, type ProposalCheck } from "@/lib/community/kinds";
 import type { SubmitOutcome } from "@/lib/community/submissions";
-import { sendJson } from "@/lib/http/post-json";
 import { submissionInput, type SubmissionFormValues, type SubmissionInput } from "@/lib/validation/submissions";
 
 export interface FormChoices {
@@ -34,8 +34,6 @@ export interface ProposalFormProps {
 
 const numberOrNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
-const selectClass = "block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 py-2 text-lg focus:border-brass";
-
 function Choice({ name, value, checked, onChange, children, testId }: { name: string; value: string; checked: boolean; onChange: () => void; children: ReactNode; testId?: string }) {
   return (
     <label className={`flex cursor-pointer items-start gap-3 rounded-md border-2 p-3 ${checked ? "border-brass bg-brass-wash" : "border-rule bg-ground-raised"}`} data-testid={testId}>
@@ -55,20 +53,6 @@ function Section({ number, title, hint, children }: { number: number; title: str
       {hint && <p className="-mt-2 text-ink-soft">{hint}</p>}
       {children}
     </fieldset>
-  );
-}
-
-function SelectField({ id, label, error, children, ...props }: React.SelectHTMLAttributes<HTMLSelectElement> & { id: string; label: string; error?: string }) {
-  return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block font-bold">
-        {label}
-      </label>
-      <select id={id} aria-invalid={error ? true : undefined} className={selectClass} {...props}>
-        {children}
-      </select>
-      {error && <p className="text-sm font-bold text-caution">✕ {error}</p>}
-    </div>
   );
 }
 
@@ -137,19 +121,23 @@ function errorAt(errors: FieldErrors<SubmissionFormValues>, path: string): strin
 
 /** The proposal form; the same zod schema checks it here and in the route handler. */
 export function ProposalForm({ choices, defaults, pickedPart: initialPart, pickedStandard: initialStandard, photos, editId }: ProposalFormProps) {
-  const form = useForm<SubmissionFormValues, unknown, SubmissionInput>({
-    resolver: zodResolver(submissionInput as never) as unknown as Resolver<SubmissionFormValues, unknown, SubmissionInput>,
+  const [outcome, setOutcome] = useState<Outcome | null>(null);
+  const { form, onSubmit, formError } = useApiForm<SubmissionFormValues, SubmissionInput, Outcome>({
+    schema: submissionInput,
+    endpoint: editId ? `/api/submissions/${editId}` : "/api/submissions",
+    method: editId ? "PATCH" : "POST",
     defaultValues: defaults,
-    mode: "onTouched",
+    onSuccess: (data) => {
+      setOutcome(data);
+      window.scrollTo({ top: 0 });
+    },
   });
-  const { register, control, setValue, formState, handleSubmit, setError } = form;
+  const { register, control, setValue, formState } = form;
   const errors = formState.errors;
   const measurements = useFieldArray({ control, name: "measurements" });
   const [pickedPart, setPickedPart] = useState(initialPart);
   const [pickedStandard, setPickedStandard] = useState(initialStandard);
   const [photosBusy, setPhotosBusy] = useState(false);
-  const [formError, setFormError] = useState<string | null>(null);
-  const [outcome, setOutcome] = useState<Outcome | null>(null);
 
   const originalMode = useWatch({ control, name: "original.mode" });
   const standardMode = useWatch({ control, name: "standard.mode" });
@@ -165,24 +153,6 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
   }, [standardMode, standard]);
 
   const machines = choices.machines.filter((m) => m.makerId === Number(makerId));
-
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    const result = await sendJson<Outcome>(editId ? "PATCH" : "POST", editId ? `/api/submissions/${editId}` : "/api/submissions", values);
-    if (result.ok) {
-      setOutcome(result.data);
-      window.scrollTo({ top: 0 });
-      return;
-    }
-    let placed = false;
-    for (const [name, message] of Object.entries(result.error.fields ?? {})) {
-      if (["original", "standard", "fit", "measurements", "notes", "photoIds"].includes(name.split(".")[0])) {
-        setError(name as never, { message });
-        placed = true;
-      }
-    }
-    if (!placed || result.status !== 400) setFormError(result.error.message);
-  });
 
   if (outcome) return <Result outcome={outcome} edited={Boolean(editId)} />;
 

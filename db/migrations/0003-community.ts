@@ -59,6 +59,8 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.addIndex("submissions", ["status", "created_at"], t);
     await qi.addIndex("submissions", ["user_id", "created_at"], t);
     await qi.addIndex("submissions", ["original_part_id"], t);
+    // The part page finds an approved cross's photos through the proposal that made it.
+    await qi.addIndex("submissions", ["cross_id"], t);
 
     // Photos are uploaded straight to storage before the submission is saved; a row is written when the upload is
     // granted, and tied to its submission when that is saved.

@@ -64,10 +64,12 @@ export async function getPart(id: number): Promise<PartDetail> {
 
   const [crosses, whereUsed, sameAssembly] = await Promise.all([
     sequelize.query<{
-      id: number; fit: Fit; repair_method: string | null; notes: string | null; origin: string; confirmations: string;
+      id: number; fit: Fit; repair_method: string | null; notes: string | null; origin: string; confirmations: string; photos: number[];
       kind: StandardKind | null; designation: string | null; inner_mm: number | null; outer_mm: number | null; width_mm: number | null; length_mm: number | null; attributes: Record<string, unknown> | null;
     }>(
       `SELECT c.id, c.fit, c.repair_method, c.notes, c.origin, count(f.id) AS confirmations,
+              (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM submissions sub JOIN submission_photos ph ON ph.submission_id = sub.id
+               WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos,
               s.kind, s.designation, s.inner_mm, s.outer_mm, s.width_mm, s.length_mm, s.attributes
        FROM crosses c LEFT JOIN standard_parts s ON s.id = c.standard_part_id LEFT JOIN confirmations f ON f.cross_id = c.id
        WHERE c.original_part_id = :id AND c.status = 'approved'
@@ -94,14 +96,6 @@ export async function getPart(id: number): Promise<PartDetail> {
     ),
   ]);
 
-  const photoRows = crosses.length
-    ? await sequelize.query<{ cross_id: number; id: number }>(
-        `SELECT s.cross_id, ph.id FROM submissions s JOIN submission_photos ph ON ph.submission_id = s.id
-         WHERE s.status = 'approved' AND s.cross_id IN (:ids) ORDER BY ph.id`,
-        { replacements: { ids: crosses.map((c) => c.id) }, type: QueryTypes.SELECT },
-      )
-    : [];
-
   const cautions = new Set<CautionKind>();
   const byCategory = CATEGORY_CAUTIONS[part.category];
   if (byCategory) cautions.add(byCategory);
@@ -124,7 +118,7 @@ export async function getPart(id: number): Promise<PartDetail> {
       notes: c.notes,
       origin: c.origin,
       confirmations: Number(c.confirmations),
-      photos: photoRows.filter((p) => p.cross_id === c.id).map((p) => p.id),
+      photos: c.photos,
     })),
     whereUsed: whereUsed.map((u) => ({
       machineId: u.machine_id,

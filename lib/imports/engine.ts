@@ -383,5 +383,3 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
   await flush();
   return counts;
 }
-
-export type { Change };

@@ -1,4 +1,4 @@
-import { randomBytes } from "node:crypto";
+import { randomBytes, timingSafeEqual } from "node:crypto";
 import Papa from "papaparse";
 import { QueryTypes, type Transaction } from "sequelize";
 import { JobList, JobListLine, Machine, OriginalPart, sequelize } from "@/db";
@@ -120,13 +120,19 @@ async function equivalentsFor(partIds: number[]): Promise<Map<number, Equivalent
   return map;
 }
 
+function sameToken(stored: string | null, given: string): boolean {
+  if (!stored) return false;
+  const a = Buffer.from(stored);
+  const b = Buffer.from(given);
+  return a.length === b.length && timingSafeEqual(a, b);
+}
+
 /** The list as its owner sees it, or read-only through its share token. */
 export async function getList(access: { userId: string } | { token: string }, id: number): Promise<ListView> {
   const list = await JobList.findByPk(id);
-  const readOnly = !("userId" in access) || list?.userId !== access.userId;
-  if (!list || ("userId" in access ? list.userId !== access.userId : !list.shareToken || list.shareToken !== access.token)) {
-    throw new AppError("not_found", "There is no job list with that id.");
-  }
+  const readOnly = !("userId" in access);
+  const allowed = "userId" in access ? list?.userId === access.userId : sameToken(list?.shareToken ?? null, access.token);
+  if (!list || !allowed) throw new AppError("not_found", "There is no job list with that id.");
   const machine = list.machineId
     ? (await sequelize.query<{ id: number; model: string; maker: string }>("SELECT m.id, m.model, k.name AS maker FROM machines m JOIN makers k ON k.id = m.maker_id WHERE m.id = :id", { replacements: { id: list.machineId }, type: QueryTypes.SELECT }))[0] ?? null
     : null;

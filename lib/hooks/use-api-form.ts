@@ -5,7 +5,7 @@ import { useState } from "react";
 import { useForm, type FieldValues, type Path, type Resolver } from "react-hook-form";
 import type { z } from "zod";
 import type { ErrorBody } from "@/lib/errors";
-import { postJson } from "@/lib/http/post-json";
+import { sendJson } from "@/lib/http/post-json";
 
 /**
  * A form validated in the browser by the same zod schema the route handler uses, posted as JSON;
@@ -14,6 +14,8 @@ import { postJson } from "@/lib/http/post-json";
 export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(options: {
   schema: z.ZodType<TOutput, TInput>;
   endpoint: string;
+  /** POST unless given: PATCH for a form that changes what exists. */
+  method?: "POST" | "PATCH";
   defaultValues: TInput;
   onSuccess: (data: TResponse, values: TOutput) => void;
   onError?: (error: ErrorBody, status: number) => boolean;
@@ -28,19 +30,21 @@ export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(optio
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
-    const result = await postJson<TResponse>(options.endpoint, values);
+    const result = await sendJson<TResponse>(options.method ?? "POST", options.endpoint, values);
     if (result.ok) return options.onSuccess(result.data, values);
     if (options.onError?.(result.error, result.status)) return;
     const fields = result.error.fields ?? {};
     const known = Object.keys(options.defaultValues);
     let placed = false;
+    // Nested names ("original.number") land on the input of that path when its top-level field is the form's.
     for (const [name, message] of Object.entries(fields)) {
-      if (known.includes(name)) {
+      if (known.includes(name.split(".")[0])) {
         form.setError(name as Path<TInput>, { message });
         placed = true;
       }
     }
-    if (!placed) setFormError(result.error.message);
+    // A refusal that is not about the input (a conflict, a limit) is said above the button even when it names a field.
+    if (!placed || result.status !== 400) setFormError(result.error.message);
   });
 
   return { form, onSubmit, formError, setFormError, pending: form.formState.isSubmitting };
