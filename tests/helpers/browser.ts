@@ -1,5 +1,5 @@
-import { chromium, type Browser, type Page } from "playwright-core";
-import { afterAll, beforeAll, beforeEach } from "vitest";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, afterEach, beforeAll, beforeEach } from "vitest";
 import { CHROMIUM_PATH } from "./chromium";
 
 /** Debian's Chromium, headless, in a fresh throw-away profile (playwright makes one per launch), with the flags that keep it off the network it cannot reach here. */
@@ -26,6 +26,7 @@ export function launchBrowser(): Promise<Browser> {
  */
 export function pagePerTest(viewport = { width: 390, height: 844 }): () => Page {
   let browser: Browser | undefined;
+  let context: BrowserContext | undefined;
   let page: Page | undefined;
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -35,7 +36,15 @@ export function pagePerTest(viewport = { width: 390, height: 844 }): () => Page 
   });
   beforeEach(async () => {
     if (!browser) throw new Error("The browser did not start");
-    page = await (await browser.newContext({ viewport })).newPage();
+    context = await browser.newContext({ viewport });
+    page = await context.newPage();
+  });
+  // One open window at a time: a finished test's window left open can starve the next one of animation frames,
+  // which playwright waits on before it clicks.
+  afterEach(async () => {
+    await context?.close();
+    context = undefined;
+    page = undefined;
   });
   return () => {
     if (!page) throw new Error("No page: pagePerTest() hooks have not run");
