@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { NumberSearch } from "@/components/lookup/number-search";
 import { Notice } from "@/components/ui/notice";
 
@@ -5,6 +6,8 @@ const jobs: Array<{ title: string; text: string; href?: string; action?: string 
   {
     title: "Look up a factory number",
     text: "Type the number stamped on the worn part. See the standard bearing, seal or belt that replaces it, how sure the catalogue is, and which other machines share it.",
+    href: "/machines",
+    action: "Or browse the parts of a machine",
   },
   {
     title: "Measure a part with no number",
@@ -15,10 +18,14 @@ const jobs: Array<{ title: string; text: string; href?: string; action?: string 
   {
     title: "Share what you fitted",
     text: "Propose a cross with your measurements and photos. A moderator checks it before anyone else relies on it, and you hear back by e-mail.",
+    href: "/propose",
+    action: "Propose a cross",
   },
   {
     title: "Order the whole job",
     text: "Gather every part of a rebuild in a job list, then print it or export it to order by standard numbers.",
+    href: "/lists",
+    action: "Start a job list",
   },
 ];
 
@@ -59,9 +66,9 @@ export default async function HomePage({ searchParams }: { searchParams: Promise
               <h3 className="mb-1 text-lg">{job.title}</h3>
               <p className="text-ink-soft">{job.text}</p>
               {job.href && (
-                <a href={job.href} className="mt-2 inline-block font-bold">
+                <Link href={job.href} className="mt-2 inline-block font-bold">
                   {job.action} →
-                </a>
+                </Link>
               )}
             </li>
           ))}

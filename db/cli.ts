@@ -1,6 +1,7 @@
 import { sequelize } from "@/db";
 import { createMigrator } from "@/db/migrator";
 import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
+import { seedDemoLists } from "@/db/seeders/lists";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
 import { seedLargeCatalogue } from "@/db/seeders/large";
 import { sendProposalDigest } from "@/lib/community/digest";
@@ -33,12 +34,15 @@ async function main(command: string | undefined, flags: string[]): Promise<void>
     case "seed":
       await seedDemo(log);
       if (await isCatalogueEmpty()) await seedDemoCatalogue(log);
+      await seedDemoLists(log);
       break;
     case "seed:if-empty":
       if (await isDatabaseEmpty()) await seedDemo(log);
       else log("accounts already present; demo accounts skipped");
-      if (await isCatalogueEmpty()) await seedDemoCatalogue(log);
-      else log("catalogue already has parts; demo catalogue skipped");
+      if (await isCatalogueEmpty()) {
+        await seedDemoCatalogue(log);
+        await seedDemoLists(log);
+      } else log("catalogue already has parts; demo catalogue skipped");
       break;
     case "seed:large": {
       const at = flags.indexOf("--parts");

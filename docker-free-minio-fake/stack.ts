@@ -215,7 +215,11 @@ async function main(): Promise<number> {
     log("empty database: loading the demo data");
     await seedDemo(log);
   }
-  if (env.APP_ENV !== "production" && (await isCatalogueEmpty())) await seedDemoCatalogue(log);
+  if (env.APP_ENV !== "production" && (await isCatalogueEmpty())) {
+    await seedDemoCatalogue(log);
+    const { seedDemoLists } = await import("@/db/seeders/lists");
+    await seedDemoLists(log);
+  }
   if (benchLike) {
     const { OriginalPart } = await import("@/db");
     if ((await OriginalPart.count()) < 200_000) {

@@ -45,7 +45,7 @@ function NotesCell({ line, save }: { line: ListLine; save: (notes: string) => Pr
           if (value === (line.notes ?? "")) return;
           setError(await save(value));
         }}
-        className="w-40 rounded-md border-2 border-rule-strong bg-ground px-2 py-1 text-sm"
+        className="w-36 rounded-md border-2 border-rule-strong bg-ground px-2 py-1 text-sm"
       />
       {error && <p className="text-sm font-bold text-caution">{error}</p>}
     </div>
@@ -144,7 +144,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
                 aria-label={`Standard part for ${l.number}`}
                 value={l.chosen.standardPartId}
                 onChange={(e) => void patch(l, { standardPartId: Number(e.target.value) })}
-                className="num max-w-64 rounded-md border-2 border-rule-strong bg-ground px-2 py-1"
+                className="num max-w-56 rounded-md border-2 border-rule-strong bg-ground px-2 py-1"
               >
                 {l.equivalents.map((e) => (
                   <option key={e.standardPartId} value={e.standardPartId}>
@@ -175,13 +175,13 @@ export function ListEditor({ initial }: { initial: ListView }) {
           </ul>
         ),
       actions: (l: ListLine) => (
-        <div className="flex flex-col items-start gap-1 text-sm">
+        <div className="flex min-w-32 flex-col items-start gap-2 text-sm">
           {l.hasAssembly && (
-            <button type="button" className="underline" onClick={() => void addAssembly(l)}>
+            <button type="button" className="text-left underline" onClick={() => void addAssembly(l)}>
               Add the rest of the assembly
             </button>
           )}
-          <button type="button" className="underline" onClick={() => void remove(l)}>
+          <button type="button" className="text-left underline" onClick={() => void remove(l)}>
             Remove
           </button>
         </div>
@@ -193,10 +193,19 @@ export function ListEditor({ initial }: { initial: ListView }) {
     () => [
       { accessorKey: "number", header: "Factory number", cell: ({ row }) => cells.number(row.original) },
       { accessorKey: "description", header: "Part", cell: ({ row }) => cells.part(row.original) },
-      { id: "standard", accessorFn: (l) => l.chosen?.designation ?? "", header: "Order as", cell: ({ row }) => cells.standard(row.original) },
+      {
+        id: "standard",
+        accessorFn: (l) => l.chosen?.designation ?? "",
+        header: "Order as",
+        cell: ({ row }) => (
+          <div className="space-y-2">
+            {cells.standard(row.original)}
+            {row.original.warnings.length > 0 && cells.warnings(row.original)}
+          </div>
+        ),
+      },
       { accessorKey: "quantity", header: "Qty", cell: ({ row }) => cells.quantity(row.original) },
       { accessorKey: "notes", header: "Notes", enableSorting: false, cell: ({ row }) => cells.notes(row.original) },
-      { id: "warnings", header: "Check", enableSorting: false, cell: ({ row }) => cells.warnings(row.original) },
       { id: "actions", header: "", enableSorting: false, cell: ({ row }) => cells.actions(row.original) },
     ],
     [cells],

@@ -43,7 +43,21 @@ const columns: Array<ColumnDef<SubmissionRow>> = [
       );
     },
   },
-  { accessorKey: "submitter", header: "From", cell: ({ getValue }) => <span className="break-all text-sm">{getValue<string>()}</span> },
+  {
+    accessorKey: "submitter",
+    header: "From",
+    // An address breaks at its @, not mid-word: the name on one line, the domain under it.
+    cell: ({ getValue }) => {
+      const address = getValue<string>();
+      const at = address.indexOf("@");
+      return (
+        <span className="text-sm" title={address}>
+          {at > 0 ? address.slice(0, at) : address}
+          {at > 0 && <span className="block text-ink-soft">{address.slice(at)}</span>}
+        </span>
+      );
+    },
+  },
 ];
 
 /** Proposals waiting for a decision, oldest first unless sorted otherwise. */

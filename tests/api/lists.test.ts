@@ -119,3 +119,15 @@ describe("export and sharing", () => {
     expect((await send("get", `/api/lists/${id}?token=${token}`)).status).toBe(404);
   });
 });
+
+describe("the demo job list", () => {
+  it("gives the demo member a water pump rebuild on a crawler, the whole pump on it", async () => {
+    const member = await signIn("member@understudy.test");
+    const { body } = await send("get", "/api/lists", undefined, { cookie: member });
+    const demo = body.lists.find((l: { title: string }) => l.title.startsWith("Water pump rebuild"));
+    expect(demo).toMatchObject({ machine: expect.stringContaining("Crawler"), shared: false });
+    const list = (await send("get", `/api/lists/${demo.id}`, undefined, { cookie: member })).body;
+    expect(list.lines.length).toBeGreaterThan(2);
+    expect(list.lines.every((l: { description: string }) => /pump|impeller/i.test(l.description))).toBe(true);
+  });
+});
