@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { listAudit } from "@/lib/audit/record";
+import { EmailAddress } from "@/components/ui/email-address";
+import { auditActionWords, auditSubjectWords } from "@/lib/audit/actions";
+import { listAudit, type AuditRow } from "@/lib/audit/record";
 import { requirePagePermission } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Audit log" };
@@ -12,6 +14,15 @@ function changed(before: Record<string, unknown> | null, after: Record<string, u
     .filter((k) => JSON.stringify(before[k]) !== JSON.stringify(after[k]))
     .map((k) => `${k}: ${JSON.stringify(before[k])} → ${JSON.stringify(after[k])}`)
     .join("; ");
+}
+
+/** The record an entry is about, linked where an admin can open it. */
+function Subject({ event }: { event: AuditRow }) {
+  const words = `${auditSubjectWords(event.subjectType)} #${event.subjectId}`;
+  if (event.subjectType === "submission") return <Link href={`/review/${event.subjectId}`}>{words}</Link>;
+  if (event.subjectType === "import") return <Link href={`/admin/imports/${event.subjectId}`}>{words}</Link>;
+  if (event.subjectType === "user") return event.subjectEmail ? <EmailAddress address={event.subjectEmail} /> : <>a deleted account</>;
+  return <>{words}</>;
 }
 
 export default async function AuditPage({ searchParams }: { searchParams: Promise<{ before?: string }> }) {
@@ -39,10 +50,13 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
             {events.map((e) => (
               <tr key={e.id} className="border-t border-rule align-top" data-testid="audit-row">
                 <td className="num whitespace-nowrap p-3">{e.at.slice(0, 19).replace("T", " ")}</td>
-                <td className="break-all p-3">{e.actor ?? "—"}</td>
-                <td className="p-3 font-bold">{e.action}</td>
+                <td className="p-3">{e.actor ? <EmailAddress address={e.actor} /> : "—"}</td>
                 <td className="p-3">
-                  {e.subjectType === "submission" ? <Link href={`/review/${e.subjectId}`}>proposal #{e.subjectId}</Link> : `${e.subjectType} ${e.subjectId}`}
+                  <span className="font-bold">{auditActionWords(e.action)}</span>
+                  <span className="num block text-xs text-ink-soft">{e.action}</span>
+                </td>
+                <td className="p-3">
+                  <Subject event={e} />
                 </td>
                 <td className="num max-w-xl break-words p-3">{changed(e.before, e.after)}</td>
               </tr>

@@ -3,6 +3,7 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { FitBadge } from "@/components/parts/fit-badge";
+import { EmailAddress } from "@/components/ui/email-address";
 import { SortableTable } from "@/components/ui/sortable-table";
 import type { SubmissionRow } from "@/lib/community/views";
 
@@ -46,17 +47,11 @@ const columns: Array<ColumnDef<SubmissionRow>> = [
   {
     accessorKey: "submitter",
     header: "From",
-    // An address breaks at its @, not mid-word: the name on one line, the domain under it.
-    cell: ({ getValue }) => {
-      const address = getValue<string>();
-      const at = address.indexOf("@");
-      return (
-        <span className="text-sm" title={address}>
-          {at > 0 ? address.slice(0, at) : address}
-          {at > 0 && <span className="block text-ink-soft">{address.slice(at)}</span>}
-        </span>
-      );
-    },
+    cell: ({ getValue }) => (
+      <span className="text-sm">
+        <EmailAddress address={getValue<string>()} />
+      </span>
+    ),
   },
 ];
 

@@ -6,6 +6,7 @@ import { hashPassword, spendPasswordTime, verifyPassword } from "@/lib/auth/pass
 import type { Role } from "@/lib/auth/roles";
 import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "@/lib/auth/throttle";
 import { env } from "@/lib/env";
+import { recordAudit } from "@/lib/audit/record";
 import { AppError } from "@/lib/errors";
 import { sendMail, trySend } from "@/lib/mail/send";
 import { accountExistsMail, resetPasswordMail, verifyEmailMail } from "@/lib/mail/templates";
@@ -131,9 +132,15 @@ export async function setAccountRole(input: { actorId: string; userId: string; r
   if (input.actorId === input.userId) {
     throw new AppError("validation_failed", "You cannot change your own role; ask another admin.", { field: "role" });
   }
-  const user = await User.findByPk(input.userId);
-  if (!user) throw new AppError("not_found", "No account with that id.");
-  user.role = input.role;
-  await user.save();
-  return toAccountView(user);
+  return sequelize.transaction(async (transaction) => {
+    const user = await User.findByPk(input.userId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!user) throw new AppError("not_found", "No account with that id.");
+    const before = user.role;
+    if (before !== input.role) {
+      user.role = input.role;
+      await user.save({ transaction });
+      await recordAudit({ actorId: input.actorId, action: "account.role", subjectType: "user", subjectId: user.id, before: { role: before }, after: { role: input.role } }, transaction);
+    }
+    return toAccountView(user);
+  });
 }

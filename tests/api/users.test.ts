@@ -49,3 +49,21 @@ describe("PATCH /api/users/{id} (admins)", () => {
     expect(response.status).toBe(404);
   });
 });
+
+describe("role changes in the audit log", () => {
+  it("records who changed whose role, from what to what, and nothing when the role stays the same", async () => {
+    const admin = await signIn("admin@understudy.test");
+    const { body } = await send("get", "/api/users", undefined, { cookie: admin });
+    const target = body.users.find((u: { email: string }) => u.email === "club.member1@understudy.test");
+    expect((await send("patch", `/api/users/${target.id}`, { role: "moderator" }, { cookie: admin })).status).toBe(200);
+    expect((await send("patch", `/api/users/${target.id}`, { role: "moderator" }, { cookie: admin })).status).toBe(200);
+    expect((await send("patch", `/api/users/${target.id}`, { role: "member" }, { cookie: admin })).status).toBe(200);
+    const events = (await send("get", "/api/audit?limit=200", undefined, { cookie: admin })).body.events.filter(
+      (e: { action: string; subjectId: string }) => e.action === "account.role" && e.subjectId === target.id,
+    );
+    expect(events).toEqual([
+      expect.objectContaining({ actor: "admin@understudy.test", subjectEmail: "club.member1@understudy.test", before: { role: "moderator" }, after: { role: "member" } }),
+      expect.objectContaining({ before: { role: "member" }, after: { role: "moderator" } }),
+    ]);
+  });
+});

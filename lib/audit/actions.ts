@@ -1,0 +1,32 @@
+/** Every kind of entry the audit log keeps, in the words an admin reads on /audit. */
+export const AUDIT_ACTIONS = {
+  "submission.create": "Proposed a cross",
+  "submission.edit": "Changed a proposal",
+  "submission.withdraw": "Withdrew a proposal",
+  "submission.approve": "Approved a proposal",
+  "submission.reject": "Rejected a proposal",
+  "submission.request_changes": "Sent a proposal back for changes",
+  "cross.confirm": "Confirmed a cross",
+  "import.upload": "Uploaded an import",
+  "import.commit": "Committed an import",
+  "import.rollback": "Rolled back an import",
+  "list.share": "Shared a job list by link",
+  "list.unshare": "Stopped sharing a job list",
+  "account.notifications": "Changed their e-mail notices",
+  "account.role": "Changed an account's role",
+} as const;
+
+export type AuditAction = keyof typeof AUDIT_ACTIONS;
+
+/** The kinds of record an entry is about. */
+export const AUDIT_SUBJECTS = { submission: "proposal", cross: "cross", import: "import", job_list: "job list", user: "account" } as const;
+
+export type AuditSubject = keyof typeof AUDIT_SUBJECTS;
+
+export function auditActionWords(action: string): string {
+  return (AUDIT_ACTIONS as Record<string, string>)[action] ?? action;
+}
+
+export function auditSubjectWords(subjectType: string): string {
+  return (AUDIT_SUBJECTS as Record<string, string>)[subjectType] ?? subjectType;
+}
