@@ -58,7 +58,7 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
                 <td className="p-3">
                   <Subject event={e} />
                 </td>
-                <td className="num max-w-xl break-words p-3">{changed(e.before, e.after)}</td>
+                <td className="num min-w-64 p-3 [overflow-wrap:anywhere]">{changed(e.before, e.after)}</td>
               </tr>
             ))}
           </tbody>

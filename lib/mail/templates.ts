@@ -83,7 +83,7 @@ export function decisionMail(to: string, letter: DecisionLetter): OutgoingMail {
     approved: {
       subject: `Your cross is in the catalogue: ${what}`,
       paragraphs: [`A moderator checked your proposal ${what} and it is now in the catalogue, where other restorers will find it.`, "Thank you for taking the time to write it up."],
-      label: "See your proposals",
+      label: "See it on the part's page",
     },
     rejected: {
       subject: `Your proposal was not accepted: ${what}`,

@@ -108,9 +108,8 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     const part = await send("get", `/api/parts/${found.id}`);
     expect(part.body.crosses).toEqual([expect.objectContaining({ id: decided.body.cross.id, fit: "direct", origin: "community", standard: expect.objectContaining({ designation: "6205-2RS" }) })]);
 
-    const mail = await waitForMail(MEMBER, "Your cross is in the catalogue");
-    expect(mail.text).toContain(number);
-    expect(mail.text).toContain("/proposals");
+    const mail = await waitForMail(MEMBER, `Your cross is in the catalogue: ${number}`);
+    expect(mail.text).toContain(`/parts/${found.id}`);
   });
 
   it("sends a rejection with its reason, and refuses one without a reason", async () => {
