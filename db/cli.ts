@@ -1,9 +1,9 @@
 import { sequelize } from "@/db";
 import { createMigrator } from "@/db/migrator";
 import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
-import { seedDemoLists } from "@/db/seeders/lists";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
 import { seedLargeCatalogue } from "@/db/seeders/large";
+import { seedDemoLists } from "@/db/seeders/lists";
 import { sendProposalDigest } from "@/lib/community/digest";
 import { sweepAbandonedPhotos } from "@/lib/community/photos";
 
