@@ -5,7 +5,7 @@ import { useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { IMPORT_FIELDS, STATUS_WORDS, type ImportCounts, type ImportMappingValue } from "@/lib/imports/kinds";
+import { IMPORT_FIELDS, STATUS_WORDS, TARGET_WORDS, type ImportCounts, type ImportMappingValue } from "@/lib/imports/kinds";
 import type { ImportView } from "@/lib/imports/imports";
 import { sendJson } from "@/lib/http/post-json";
 
@@ -177,7 +177,7 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
         </p>
         <h1 className="text-3xl break-all">{view.fileName}</h1>
         <p className="text-ink-soft">
-          {STATUS_WORDS[view.status]} · into {view.target === "catalogue" ? "the catalogue" : "the review queue"} · {(view.sizeBytes / 1024).toFixed(0)} KB
+          {STATUS_WORDS[view.status]} · into {TARGET_WORDS[view.target]} · {(view.sizeBytes / 1024).toFixed(0)} KB
           {view.encoding ? `, ${view.encoding}, “${view.delimiter === "\t" ? "tab" : view.delimiter}” between columns` : ""} · sent by {view.by ?? "?"} on{" "}
           {new Date(view.createdAt).toUTCString().slice(0, 22)}
         </p>

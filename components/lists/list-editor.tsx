@@ -6,6 +6,7 @@ import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import useSWR from "swr";
 import { FitBadge } from "@/components/parts/fit-badge";
 import { Button } from "@/components/ui/button";
+import { FieldError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { SortableTable } from "@/components/ui/sortable-table";
 import { standardSizes } from "@/lib/catalogue/sizes";
@@ -37,6 +38,8 @@ function NotesCell({ line, save }: { line: ListLine; save: (notes: string) => Pr
     <div>
       <input
         aria-label={`Notes for ${line.number}`}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `notes-${line.id}-error` : undefined}
         value={value}
         maxLength={500}
         placeholder="e.g. customer supplies"
@@ -45,9 +48,9 @@ function NotesCell({ line, save }: { line: ListLine; save: (notes: string) => Pr
           if (value === (line.notes ?? "")) return;
           setError(await save(value));
         }}
-        className="w-36 rounded-md border-2 border-rule-strong bg-ground px-2 py-1 text-sm"
+        className={`w-36 rounded-md border-2 bg-ground px-2 py-1 text-sm ${error ? "border-caution" : "border-rule-strong"}`}
       />
-      {error && <p className="text-sm font-bold text-caution">{error}</p>}
+      {error && <FieldError id={`notes-${line.id}-error`}>{error}</FieldError>}
     </div>
   );
 }
@@ -59,7 +62,7 @@ function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number)
     const n = Number(value);
     if (n === line.quantity) return;
     if (!Number.isInteger(n) || n < 1 || n > 9999) {
-      setError("1 to 9999");
+      setError("A whole number from 1 to 9999.");
       return;
     }
     setError(await save(n));
@@ -68,6 +71,8 @@ function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number)
     <div>
       <input
         aria-label={`Quantity of ${line.number}`}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `quantity-${line.id}-error` : undefined}
         inputMode="numeric"
         value={value}
         onChange={(e) => setValue(e.target.value)}
@@ -80,7 +85,7 @@ function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number)
         }}
         className={`num w-20 rounded-md border-2 bg-ground px-2 py-1 text-lg ${error ? "border-caution" : "border-rule-strong"}`}
       />
-      {error && <p className="text-sm font-bold text-caution">{error}</p>}
+      {error && <FieldError id={`quantity-${line.id}-error`}>{error}</FieldError>}
     </div>
   );
 }

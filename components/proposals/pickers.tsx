@@ -1,6 +1,7 @@
 "use client";
 
 import { useId, useState } from "react";
+import { FieldError } from "@/components/ui/field";
 import type { StandardPartHit } from "@/lib/catalogue/find-standard";
 import { CATEGORY_NAMES, type StandardKind } from "@/lib/catalogue/kinds";
 import { useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
@@ -40,17 +41,20 @@ function SearchBox({ id, label, hint, value, onChange, error }: { id: string; la
       <label htmlFor={id} className="block font-bold">
         {label}
       </label>
-      <p className="text-sm text-ink-soft">{hint}</p>
+      <p id={`${id}-hint`} className="text-sm text-ink-soft">
+        {hint}
+      </p>
       <input
         id={id}
         type="search"
+        aria-describedby={error ? `${id}-hint ${id}-error` : `${id}-hint`}
         value={value}
         onChange={(e) => onChange(e.target.value)}
         autoComplete="off"
         aria-invalid={error ? true : undefined}
         className={`num block min-h-12 w-full rounded-md border-2 bg-ground-raised px-3 py-2 text-lg ${error ? "border-caution" : "border-rule-strong focus:border-brass"}`}
       />
-      {error && <p className="text-sm font-bold text-caution">✕ {error}</p>}
+      {error && <FieldError id={`${id}-error`}>{error}</FieldError>}
     </div>
   );
 }

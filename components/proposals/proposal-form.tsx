@@ -7,7 +7,7 @@ import { useApiForm } from "@/lib/hooks/use-api-form";
 import { PartPicker, StandardPicker, type PickedPart, type PickedStandard } from "@/components/proposals/pickers";
 import { PhotoDrop, type PhotoItem } from "@/components/proposals/photo-drop";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
+import { Field, FieldError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 import { CATEGORY_NAMES, FIT_NAMES, FITS, PART_CATEGORIES, STANDARD_KIND_NAMES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
@@ -287,7 +287,7 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
             </Choice>
           ))}
         </div>
-        {errorAt(errors, "fit") && <p className="text-sm font-bold text-caution">✕ {errorAt(errors, "fit")}</p>}
+        {errorAt(errors, "fit") && <FieldError id="fit-error">{errorAt(errors, "fit")}</FieldError>}
       </Section>
 
       <Section number={4} title="What you measured on the old part" hint="With calipers or a micrometer; inch or mm. Worn sizes are fine: the reviewer compares them with the standard part.">
@@ -331,11 +331,12 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
           <textarea
             id="notes"
             rows={5}
-            aria-describedby="notes-hint"
+            aria-describedby={errorAt(errors, "notes") ? "notes-hint notes-error" : "notes-hint"}
+            aria-invalid={errorAt(errors, "notes") ? true : undefined}
             className="block w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 py-2 text-lg focus:border-brass"
             {...register("notes")}
           />
-          {errorAt(errors, "notes") && <p className="text-sm font-bold text-caution">✕ {errorAt(errors, "notes")}</p>}
+          {errorAt(errors, "notes") && <FieldError id="notes-error">{errorAt(errors, "notes")}</FieldError>}
         </div>
       </Section>
 

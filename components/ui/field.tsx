@@ -40,12 +40,17 @@ export function Field({
           </span>
         )}
       </div>
-      {error && (
-        <p id={`${id}-error`} className="text-sm font-bold text-caution">
-          <span aria-hidden="true">✕ </span>
-          {error}
-        </p>
-      )}
+      {error && <FieldError id={`${id}-error`}>{error}</FieldError>}
     </div>
+  );
+}
+
+/** Why a field's value was refused, under the field; give the field aria-describedby={id} so it is read out. */
+export function FieldError({ id, children }: { id: string; children: ReactNode }) {
+  return (
+    <p id={id} className="text-sm font-bold text-caution">
+      <span aria-hidden="true">✕ </span>
+      {children}
+    </p>
   );
 }

@@ -1,4 +1,5 @@
 import type { SelectHTMLAttributes } from "react";
+import { FieldError } from "@/components/ui/field";
 
 /** A labelled list to choose from, with its error below; the twin of Field for <select>. */
 export function SelectField({ id, label, error, className = "", children, ...props }: SelectHTMLAttributes<HTMLSelectElement> & { id: string; label: string; error?: string }) {
@@ -16,12 +17,7 @@ export function SelectField({ id, label, error, className = "", children, ...pro
       >
         {children}
       </select>
-      {error && (
-        <p id={`${id}-error`} className="text-sm font-bold text-caution">
-          <span aria-hidden="true">✕ </span>
-          {error}
-        </p>
-      )}
+      {error && <FieldError id={`${id}-error`}>{error}</FieldError>}
     </div>
   );
 }

@@ -5,6 +5,8 @@ export type ImportStatus = (typeof IMPORT_STATUSES)[number];
 export const IMPORT_TARGETS = ["catalogue", "review_queue"] as const;
 export type ImportTarget = (typeof IMPORT_TARGETS)[number];
 
+export const TARGET_WORDS: Record<ImportTarget, string> = { catalogue: "the catalogue", review_queue: "the review queue" };
+
 export const STATUS_WORDS: Record<ImportStatus, string> = {
   uploaded: "Stored, waiting to be read",
   parsing: "Reading the file (dry run)",

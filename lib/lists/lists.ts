@@ -200,6 +200,10 @@ export async function getList(access: { userId: string } | { token: string }, id
   };
 }
 
+async function lockList(listId: number, transaction: Transaction): Promise<void> {
+  await JobList.findByPk(listId, { attributes: ["id"], transaction, lock: transaction.LOCK.UPDATE });
+}
+
 /** A typed factory number to one part: a single exact or reformatted match, else the reason. */
 async function resolveNumber(number: string): Promise<{ id: number; typed: string }> {
   const results = await findPartsByNumber(number, 5);
@@ -233,7 +237,9 @@ export async function addLine(userId: string, listId: number, input: { partId?: 
   const latestId = chain.latestId;
   requested ??= latestId !== partId ? original!.number : null;
   return sequelize.transaction(async (transaction) => {
-    const existing = await JobListLine.findOne({ where: { listId, partId: latestId }, transaction, lock: transaction.LOCK.UPDATE });
+    // Adds to one list take turns (the list row is locked), so two quick clicks merge instead of colliding.
+    await lockList(listId, transaction);
+    const existing = await JobListLine.findOne({ where: { listId, partId: latestId }, transaction });
     if (existing) {
       await existing.update({ quantity: Math.min(existing.quantity + input.quantity, 9999) }, { transaction });
       await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
@@ -292,16 +298,25 @@ export async function addRestOfAssembly(userId: string, listId: number, lineId: 
     `SELECT part_id, max(quantity) AS quantity FROM part_usages WHERE machine_id = :machineId AND assembly_id = :assemblyId AND part_id <> :partId AND serial_note IS NULL GROUP BY part_id ORDER BY part_id`,
     { replacements: { machineId: usage.machine_id, assemblyId: usage.assembly_id, partId: line.partId }, type: QueryTypes.SELECT },
   );
-  let added = 0;
+  // Work out every line first (reads), then write them all in one transaction: all of the assembly lands, or none.
+  const planned = new Map<number, { partId: number; requestedNumber: string | null; quantity: number }>();
   for (const other of others) {
     const latest = (await loadChain(other.part_id)).latestId;
-    if (await JobListLine.findOne({ where: { listId, partId: latest }, attributes: ["id"] })) continue;
-    const best = (await equivalentsFor([latest])).get(latest)?.[0] ?? null;
+    if (planned.has(latest)) continue;
     const number = latest !== other.part_id ? (await OriginalPart.findByPk(other.part_id, { attributes: ["number"] }))?.number ?? null : null;
-    await JobListLine.create({ listId, partId: latest, requestedNumber: number, standardPartId: best?.standardPartId ?? null, quantity: other.quantity, notes: null });
-    added += 1;
+    planned.set(latest, { partId: latest, requestedNumber: number, quantity: other.quantity });
   }
-  await JobList.update({ updatedAt: new Date() }, { where: { id: listId } });
+  const best = await equivalentsFor([...planned.keys()]);
+  const added = await sequelize.transaction(async (transaction) => {
+    await lockList(listId, transaction);
+    const listed = new Set((await JobListLine.findAll({ where: { listId }, attributes: ["partId"], transaction })).map((l) => l.partId));
+    const rows = [...planned.values()]
+      .filter((p) => !listed.has(p.partId))
+      .map((p) => ({ listId, ...p, standardPartId: best.get(p.partId)?.[0]?.standardPartId ?? null, notes: null }));
+    await JobListLine.bulkCreate(rows, { transaction });
+    await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
+    return rows.length;
+  });
   return { added, machine: usage.model, assembly: usage.assembly };
 }
 

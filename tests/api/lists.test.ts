@@ -81,6 +81,14 @@ describe("job lists belong to their owner", () => {
     expect(list.lines).toHaveLength(1 + rest.body.added);
     expect((await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, {}, { cookie: owner })).body.added).toBe(0);
   });
+
+  it("merges the same part added twice at the same moment (a double click) into one line", async () => {
+    const id = await newList();
+    const adds = await Promise.all([1, 2, 3].map(() => send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: owner })));
+    expect(adds.map((a) => a.status).sort()).toEqual([200, 200, 201]);
+    const list = (await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body;
+    expect(list.lines).toEqual([expect.objectContaining({ number: "CV-3003-B", quantity: 3 })]);
+  });
 });
 
 describe("export and sharing", () => {

@@ -5,7 +5,7 @@ import { Notice } from "@/components/ui/notice";
 import { hasPermission } from "@/lib/auth/roles";
 import { requirePagePermission } from "@/lib/auth/session";
 import { listImports, listMappings } from "@/lib/imports/imports";
-import { STATUS_WORDS } from "@/lib/imports/kinds";
+import { STATUS_WORDS, TARGET_WORDS } from "@/lib/imports/kinds";
 
 export const metadata: Metadata = { title: "Imports" };
 
@@ -52,7 +52,7 @@ export default async function ImportsPage() {
                         </Link>
                       </td>
                       <td className="p-3">{STATUS_WORDS[i.status]}</td>
-                      <td className="p-3">{i.target === "catalogue" ? "catalogue" : "review queue"}</td>
+                      <td className="p-3">{TARGET_WORDS[i.target]}</td>
                       <td className="num p-3">{c ? `${c.rows} (${c.rejected} rejected)` : "—"}</td>
                       <td className="p-3 text-sm">
                         {i.by ?? "?"}
