@@ -71,15 +71,18 @@ export const DEEP_GROOVE: Record<DeepGrooveSeries, Row[]> = {
 };
 
 /**
- * Inch radial ball bearings of the R series (ABMA/ANSI inch series): the number is the bore in sixteenths of an inch.
- * d × D × B in inches, open bearings; shielded versions of the smallest sizes are wider. From memory of common
- * inch-series tables; the bore rule is exact.
+ * Inch radial ball bearings of the R series (ABMA inch series): the number is the bore in sixteenths of an inch.
+ * d × D × B in inches for the open bearing, then the width of the shielded or sealed one (ZZ, 2RS), which is wider for
+ * several sizes. The bore rule is exact; the open rows agree with the BOSL2 open parts library's table (13 of 13);
+ * the closed widths are not confirmed by an open source (BOSL2 gives the open width for its ZZ rows) and are listed
+ * in docs/standards.md.
  */
-export const R_SERIES: Array<[string, number, number, number]> = [
-  ["R2", 0.125, 0.375, 0.15625], ["R3", 0.1875, 0.5, 0.15625], ["R4", 0.25, 0.625, 0.196], ["R6", 0.375, 0.875, 0.21875],
-  ["R8", 0.5, 1.125, 0.25], ["R10", 0.625, 1.375, 0.28125], ["R12", 0.75, 1.625, 0.3125], ["R14", 0.875, 1.875, 0.375],
-  ["R16", 1.0, 2.0, 0.375], ["R18", 1.125, 2.125, 0.375], ["R20", 1.25, 2.25, 0.375], ["R22", 1.375, 2.5, 0.4375],
-  ["R24", 1.5, 2.625, 0.4375],
+export const R_SERIES: Array<[string, number, number, number, number]> = [
+  ["R2", 0.125, 0.375, 0.15625, 0.15625], ["R3", 0.1875, 0.5, 0.15625, 0.196], ["R4", 0.25, 0.625, 0.196, 0.196],
+  ["R6", 0.375, 0.875, 0.21875, 0.28125], ["R8", 0.5, 1.125, 0.25, 0.3125], ["R10", 0.625, 1.375, 0.28125, 0.34375],
+  ["R12", 0.75, 1.625, 0.3125, 0.4375], ["R14", 0.875, 1.875, 0.375, 0.5], ["R16", 1.0, 2.0, 0.375, 0.5],
+  ["R18", 1.125, 2.125, 0.375, 0.5], ["R20", 1.25, 2.25, 0.375, 0.5], ["R22", 1.375, 2.5, 0.4375, 0.5625],
+  ["R24", 1.5, 2.625, 0.4375, 0.5625],
 ];
 
 /**

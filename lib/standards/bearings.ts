@@ -12,6 +12,8 @@ export interface StandardBearing {
   outsideDiameterMm: number;
   widthMm: number;
   system: "metric" | "inch";
+  /** Width of the shielded or sealed form, where it differs from the open one (R series). */
+  closedWidthMm?: number;
 }
 
 /** Every bearing the engine knows, built once from the tables. */
@@ -27,7 +29,7 @@ export const ALL_BEARINGS: StandardBearing[] = [
       system: "metric" as const,
     })),
   ),
-  ...R_SERIES.map(([designation, d, D, B]) => ({
+  ...R_SERIES.map(([designation, d, D, B, closed]) => ({
     designation,
     series: "R",
     boreCode: designation.slice(1),
@@ -35,8 +37,14 @@ export const ALL_BEARINGS: StandardBearing[] = [
     outsideDiameterMm: round(D * MM_PER_INCH, 4),
     widthMm: round(B * MM_PER_INCH, 4),
     system: "inch" as const,
+    ...(closed !== B ? { closedWidthMm: round(closed * MM_PER_INCH, 4) } : {}),
   })),
 ];
+
+/** What the matcher compares a measurement with: each size once, and the wider closed form as a size of its own. */
+const MATCHABLE: StandardBearing[] = ALL_BEARINGS.flatMap((b) =>
+  b.closedWidthMm === undefined ? [b] : [b, { ...b, designation: `${b.designation}-2RS`, widthMm: b.closedWidthMm, closedWidthMm: undefined }],
+);
 
 const byDesignation = new Map(ALL_BEARINGS.map((b) => [b.designation, b]));
 
@@ -200,7 +208,8 @@ export function decodeBearing(input: string): DecodedBearing {
     boreCode: base.boreCode,
     boreMm: base.boreMm,
     outsideDiameterMm: base.outsideDiameterMm,
-    widthMm: base.widthMm,
+    // Shields and seals widen some inch bearings: R8 is 1/4 in wide open, 5/16 in as R8-2RS or R8-ZZ.
+    widthMm: suffixes.closure.kind !== "open" && base.closedWidthMm !== undefined ? base.closedWidthMm : base.widthMm,
     closures: { ...suffixes.closure, text: closureText(suffixes.closure) },
     clearance: { group: suffixes.clearance, text: CLEARANCE_TEXT[suffixes.clearance] },
     snapRing: {
@@ -244,13 +253,18 @@ export function matchBearing(input: BearingMatchInput): { candidates: BearingCan
     ...(input.widthMm ? [{ name: "width", label: "width", measuredMm: input.widthMm, toleranceMm: input.toleranceMm }] : []),
   ];
   const candidates: BearingCandidate[] = [];
-  for (const bearing of ALL_BEARINGS) {
+  for (const bearing of MATCHABLE) {
     const scored = scoreDimensions(measured, { bore: bearing.boreMm, od: bearing.outsideDiameterMm, width: bearing.widthMm }, input.unit);
     if (!scored) continue;
     const warnings: string[] = [];
     if (!scored.withinTolerance) warnings.push("Outside the tolerance you gave on at least one dimension: a possible match only.");
     const envelope = SAME_ENVELOPE[bearing.series as DeepGrooveSeries];
     if (envelope) warnings.push(`Same size is not the same part: ${envelope[0]} share these dimensions. Check the rolling elements.`);
+    if (bearing.closedWidthMm !== undefined) {
+      warnings.push(`The open ${bearing.designation} is narrower than its shielded or sealed form (${round(bearing.closedWidthMm / MM_PER_INCH, 3)} in wide as ${bearing.designation}-2RS or -ZZ).`);
+    } else if (bearing.series === "R" && bearing.designation.endsWith("-2RS")) {
+      warnings.push("This width is the shielded or sealed form's: ask for -2RS (rubber seals) or -ZZ (metal shields).");
+    }
     candidates.push({
       designation: bearing.designation,
       series: bearing.series,

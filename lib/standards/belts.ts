@@ -1,5 +1,5 @@
 import { StandardsInputError } from "@/lib/standards/errors";
-import { BELT_SECTIONS, R40, type BeltSection, type LengthBasis } from "@/lib/standards/belt-sections";
+import { BELT_SECTIONS, METRIC_CLASSICAL, R40, type BeltSection, type LengthBasis } from "@/lib/standards/belt-sections";
 import { byScore, describeDeviations, scoreDimensions, type Deviation } from "@/lib/standards/match";
 import { fromMm, round, toMm, type LengthUnit } from "@/lib/standards/units";
 
@@ -25,8 +25,14 @@ export function beltLengths(section: BeltSection, basis: LengthBasis | "pitch", 
     throw new BeltError(`${section.section} belts are sold by top width and outside length; their lengths are not converted.`);
   }
   const toOutside = 2 * Math.PI * section.height;
-  const inside = basis === "inside" ? length : basis === "outside" ? length - toOutside : length - section.pitchOffset;
-  return { inside, pitch: inside + section.pitchOffset, outside: inside + toOutside };
+  const long = section.long;
+  let inside: number;
+  if (basis === "inside") inside = length;
+  else if (basis === "outside") inside = length - toOutside;
+  // A datum length long enough to be a long belt's is read with the long offset (B225 = 225.3 in datum, not 226.8).
+  else inside = long && length - long.pitchOffset >= long.fromInside ? length - long.pitchOffset : length - section.pitchOffset;
+  const offset = long && inside >= long.fromInside ? long.pitchOffset : section.pitchOffset;
+  return { inside, pitch: inside + offset, outside: inside + toOutside };
 }
 
 export interface DecodedBelt {
@@ -44,11 +50,27 @@ export interface DecodedBelt {
   notes: string[];
 }
 
-/** Decodes `B60`, `B-60`, `4L380`, `5V800`, `SPA1250`, `spa 1250`. */
+// Beyond these inside lengths in inches no classical belt is made (IP-20 tables end at A180, B360, C420, D660, E660):
+// a larger number is a metric length in millimetres written without its Li/Ld/La.
+const LONGEST_INCH: Record<string, number> = { A: 200, B: 400, C: 450, D: 700, E: 700 };
+
+const METRIC_BASIS: Record<string, LengthBasis> = { LI: "inside", LD: "datum", LW: "datum", LP: "datum", LA: "outside" };
+
+/**
+ * Decodes `B60`, `B-60`, `4L380`, `5V800`, `SPA1250`, `spa 1250`, and metric classical belts by their marked length in
+ * millimetres: `B 1600 Li` (inside), `B 1640 Ld` (datum), `B 1669 La` (outside), also `Z 800 Li` and `SPA 1232 Li`.
+ */
 export function decodeBelt(input: string): DecodedBelt {
   const text = input.trim().toUpperCase().replace(/[\s-]+/g, "");
+  const metric = /^(SPZ|SPA|SPB|SPC|[ZA-E])(\d+(?:\.\d+)?)(LI|LD|LW|LP|LA)$/.exec(text);
+  if (metric) return decodeMetricBelt(input, metric[1], Number(metric[2]), METRIC_BASIS[metric[3]]);
   const m = /^(SPZ|SPA|SPB|SPC|[2-5]L|[358]V|[A-E])(\d+(?:\.\d+)?)$/.exec(text);
-  if (!m) throw new BeltError(`"${input.trim()}" is not a V-belt designation we can read. Try B60, 4L380, 5V800 or SPA1250.`);
+  if (!m) throw new BeltError(`"${input.trim()}" is not a V-belt designation we can read. Try B60, 4L380, 5V800, SPA1250 or B 1600 Li.`);
+  if (/^[A-E]$/.test(m[1]) && Number(m[2]) > LONGEST_INCH[m[1]]) {
+    throw new BeltError(
+      `${m[1]}${m[2]} would be ${m[2]} in long. A metric belt is marked with its length in millimetres and what was measured: ${m[1]} ${m[2]} Li (inside), Ld (datum) or La (outside).`,
+    );
+  }
   const section = findSection(m[1]);
   const number = Number(m[2]);
   if (section.designationScale === 10 && !Number.isInteger(number)) {
@@ -79,6 +101,45 @@ export function decodeBelt(input: string): DecodedBelt {
     topWidth: section.topWidth,
     height: section.height,
     angleDeg: section.angleDeg,
+    notes,
+  };
+}
+
+/** A metric classical or ISO narrow belt given by one of its lengths in millimetres, with the inch belt nearest it. */
+function decodeMetricBelt(input: string, sectionName: string, length: number, basis: LengthBasis): DecodedBelt {
+  const classical = METRIC_CLASSICAL.find((s) => s.section === sectionName && !sectionName.startsWith("SP"));
+  const narrow = sectionName.startsWith("SP") ? findSection(sectionName) : null;
+  const height = classical?.height ?? narrow?.height ?? 0;
+  const datumOffset = classical?.datumOffset ?? narrow?.pitchOffset ?? 0;
+  const toOutside = 2 * Math.PI * height;
+  const inside = basis === "inside" ? length : basis === "outside" ? length - toOutside : length - datumOffset;
+  if (inside <= 0) throw new BeltError(`${input.trim()} is too short to be a ${sectionName} belt.`);
+  const word = { inside: "Li", datum: "Ld", outside: "La" }[basis];
+  const notes = [
+    `The number is the ${basis === "datum" ? "datum (pitch)" : basis} length in millimetres (ISO 4184 ${word}).`,
+    classical
+      ? `For a metric ${sectionName} belt: datum = inside + ${datumOffset} mm, outside = inside + ${Math.round(toOutside)} mm (ISO 4184).`
+      : `ISO narrow belts are sold by datum length: ask for ${sectionName}${Math.round(inside + datumOffset)}.`,
+  ];
+  const inch = classical && sectionName !== "Z" ? BELT_SECTIONS.find((s) => s.section === sectionName && s.family === "classical") : undefined;
+  if (inch) {
+    // The same belt by the inch numbering: the inch belt of the nearest datum length.
+    const pitchIn = (inside + datumOffset) / 25.4;
+    const inchInside = Math.round(beltLengths(inch, "pitch", pitchIn).inside);
+    notes.push(`By inch numbering, the nearest is ${sectionName}${inchInside} (${round(beltLengths(inch, "inside", inchInside).pitch, 1)} in datum length).`);
+  }
+  return {
+    designation: `${sectionName} ${round(length, 0)} ${word}`,
+    section: sectionName,
+    family: classical ? "classical" : "iso-narrow",
+    unit: "mm",
+    insideLength: Math.round(inside),
+    pitchLength: Math.round(inside + datumOffset),
+    outsideLength: Math.round(inside + toOutside),
+    designatedBy: basis,
+    topWidth: classical?.topWidth ?? narrow?.topWidth ?? 0,
+    height,
+    angleDeg: 40,
     notes,
   };
 }

@@ -1,5 +1,5 @@
 import { wearDirection, type Surface } from "@/lib/standards/nominal";
-import { fromMm, round, type LengthUnit } from "@/lib/standards/units";
+import { fromMm, inchLabel, mmLabel, round, TRADE_DECIMALS, type LengthUnit } from "@/lib/standards/units";
 
 /** One measured dimension: what the calipers read, how far off is still acceptable, and which way wear moves it. */
 export interface MeasuredDimension {
@@ -14,6 +14,8 @@ export interface Deviation {
   name: string;
   label: string;
   nominal: number;
+  /** The nominal as the trade writes it: `5/32 in`, `2.374 in`, `47 mm`. */
+  nominalLabel: string;
   measured: number;
   /** measured − nominal, in the unit asked for */
   deviation: number;
@@ -45,13 +47,14 @@ export function scoreDimensions(measured: MeasuredDimension[], nominalMm: Record
     const tolerances = Math.abs(deviationMm) / dim.toleranceMm;
     if (tolerances > CUTOFF * (towardWear ? 2 : 1)) return null;
     total += towardWear ? tolerances / 2 : tolerances;
-    const digits = unit === "in" ? 4 : 2;
+    // Nominal sizes keep their exact decimal (5/32 in is 0.15625 in); readings and deviations are at the trade's precision.
     deviations.push({
       name: dim.name,
       label: dim.label,
-      nominal: round(fromMm(nominal, unit), digits),
-      measured: round(fromMm(dim.measuredMm, unit), digits),
-      deviation: round(fromMm(deviationMm, unit), digits + 1),
+      nominal: round(fromMm(nominal, unit), unit === "in" ? 5 : 2),
+      nominalLabel: unit === "in" ? inchLabel(fromMm(nominal, unit)) : mmLabel(nominal),
+      measured: round(fromMm(dim.measuredMm, unit), TRADE_DECIMALS[unit]),
+      deviation: round(fromMm(deviationMm, unit), TRADE_DECIMALS[unit]),
       withinTolerance: tolerances <= (towardWear ? 2 : 1),
     });
   }
@@ -65,8 +68,8 @@ export function describeDeviations(deviations: Deviation[], unit: LengthUnit): s
   return deviations
     .map((d) => {
       const size = Math.abs(d.deviation);
-      if (size < (unit === "in" ? 0.00005 : 0.005)) return `${d.label} exact`;
-      return `${d.label} ${round(size, unit === "in" ? 4 : 2)} ${unit} ${d.deviation > 0 ? "over" : "under"}`;
+      if (size === 0) return `${d.label} exact`;
+      return `${d.label} ${size} ${unit} ${d.deviation > 0 ? "over" : "under"}`;
     })
     .join(", ");
 }

@@ -1,4 +1,4 @@
-import { fromMm, inchLabel, MM_PER_INCH, round, type LengthUnit } from "@/lib/standards/units";
+import { fromMm, inchLabel, MM_PER_INCH, round, TRADE_DECIMALS, type LengthUnit } from "@/lib/standards/units";
 
 /**
  * Which way wear moves a measurement. A worn shaft (an outside surface) measures small; a worn housing bore or the
@@ -48,7 +48,12 @@ function denominatorOf(sixtyFourths: number): number {
   return d;
 }
 
-function plausibility(measuredMm: number, nominalMm: number, surface: Surface, stepPenalty: number): { score: number; reason: string } {
+function plausibility(
+  measuredMm: number,
+  nominalMm: number,
+  surface: Surface,
+  stepPenalty: number,
+): { score: number; reason: string; fits: boolean } {
   const deviation = measuredMm - nominalMm;
   const allowance = allowanceMm(nominalMm);
   const direction = wearDirection[surface];
@@ -56,37 +61,49 @@ function plausibility(measuredMm: number, nominalMm: number, surface: Surface, s
   const against = direction !== 0 && Math.sign(deviation) === -direction && Math.abs(deviation) > allowance / 4;
   const distance = Math.abs(deviation) / allowance;
   const score = Math.max(0, 1 - 0.35 * distance - stepPenalty - (against ? 0.4 : 0));
-  let reason = `${round(Math.abs(deviation), 3)} mm ${deviation >= 0 ? "over" : "under"} nominal`;
+  let reason = `${round(Math.abs(deviation), 2)} mm ${deviation >= 0 ? "over" : "under"} nominal`;
   if (against) reason += surface === "shaft" ? "; a worn shaft should read small, not large" : "; wear should not make it read this way";
   else if (direction !== 0 && Math.abs(deviation) > allowance / 4) reason += ", as wear would make it";
-  return { score: round(score, 3), reason };
+  return { score: round(score, 3), reason, fits: !against && distance <= 1 };
+}
+
+/** Sizes a designer would have chosen: sixteenths of an inch or coarser, whole millimetres (halves below 10 mm). */
+function isUsual(c: NominalCandidate): boolean {
+  return c.system === "metric" ? c.nominal >= 10 ? Number.isInteger(c.nominal) : true : denominatorOf(Math.round(c.nominal * 64)) <= 16;
 }
 
 /**
  * Snaps a measured size to the likely nominal on the inch fraction grid (1/64 … whole inches, coarser first) and on
  * the metric grid (whole millimetres, half millimetres below 10 mm), most plausible first.
+ *
+ * The unit a person measured in is evidence: calipers set to inches on an inch machine. When a usual size of that
+ * system lies within the wear allowance, it comes first even if a size of the other system happens to lie nearer
+ * (1.497 in on a worn shaft is 1-1/2 in, not 38 mm). The near miss between the two is still reported.
  */
 export function nominalCandidates(measuredMm: number, unit: LengthUnit, surface: Surface = "none", limit = 4): NominalCandidate[] {
-  const candidates: NominalCandidate[] = [];
+  const candidates: Array<NominalCandidate & { fits: boolean }> = [];
   const measuredIn = measuredMm / MM_PER_INCH;
   const base = Math.round(measuredIn * 64);
   for (let n = base - 3; n <= base + 3; n += 1) {
     if (n <= 0) continue;
     const nominalIn = n / 64;
     const nominalMm = nominalIn * MM_PER_INCH;
-    const { score, reason } = plausibility(measuredMm, nominalMm, surface, inchStepPenalty[denominatorOf(n)]);
-    candidates.push(candidate("inch", nominalIn, nominalMm, inchLabel(nominalIn), measuredMm, unit, score, reason));
+    const { score, reason, fits } = plausibility(measuredMm, nominalMm, surface, inchStepPenalty[denominatorOf(n)]);
+    candidates.push({ ...candidate("inch", nominalIn, nominalMm, inchLabel(nominalIn), measuredMm, unit, score, reason), fits });
   }
   const metricStep = measuredMm < 10 ? 0.5 : 1;
   const nearest = Math.round(measuredMm / metricStep) * metricStep;
   for (const nominalMm of [nearest - metricStep, nearest, nearest + metricStep]) {
     if (nominalMm <= 0) continue;
     const half = nominalMm % 1 !== 0 ? 0.15 : 0;
-    const { score, reason } = plausibility(measuredMm, nominalMm, surface, half);
-    candidates.push(candidate("metric", nominalMm, nominalMm, `${round(nominalMm, 1)} mm`, measuredMm, unit, score, reason));
+    const { score, reason, fits } = plausibility(measuredMm, nominalMm, surface, half);
+    candidates.push({ ...candidate("metric", nominalMm, nominalMm, `${round(nominalMm, 1)} mm`, measuredMm, unit, score, reason), fits });
   }
-  candidates.sort((a, b) => b.plausibility - a.plausibility);
-  const plausible = candidates.filter((c) => c.plausibility >= 0.2);
+  const measuredSystem = unit === "in" ? "inch" : "metric";
+  const preferred = (c: NominalCandidate & { fits: boolean }) => c.fits && c.system === measuredSystem && isUsual(c);
+  for (const c of candidates) if (preferred(c)) c.reason += `; measured in ${unit === "in" ? "inches" : "millimetres"}, so the ${c.system} size comes first`;
+  candidates.sort((a, b) => Number(preferred(b)) - Number(preferred(a)) || b.plausibility - a.plausibility);
+  const plausible: NominalCandidate[] = candidates.filter((c) => c.plausibility >= 0.2).map(({ fits: _fits, ...c }) => c);
   // The other system is always answered too. When no inch reading is plausible, the one worth showing is the nearest
   // size a designer would have chosen (sixteenths or coarser), not an odd 64th that happens to score a little higher.
   for (const system of ["inch", "metric"] as const) {
@@ -94,7 +111,10 @@ export function nominalCandidates(measuredMm: number, unit: LengthUnit, surface:
     const usual = candidates
       .filter((c) => c.system === system && (system === "metric" || denominatorOf(Math.round(c.nominal * 64)) <= 16))
       .sort((a, b) => Math.abs(a.deviationMm) - Math.abs(b.deviationMm))[0];
-    if (usual) plausible.push(usual);
+    if (usual) {
+      const { fits: _fits, ...rest } = usual;
+      plausible.push(rest);
+    }
   }
   return plausible.slice(0, limit);
 }
@@ -115,7 +135,7 @@ function candidate(
     nominal: round(nominal, 6),
     nominalMm: round(nominalMm, 4),
     label,
-    deviation: round(fromMm(deviationMm, unit), unit === "in" ? 5 : 3),
+    deviation: round(fromMm(deviationMm, unit), TRADE_DECIMALS[unit]),
     deviationMm: round(deviationMm, 4),
     plausibility: plausibilityScore,
     reason,

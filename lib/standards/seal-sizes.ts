@@ -2,7 +2,7 @@
  * Lip seal sizes: shaft d1 × housing bore d2 × width b.
  *
  * Metric: nominal sizes of rotary shaft lip seals from ISO 6194-1 (the same list as DIN 3760), in millimetres.
- * Transcribed from memory of the standard's size table; spot checks in the tests say so.
+ * Transcribed, not yet compared row by row with an open copy of the table (docs/standards.md lists it as unconfirmed).
  */
 export const METRIC_SEALS: Array<[number, number, number]> = [
   [6, 16, 7], [6, 22, 7], [7, 22, 7], [8, 22, 7], [8, 24, 7], [9, 22, 7], [10, 22, 7], [10, 25, 7], [12, 24, 7],
@@ -20,8 +20,9 @@ export const METRIC_SEALS: Array<[number, number, number]> = [
 ];
 
 /**
- * Common inch lip seal sizes, shaft × bore × width in inches. Inch seals have no single published size list; these are
- * the fractional sizes usually stocked. Common practice (no published source).
+ * Common inch lip seal sizes, shaft × bore × width in inches. Inch seals have no single published size list and are made
+ * for many more housing bores (in thousandths) than any table holds, so this list only names sizes nearby; the seal to
+ * order is worked out from the measurement itself (sealOrder). Common practice (no published source).
  */
 export const INCH_SEALS: Array<[number, number, number]> = [
   [0.5, 1.0, 0.25], [0.5, 1.124, 0.25], [0.625, 1.124, 0.25], [0.625, 1.25, 0.25], [0.75, 1.124, 0.25], [0.75, 1.25, 0.25],
@@ -36,17 +37,40 @@ export const INCH_SEALS: Array<[number, number, number]> = [
 ];
 
 /**
- * Outside-diameter allowance of a lip seal over the nominal housing bore, by bore size, in millimetres, from ISO 6194-1
- * (the table of seal OD tolerances; from memory of the standard). Metal-cased OD and rubber-covered OD differ.
+ * How much larger than the nominal housing bore a metric seal's outside diameter is made, for its press fit, by bore
+ * size, in millimetres: DIN 3760:1996-09 (based on ISO 6194-1), table of outside-diameter allowances. Metal-cased and
+ * rubber-covered outsides differ. Confirmed row by row against two openly published seal technical tables that
+ * quote DIN 3760 (docs/standards.md).
  */
 export const OD_ALLOWANCE: Array<{ upToMm: number; metal: [number, number]; rubber: [number, number] }> = [
-  { upToMm: 50, metal: [0.08, 0.2], rubber: [0.15, 0.3] },
-  { upToMm: 80, metal: [0.09, 0.23], rubber: [0.2, 0.35] },
-  { upToMm: 120, metal: [0.1, 0.25], rubber: [0.2, 0.35] },
-  { upToMm: 180, metal: [0.12, 0.28], rubber: [0.25, 0.45] },
-  { upToMm: 300, metal: [0.15, 0.35], rubber: [0.25, 0.45] },
-  { upToMm: 500, metal: [0.2, 0.45], rubber: [0.3, 0.55] },
+  { upToMm: 50, metal: [0.1, 0.2], rubber: [0.15, 0.3] },
+  { upToMm: 80, metal: [0.13, 0.23], rubber: [0.2, 0.35] },
+  { upToMm: 120, metal: [0.15, 0.25], rubber: [0.2, 0.35] },
+  { upToMm: 180, metal: [0.18, 0.28], rubber: [0.25, 0.45] },
+  { upToMm: 300, metal: [0.2, 0.3], rubber: [0.25, 0.45] },
+  { upToMm: 500, metal: [0.23, 0.35], rubber: [0.3, 0.55] },
 ];
+
+export const OD_ALLOWANCE_SOURCE = "DIN 3760:1996 (ISO 6194-1), table of seal outside-diameter allowances";
+
+/**
+ * The inch counterpart: a seal's outside diameter is the bore plus a press fit, within a tolerance either way, in
+ * inches, by bore size: RMA OS-4 oil seal handbook, press-fit table. The metal-case rows and the rubber rows up to
+ * 4 in are confirmed by two openly published seal technical tables; above 4 in the two disagree on rubber (0.010 and
+ * 0.012 in) and the smaller figure is kept.
+ */
+export const INCH_PRESS_FIT: Array<{ upToIn: number; metal: { fit: number; plus: number; minus: number }; rubber: { fit: number; plus: number; minus: number } }> = [
+  { upToIn: 1, metal: { fit: 0.004, plus: 0.002, minus: 0.002 }, rubber: { fit: 0.006, plus: 0.003, minus: 0.003 } },
+  { upToIn: 2, metal: { fit: 0.004, plus: 0.002, minus: 0.002 }, rubber: { fit: 0.007, plus: 0.003, minus: 0.003 } },
+  { upToIn: 3, metal: { fit: 0.004, plus: 0.002, minus: 0.002 }, rubber: { fit: 0.008, plus: 0.003, minus: 0.003 } },
+  { upToIn: 4, metal: { fit: 0.005, plus: 0.002, minus: 0.002 }, rubber: { fit: 0.01, plus: 0.004, minus: 0.004 } },
+  { upToIn: 6, metal: { fit: 0.005, plus: 0.003, minus: 0.002 }, rubber: { fit: 0.01, plus: 0.004, minus: 0.004 } },
+  { upToIn: 8, metal: { fit: 0.006, plus: 0.003, minus: 0.002 }, rubber: { fit: 0.01, plus: 0.004, minus: 0.004 } },
+  { upToIn: 10, metal: { fit: 0.008, plus: 0.004, minus: 0.002 }, rubber: { fit: 0.01, plus: 0.004, minus: 0.004 } },
+  { upToIn: 20, metal: { fit: 0.008, plus: 0.006, minus: 0.002 }, rubber: { fit: 0.01, plus: 0.004, minus: 0.004 } },
+];
+
+export const INCH_PRESS_FIT_SOURCE = "RMA OS-4 oil seal handbook, inch press-fit table for seal outside diameters";
 
 /** Standard tolerance grades IT8 and IT11 in micrometres by nominal size step, from ISO 286-1:2010, Table 1. */
 export const IT_GRADES: Array<{ overMm: number; upToMm: number; it8: number; it11: number }> = [

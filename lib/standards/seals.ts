@@ -1,7 +1,15 @@
 import { byScore, describeDeviations, scoreDimensions, type Deviation } from "@/lib/standards/match";
-import { nearMiss, nominalCandidates } from "@/lib/standards/nominal";
-import { IT_GRADES, INCH_SEALS, METRIC_SEALS, OD_ALLOWANCE } from "@/lib/standards/seal-sizes";
-import { fromMm, inchLabel, MM_PER_INCH, round, type LengthUnit } from "@/lib/standards/units";
+import { nearMiss, nearMissFor, nominalCandidates } from "@/lib/standards/nominal";
+import {
+  INCH_PRESS_FIT,
+  INCH_PRESS_FIT_SOURCE,
+  INCH_SEALS,
+  IT_GRADES,
+  METRIC_SEALS,
+  OD_ALLOWANCE,
+  OD_ALLOWANCE_SOURCE,
+} from "@/lib/standards/seal-sizes";
+import { fromMm, inchLabel, MM_PER_INCH, round, showDeviation, showLength, tradeRound, type LengthUnit } from "@/lib/standards/units";
 
 export interface StandardSeal {
   system: "metric" | "inch";
@@ -83,6 +91,7 @@ export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[];
     candidates.push({ ...seal, score: scored.score, deviations: scored.deviations, explanation: describeDeviations(scored.deviations, input.unit), orderAs, warnings });
   }
   candidates.sort(byScore);
+  if (candidates.length === 0) candidates.push(...nearestSeals(input, orderAs, nominalCandidates(input.shaftMm, input.unit, "shaft")[0].system));
   for (const inch of candidates.filter((c) => c.system === "inch")) {
     for (const metric of candidates.filter((c) => c.system === "metric")) {
       const miss = nearMiss(inch.shaftMm / MM_PER_INCH, metric.shaftMm);
@@ -94,18 +103,51 @@ export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[];
   }
 
   const warnings: string[] = [];
-  if (candidates.length === 0) warnings.push("No standard lip seal is near these sizes. Re-measure the shaft and the housing bore (not the old seal's lip, which is smaller than the shaft).");
   const remedies = input.grooved ? GROOVE_REMEDIES : [];
   if (input.grooved) warnings.push("The old lip has worn a groove in the shaft. A new seal running on the same line will leak.");
   return { candidates: candidates.slice(0, 8), warnings, remedies };
 }
 
+/**
+ * The tabulated sizes nearest a measurement that none of them matches: shown as "sizes nearby", never as a match, so a
+ * person sees what the tables hold while ordering by the worked-out size.
+ */
+function nearestSeals(input: SealMatchInput, orderAs: string, system: "inch" | "metric"): SealCandidate[] {
+  const distance = (seal: StandardSeal) =>
+    Math.abs(seal.shaftMm - input.shaftMm) + Math.abs(seal.boreMm - input.boreMm) + (input.widthMm ? Math.abs(seal.widthMm - input.widthMm) / 4 : 0);
+  return [...ALL_SEALS]
+    .sort((a, b) => Number(b.system === system) - Number(a.system === system) || distance(a) - distance(b))
+    .slice(0, 3)
+    .map((seal) => {
+      const deviations = (["shaft", "bore", "width"] as const)
+        .filter((name) => name !== "width" || input.widthMm !== undefined)
+        .map((name) => {
+          const nominal = { shaft: seal.shaftMm, bore: seal.boreMm, width: seal.widthMm }[name];
+          const measured = { shaft: input.shaftMm, bore: input.boreMm, width: input.widthMm ?? 0 }[name];
+          return {
+            name,
+            label: name,
+            nominal: round(fromMm(nominal, input.unit), input.unit === "in" ? 5 : 2),
+            nominalLabel: input.unit === "in" ? inchLabel(fromMm(nominal, input.unit)) : `${round(nominal, 2)} mm`,
+            measured: tradeRound(fromMm(measured, input.unit), input.unit),
+            deviation: tradeRound(fromMm(measured - nominal, input.unit), input.unit),
+            withinTolerance: false,
+          };
+        });
+      return {
+        ...seal,
+        score: 0,
+        deviations,
+        explanation: describeDeviations(deviations, input.unit),
+        orderAs,
+        warnings: ["Not this size: the nearest in the table, shown for comparison. Order by the sizes worked out above."],
+      };
+    });
+}
+
 function gradeFor(mm: number) {
   return IT_GRADES.find((g) => mm > g.overMm && mm <= g.upToMm) ?? IT_GRADES[IT_GRADES.length - 1];
 }
-
-export const PRESS_FIT_SOURCE =
-  "ISO 6194-1 seal outside-diameter allowances (from memory of the standard) against a housing bore in tolerance H8, ISO 286-1:2010 Table 1";
 
 export interface PressFit {
   interference: number;
@@ -119,39 +161,48 @@ export interface PressFit {
 }
 
 /**
- * The press fit of a seal in its housing: interference = seal OD − bore. The recommended range is the seal's OD
- * allowance over nominal, less the housing's H8 tolerance at the low end (a bore at the top of H8 with a seal at the
- * bottom of its allowance still holds).
+ * The outside diameter a new seal should have for its press fit in a housing bore, in millimetres. Inch bores take the
+ * inch press-fit table; metric ones the DIN 3760 allowances, less the housing's H8 tolerance at the low end (a bore at
+ * the top of H8 with a seal at the bottom of its allowance still holds).
  */
+export function sealOdRange(boreMm: number, outside: "metal" | "rubber", system: "inch" | "metric"): { minMm: number; maxMm: number; source: string } {
+  if (system === "inch") {
+    const boreIn = boreMm / MM_PER_INCH;
+    const row = INCH_PRESS_FIT.find((r) => boreIn <= r.upToIn) ?? INCH_PRESS_FIT[INCH_PRESS_FIT.length - 1];
+    const { fit, plus, minus } = row[outside];
+    return { minMm: boreMm + (fit - minus) * MM_PER_INCH, maxMm: boreMm + (fit + plus) * MM_PER_INCH, source: INCH_PRESS_FIT_SOURCE };
+  }
+  const row = OD_ALLOWANCE.find((r) => boreMm <= r.upToMm) ?? OD_ALLOWANCE[OD_ALLOWANCE.length - 1];
+  const [low, high] = row[outside];
+  return {
+    minMm: boreMm + low - gradeFor(boreMm).it8 / 1000,
+    maxMm: boreMm + high,
+    source: `${OD_ALLOWANCE_SOURCE}, against a housing bore in H8 (ISO 286-1:2010, Table 1)`,
+  };
+}
+
+/** The press fit of a seal in its housing: interference = seal OD − bore, against the range for that bore. */
 export function checkPressFit(input: { boreMm: number; sealOdMm: number; outside: "metal" | "rubber"; unit: LengthUnit }): PressFit {
-  const row = OD_ALLOWANCE.find((r) => input.boreMm <= r.upToMm) ?? OD_ALLOWANCE[OD_ALLOWANCE.length - 1];
-  const [low, high] = row[input.outside];
-  const it8 = gradeFor(input.boreMm).it8 / 1000;
-  const minMm = low - it8;
-  const maxMm = high;
+  const range = sealOdRange(input.boreMm, input.outside, input.unit === "in" ? "inch" : "metric");
+  const minMm = range.minMm - input.boreMm;
+  const maxMm = range.maxMm - input.boreMm;
   const interferenceMm = input.sealOdMm - input.boreMm;
-  const verdict = interferenceMm < minMm ? "loose" : interferenceMm > maxMm ? "tight" : "ok";
-  const digits = input.unit === "in" ? 4 : 3;
-  const show = (mm: number) => `${round(fromMm(mm, input.unit), digits)} ${input.unit}`;
+  // Compared at the trade's precision, so a seal made to the table's own figure is never a thousandth "loose".
+  const interference = tradeRound(fromMm(interferenceMm, input.unit), input.unit);
+  const recommendedMin = tradeRound(fromMm(minMm, input.unit), input.unit);
+  const recommendedMax = tradeRound(fromMm(maxMm, input.unit), input.unit);
+  const verdict = interference < recommendedMin ? "loose" : interference > recommendedMax ? "tight" : "ok";
+  const show = (value: number) => `${value} ${input.unit}`;
   const message = {
-    ok: `Interference ${show(interferenceMm)} is within the recommended ${show(minMm)} to ${show(maxMm)}: the seal should stay put without distorting.`,
-    loose: `Interference ${show(interferenceMm)} is below the recommended ${show(minMm)}: the seal may turn or weep round its OD. ${
+    ok: `Interference ${show(interference)} is within the recommended ${show(recommendedMin)} to ${show(recommendedMax)}: the seal should stay put without distorting.`,
+    loose: `Interference ${show(interference)} is below the recommended ${show(recommendedMin)}: the seal may turn or weep round its OD. ${
       input.outside === "metal"
         ? "A worn or oversize bore can take a seal with a rubber-covered OD, or a thin coat of sealant on the metal OD."
         : "Check the bore for wear; an oversize bore may need sleeving, or a seal with a larger OD."
     }`,
-    tight: `Interference ${show(interferenceMm)} is above the recommended ${show(maxMm)}: the case may buckle or the lip be squeezed onto the shaft. Check both measurements.`,
+    tight: `Interference ${show(interference)} is above the recommended ${show(recommendedMax)}: the case may buckle or the lip be squeezed onto the shaft. Check both measurements.`,
   }[verdict];
-  return {
-    interference: round(fromMm(interferenceMm, input.unit), digits + 1),
-    recommendedMin: round(fromMm(minMm, input.unit), digits + 1),
-    recommendedMax: round(fromMm(maxMm, input.unit), digits + 1),
-    verdict,
-    unit: input.unit,
-    outside: input.outside,
-    message,
-    source: PRESS_FIT_SOURCE,
-  };
+  return { interference, recommendedMin, recommendedMax, verdict, unit: input.unit, outside: input.outside, message, source: range.source };
 }
 
 export interface ShaftCheck {
@@ -172,7 +223,7 @@ export function checkShaft(input: { shaftMm: number; unit: LengthUnit; grooved: 
   const lowest = nominal.nominalMm - it11;
   const verdict = input.shaftMm < lowest ? "undersize" : input.shaftMm > nominal.nominalMm + 0.01 ? "oversize" : "ok";
   const needsSleeve = input.grooved || verdict === "undersize";
-  const show = (mm: number) => `${round(fromMm(mm, input.unit), input.unit === "in" ? 4 : 3)} ${input.unit}`;
+  const show = (mm: number) => showLength(fromMm(mm, input.unit), input.unit);
   const parts = [
     verdict === "ok"
       ? `The shaft is within h11 of ${nominal.label} (down to ${show(lowest)}).`
@@ -181,5 +232,109 @@ export function checkShaft(input: { shaftMm: number; unit: LengthUnit; grooved: 
         : `The shaft reads above ${nominal.label}: re-measure, or check whether it is a different nominal size.`,
   ];
   if (needsSleeve) parts.push("A repair sleeve of the same seal size is the usual remedy.");
-  return { nominalLabel: nominal.label, lowestInTolerance: round(fromMm(lowest, input.unit), 5), verdict, needsSleeve, message: parts.join(" ") };
+  return { nominalLabel: nominal.label, lowestInTolerance: tradeRound(fromMm(lowest, input.unit), input.unit), verdict, needsSleeve, message: parts.join(" ") };
+}
+
+export interface SealOrder {
+  system: "inch" | "metric";
+  /** The unit every figure of the order is in: inches for an inch seal, millimetres for a metric one. */
+  unit: LengthUnit;
+  /** Nominal shaft size: a worn shaft reads small, so this is the size the shaft was made to. */
+  shaft: number;
+  shaftLabel: string;
+  /** The housing bore at the trade's precision: thousandths of an inch; 0.1 mm, or whole mm for a standard bore. */
+  bore: number;
+  /** Nearest common fraction of an inch, or whole millimetre; null when the width was not measured. */
+  width: number | null;
+  /** How a person asks for it at a parts counter, shaft first: `1-1/2 × 2.374 × 1/2 in`. */
+  label: string;
+  /** The outside diameter a new seal should have for its press fit in this bore. */
+  sealOd: { min: number; max: number };
+  askFor: string;
+  notes: string[];
+  source: string;
+}
+
+const metricBores = new Set(METRIC_SEALS.map(([, D]) => D));
+const inchBores = [...new Set(INCH_SEALS.map(([, D]) => D))];
+
+/** The bore as a seal is asked for: a worn housing reads large, so a standard bore just below the reading is taken. */
+function orderBore(boreMm: number, system: "inch" | "metric"): number {
+  if (system === "inch") {
+    const boreIn = boreMm / MM_PER_INCH;
+    const known = inchBores.find((D) => boreIn - D >= -0.0005 && boreIn - D <= 0.002);
+    return known ?? round(boreIn, 3);
+  }
+  const whole = Math.round(boreMm);
+  // Within the wear allowance of a whole-millimetre bore that the ISO 6194-1 sizes use: ask for that bore.
+  if (metricBores.has(whole) && boreMm - whole >= -0.05 && boreMm - whole <= Math.max(0.1, whole * 0.004)) return whole;
+  return round(boreMm, 1);
+}
+
+/** Width to the nearest 1/16 in or whole millimetre: seal widths are made in those steps. */
+function orderWidth(widthMm: number, system: "inch" | "metric"): number {
+  if (system === "inch") return Math.max(1, Math.round((widthMm / MM_PER_INCH) * 16)) / 16;
+  return Math.max(1, Math.round(widthMm));
+}
+
+/**
+ * The lip seal to order for a measured shaft, housing bore and (optionally) width, whatever the tables hold: inch seals
+ * are made for far more bores than any list. The system is the shaft's: the unit measured in leads where both fit.
+ */
+export function sealOrder(input: { shaftMm: number; boreMm: number; widthMm?: number; unit: LengthUnit; grooved?: boolean; attributes?: SealAttributes }): SealOrder {
+  const shaftCandidates = nominalCandidates(input.shaftMm, input.unit, "shaft");
+  const shaftNominal = shaftCandidates[0];
+  const system = shaftNominal.system;
+  const unit: LengthUnit = system === "inch" ? "in" : "mm";
+  const shaft = shaftNominal.nominal;
+  const bore = orderBore(input.boreMm, system);
+  const boreMm = system === "inch" ? bore * MM_PER_INCH : bore;
+  const width = input.widthMm === undefined ? null : orderWidth(input.widthMm, system);
+  const outside = input.attributes?.outside ?? "metal";
+  const range = sealOdRange(boreMm, outside, system);
+  // The range is rounded inward, so that any seal read off it at the trade's precision is inside the fit.
+  const step = system === "inch" ? 0.001 : 0.01;
+  const sealOd = {
+    min: round(Math.ceil(round(fromMm(range.minMm, unit) / step, 6)) * step, system === "inch" ? 3 : 2),
+    max: round(Math.floor(round(fromMm(range.maxMm, unit) / step, 6)) * step, system === "inch" ? 3 : 2),
+  };
+  const shaftText = system === "inch" ? inchLabel(shaft).replace(" in", "") : `${round(shaft, 1)}`;
+  const widthText = width === null ? null : system === "inch" ? inchLabel(width).replace(" in", "") : `${width}`;
+  const boreText = system === "inch" ? bore.toFixed(3) : `${bore}`;
+  const label = [shaftText, boreText, widthText].filter(Boolean).join(" × ") + ` ${unit}`;
+  const askFor = describeAttributes(input.attributes ?? {});
+
+  const shaftReading = showLength(fromMm(input.shaftMm, unit), unit);
+  const shaftWear = fromMm(input.shaftMm - shaftNominal.nominalMm, unit);
+  const notes = [
+    tradeRound(shaftWear, unit) === 0
+      ? `Shaft ${shaftReading}: ${shaftNominal.label} exactly.`
+      : `Shaft ${shaftReading}: ${shaftNominal.label}, ${showDeviation(shaftWear, unit)} from nominal${shaftWear < 0 ? ", as a worn shaft reads" : ""}.`,
+    system === "inch"
+      ? `Housing bore ${bore.toFixed(3)} in: inch seals are made for bores in thousandths, so ask for exactly this bore.`
+      : `Housing bore ${bore} mm${Number.isInteger(bore) && metricBores.has(bore) ? ", a standard ISO 6194-1 bore" : ": not a standard bore, so ask for a seal made for it or measure again"}.`,
+    `A new seal's outside diameter should be ${showLength(sealOd.min, unit)} to ${showLength(sealOd.max, unit)} for its press fit in this bore (${outside === "metal" ? "metal case" : "rubber-covered"}): check it with calipers before fitting.`,
+  ];
+  if (width === null) notes.push("Width not measured: give the depth of the seal's seat when you ask, or take the old seal along.");
+  else if (Math.abs(fromMm(input.widthMm ?? 0, unit) - width) > (system === "inch" ? 0.01 : 0.2)) {
+    notes.push(`Width measured ${showLength(fromMm(input.widthMm ?? 0, unit), unit)}; seals come in ${system === "inch" ? "1/16 in" : "whole-millimetre"} steps. A slightly narrower seal fits a plain seat; a wider one needs the depth.`);
+  }
+  if (input.unit !== unit) {
+    notes.push(
+      `Measured in ${input.unit === "in" ? "inches" : "millimetres"}, but the shaft is ${system === "inch" ? "an inch" : "a metric"} size: order ${system === "inch" ? "an inch" : "a metric"} seal. In ${input.unit}: shaft ${showLength(fromMm(shaftNominal.nominalMm, input.unit), input.unit)}, bore ${showLength(fromMm(boreMm, input.unit), input.unit)}.`,
+    );
+  }
+  const miss = nearMissFor(shaftCandidates);
+  if (miss) notes.push(miss.message);
+  if (input.grooved) notes.push("The old lip has worn a groove: fit a repair sleeve of the same seal size, or set the new lip on unworn shaft.");
+  return { system, unit, shaft, shaftLabel: shaftNominal.label, bore, width, label, sealOd, askFor, notes, source: range.source };
+}
+
+/** Everything the seal calculator answers for one measurement: the seal to order first, then the sizes nearby. */
+export function measureSeal(input: SealMatchInput) {
+  return {
+    order: sealOrder(input),
+    ...matchSeal(input),
+    shaft: checkShaft({ shaftMm: input.shaftMm, unit: input.unit, grooved: input.grooved ?? false }),
+  };
 }

@@ -70,16 +70,44 @@ function fraction(whole: number, numerator: string, denominator: string): number
   return whole + Number(numerator) / d;
 }
 
-/** Rounds for display without binary noise: 38.1 stays 38.1, 1.49999999 becomes 1.5. */
+/**
+ * Rounds for display without binary noise: 38.1 stays 38.1, 1.49999999 becomes 1.5. Halves round away from zero, so a
+ * deviation of −0.0015 in reads −0.002 in, as +0.0015 in reads +0.002 in.
+ */
 export function round(value: number, decimals: number): number {
   const f = 10 ** decimals;
-  return Math.round(value * f) / f;
+  const scaled = Math.abs(value) * f;
+  // 1.0049999999 × 100 must round as the 1.005 it stands for.
+  const rounded = Math.round(scaled + scaled * Number.EPSILON * 4);
+  return (Math.sign(value) * rounded) / f || 0;
+}
+
+/**
+ * The trade's precision for a length: inches to the thousandth, millimetres to the hundredth. A deviation or a
+ * measured value is never shown finer than a person can read it off a micrometer.
+ */
+export const TRADE_DECIMALS: Record<LengthUnit, number> = { in: 3, mm: 2 };
+
+export function tradeRound(value: number, unit: LengthUnit): number {
+  return round(value, TRADE_DECIMALS[unit]);
+}
+
+/** `2.380 in`, `61.3 mm`: a measured or computed length at the trade's precision (inches always in thousandths). */
+export function showLength(value: number, unit: LengthUnit): string {
+  return unit === "in" ? `${tradeRound(value, unit).toFixed(3)} in` : `${tradeRound(value, unit)} mm`;
+}
+
+/** A signed deviation at the trade's precision: `+0.004 in`, `−0.05 mm`, `±0 in`. */
+export function showDeviation(value: number, unit: LengthUnit): string {
+  const rounded = tradeRound(value, unit);
+  if (rounded === 0) return `±0 ${unit}`;
+  return `${rounded > 0 ? "+" : "−"}${Math.abs(rounded)} ${unit}`;
 }
 
 /** `1-1/4 in`, `3/4 in`, `2 in` for a value on the 1/64 grid; decimals otherwise. */
 export function inchLabel(inches: number): string {
   const sixtyFourths = Math.round(inches * 64);
-  if (Math.abs(sixtyFourths / 64 - inches) > 1e-9) return `${round(inches, 4)} in`;
+  if (Math.abs(sixtyFourths / 64 - inches) > 1e-9) return `${round(inches, 3)} in`;
   const whole = Math.floor(sixtyFourths / 64);
   let numerator = sixtyFourths % 64;
   let denominator = 64;

@@ -58,9 +58,41 @@ describe("deep groove ball bearing boundary dimensions", () => {
   });
 
   it("gives the R-series inch bearings a bore of their number in sixteenths of an inch", () => {
-    // ABMA inch radial ball bearing numbering: R8 has a 8/16 = 1/2 in bore. R8 is 1/2 × 1-1/8 × 1/4 in (from memory).
+    // ABMA inch radial ball bearing numbering: R8 has a 8/16 = 1/2 in bore. R8 is 1/2 × 1-1/8 × 1/4 in open (BOSL2
+    // open parts library, ball_bearings.scad, R-series rows).
     expect(dims("R8")).toEqual([12.7, 28.575, 6.35]);
     for (const b of ALL_BEARINGS.filter((x) => x.series === "R")) expect(b.boreMm).toBeCloseTo((Number(b.boreCode) / 16) * 25.4, 6);
+  });
+
+  it("agrees with the BOSL2 table on every open R-series size", () => {
+    // BOSL2 ball_bearings.scad, inch rows R2 … R24 (d × D × B in inches).
+    const bosl2: Array<[string, number, number, number]> = [
+      ["R2", 1 / 8, 3 / 8, 5 / 32], ["R3", 3 / 16, 1 / 2, 5 / 32], ["R4", 1 / 4, 5 / 8, 0.196], ["R6", 3 / 8, 7 / 8, 7 / 32],
+      ["R8", 1 / 2, 9 / 8, 1 / 4], ["R10", 5 / 8, 11 / 8, 9 / 32], ["R12", 3 / 4, 13 / 8, 5 / 16], ["R14", 7 / 8, 15 / 8, 3 / 8],
+      ["R16", 1, 2, 3 / 8], ["R18", 9 / 8, 17 / 8, 3 / 8], ["R20", 10 / 8, 18 / 8, 3 / 8], ["R22", 11 / 8, 20 / 8, 7 / 16],
+      ["R24", 12 / 8, 21 / 8, 7 / 16],
+    ];
+    for (const [designation, d, D, B] of bosl2) {
+      const [bore, od, width] = dims(designation);
+      expect(bore).toBeCloseTo(d * 25.4, 3);
+      expect(od).toBeCloseTo(D * 25.4, 3);
+      expect(width).toBeCloseTo(B * 25.4, 3);
+    }
+  });
+
+  it("decodes R8-2RS and R8ZZ with the closed width, R8 with the open one", () => {
+    // from memory (ABMA inch series tables; BOSL2 gives its ZZ rows the open width, so this is not confirmed):
+    // R8 open 1/4 in, R8-2RS and R8-ZZ 5/16 in wide.
+    expect(decodeBearing("R8").widthMm).toBeCloseTo(6.35, 4);
+    expect(decodeBearing("R8-2RS").widthMm).toBeCloseTo(7.9375, 4);
+    expect(decodeBearing("R8ZZ").widthMm).toBeCloseTo(7.9375, 4);
+    expect(decodeBearing("R4-2RS").widthMm).toBeCloseTo(0.196 * 25.4, 4);
+  });
+
+  it("finds R8-2RS for a measured 1/2 × 1-1/8 × 5/16 in bearing", () => {
+    // from memory (ABMA inch series): the sealed R8 is 5/16 in wide.
+    const { candidates } = matchBearing({ boreMm: 12.7, outsideDiameterMm: 28.575, widthMm: 7.94, toleranceMm: 0.1016, unit: "in" });
+    expect(candidates[0].designation).toBe("R8-2RS");
   });
 });
 

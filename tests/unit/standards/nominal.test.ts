@@ -6,7 +6,28 @@ describe("nominal size from a measured one", () => {
     // common practice (no published source): a worn shaft measures under its nominal size.
     const [best] = nominalCandidates(1.2485 * 25.4, "in", "shaft");
     expect(best).toMatchObject({ system: "inch", label: "1-1/4 in", nominal: 1.25 });
-    expect(best.deviation).toBeCloseTo(-0.0015, 5);
+    // Readings are given at the trade's precision, the thousandth of an inch; the exact figure stays in millimetres.
+    expect(best.deviation).toBe(-0.002);
+    expect(best.deviationMm).toBeCloseTo(-0.0015 * 25.4, 4);
+  });
+
+  it("takes 1.497 in on a worn shaft as 1-1/2 in, not 38 mm, because it was measured in inches", () => {
+    // The worked example of issue 10 (common practice, no published source): a 1940s fan-hub shaft of 1-1/2 in,
+    // worn 0.003 in. 1.497 in = 38.024 mm lies nearer 38 mm, but both fit within the wear allowance.
+    const candidates = nominalCandidates(1.497 * 25.4, "in", "shaft");
+    expect(candidates[0]).toMatchObject({ system: "inch", label: "1-1/2 in" });
+    expect(candidates.some((c) => c.label === "38 mm")).toBe(true);
+    expect(nearMissFor(candidates)?.message).toMatch(/not interchangeable/);
+  });
+
+  it("takes 38.02 mm on a shaft as 38 mm when it was measured in millimetres", () => {
+    // The same reading typed in millimetres: the metric size leads; 1-1/2 in = 38.1 mm exactly (25.4 mm/in).
+    expect(nominalCandidates(38.02, "mm", "shaft")[0].label).toBe("38 mm");
+  });
+
+  it("does not let the unit pull a reading to an odd sixty-fourth", () => {
+    // 0.984 in = 24.99 mm: a 25 mm shaft measured in inches. 63/64 in is not a size a designer chose.
+    expect(nominalCandidates(0.984 * 25.4, "in", "shaft")[0].label).toBe("25 mm");
   });
 
   it("reads 31.98 mm on a shaft as 32 mm, ahead of 1-1/4 in", () => {

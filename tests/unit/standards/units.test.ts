@@ -2,7 +2,7 @@ import fc from "fast-check";
 // @ts-expect-error convert-units 2 ships no types; it is used here only as an independent reference.
 import convert from "convert-units";
 import { describe, expect, it } from "vitest";
-import { fromMm, inchLabel, parseLength, toMm, UnitParseError } from "@/lib/standards/units";
+import { fromMm, inchLabel, parseLength, round, showDeviation, showLength, toMm, UnitParseError } from "@/lib/standards/units";
 
 describe("inch and millimetre", () => {
   it("converts exactly at 25.4 mm to the inch", () => {
@@ -64,6 +64,24 @@ describe("inch labels", () => {
     expect(inchLabel(0.75)).toBe("3/4 in");
     expect(inchLabel(2)).toBe("2 in");
     expect(inchLabel(1 + 17 / 64)).toBe("1-17/64 in");
-    expect(inchLabel(1.2485)).toBe("1.2485 in");
+    // Off the 1/64 grid an inch size is written in thousandths, the trade's precision.
+    expect(inchLabel(1.2485)).toBe("1.249 in");
+  });
+});
+
+describe("numbers at the trade's precision", () => {
+  it("shows inches in thousandths and millimetres in hundredths", () => {
+    // common practice (no published source): a micrometer reads 0.001 in or 0.01 mm.
+    expect(showLength(2.38, "in")).toBe("2.380 in");
+    expect(showLength(61.2996, "mm")).toBe("61.3 mm");
+    expect(showDeviation(0.03125, "in")).toBe("+0.031 in");
+    expect(showDeviation(-0.0015, "in")).toBe("−0.002 in");
+    expect(showDeviation(0.00001, "mm")).toBe("±0 mm");
+  });
+
+  it("rounds halves away from zero, the same either side of nominal", () => {
+    expect(round(-1.5, 0)).toBe(-2);
+    expect(round(1.5, 0)).toBe(2);
+    expect(round(1.005, 2)).toBe(1.01);
   });
 });

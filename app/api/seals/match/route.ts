@@ -1,7 +1,7 @@
 import { findPartsBySize } from "@/lib/catalogue/find-by-size";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
-import { checkShaft, matchSeal } from "@/lib/standards/seals";
+import { measureSeal } from "@/lib/standards/seals";
 import { readOptionalSize, readSize, readTolerance, sealMatchQuery } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
@@ -12,7 +12,7 @@ export const GET = handle(async (request) => {
   const shaftMm = readSize("shaft", q.shaft, q.unit);
   const boreMm = readSize("bore", q.bore, q.unit);
   const toleranceMm = readTolerance(q.tolerance, q.unit);
-  const result = matchSeal({
+  const result = measureSeal({
     shaftMm,
     boreMm,
     widthMm: readOptionalSize("width", q.width, q.unit),
@@ -22,5 +22,5 @@ export const GET = handle(async (request) => {
     attributes: { lips: q.lips, spring: q.spring, dustLip: q.dustLip, outside: q.outside },
   });
   const catalogueParts = await findPartsBySize({ category: "lip_seal", innerMm: shaftMm, outerMm: boreMm, toleranceMm });
-  return Response.json({ unit: q.unit, ...result, shaft: checkShaft({ shaftMm, unit: q.unit, grooved: q.grooved ?? false }), catalogueParts });
+  return Response.json({ unit: q.unit, ...result, catalogueParts });
 });
