@@ -7,18 +7,23 @@ import { CATEGORY_NAMES, type StandardKind } from "@/lib/catalogue/kinds";
 import { useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import { useLookup } from "@/lib/hooks/use-lookup";
 import { standardSizes } from "@/lib/catalogue/sizes";
+import type { StandardDims } from "@/lib/community/checks";
 
 export interface PickedPart {
   id: number;
   number: string;
   maker: string;
   description: string;
+  /** Documented sizes in mm, to compare a proposed standard part with before sending. */
+  dims?: StandardDims;
 }
 
 export interface PickedStandard {
   id: number;
   designation: string;
   sizes: string;
+  kind?: StandardKind;
+  dims?: StandardDims;
 }
 
 function Picked({ title, detail, onClear }: { title: string; detail: string; onClear: () => void }) {
@@ -77,7 +82,7 @@ export function PartPicker({ picked, onPick, error }: { picked: PickedPart | nul
               <button
                 type="button"
                 className="flex w-full flex-wrap items-baseline gap-x-3 p-3 text-left hover:bg-ground-sunk"
-                onClick={() => onPick({ id: r.id, number: r.number, maker: r.maker, description: r.description })}
+                onClick={() => onPick({ id: r.id, number: r.number, maker: r.maker, description: r.description, dims: r.sizes })}
               >
                 <span className="num text-lg font-bold">{r.number}</span>
                 <span>{r.description}</span>
@@ -111,7 +116,7 @@ export function StandardPicker({ picked, onPick, kind, error }: { picked: Picked
           {!isLoading && results.length === 0 && <li className="p-3 text-ink-soft">Not in the catalogue. Choose “enter it by designation” above.</li>}
           {results.map((r) => (
             <li key={r.id}>
-              <button type="button" className="flex w-full flex-wrap items-baseline gap-x-3 p-3 text-left hover:bg-ground-sunk" onClick={() => onPick({ id: r.id, designation: r.designation, sizes: standardSizes(r) })}>
+              <button type="button" className="flex w-full flex-wrap items-baseline gap-x-3 p-3 text-left hover:bg-ground-sunk" onClick={() => onPick({ id: r.id, designation: r.designation, sizes: standardSizes(r), kind: r.kind, dims: { innerMm: r.innerMm, outerMm: r.outerMm, widthMm: r.widthMm, lengthMm: r.lengthMm } })}>
                 <span className="num text-lg font-bold">{r.designation}</span>
                 <span className="text-sm text-ink-soft">{standardSizes(r)}</span>
               </button>

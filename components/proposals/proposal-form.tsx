@@ -11,7 +11,7 @@ import { Field, FieldError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
 import { CATEGORY_NAMES, FIT_NAMES, FITS, PART_CATEGORIES, STANDARD_KIND_NAMES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
-import { checkStandard } from "@/lib/community/checks";
+import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
 import { MEASURED_DIMENSIONS, MEASURED_NAMES, type ProposalCheck } from "@/lib/community/kinds";
 import type { SubmitOutcome } from "@/lib/community/submissions";
 import { submissionInput, type SubmissionFormValues, type SubmissionInput } from "@/lib/validation/submissions";
@@ -146,11 +146,24 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
   const fit = useWatch({ control, name: "fit" });
   const standard = useWatch({ control, name: "standard" });
 
-  const liveChecks = useMemo(() => {
-    if (standardMode !== "new" || !standard?.kind || !standard.designation || standard.designation.trim().length < 2) return [];
+  const checked = useMemo(() => {
+    if (standardMode !== "new" || !standard?.kind || !standard.designation || standard.designation.trim().length < 2) return null;
     const n = (v: unknown) => (typeof v === "number" && Number.isFinite(v) ? v : null);
-    return checkStandard({ kind: standard.kind, designation: standard.designation, innerMm: n(standard.innerMm), outerMm: n(standard.outerMm), widthMm: n(standard.widthMm), lengthMm: n(standard.lengthMm) }).checks;
+    return checkStandard({ kind: standard.kind, designation: standard.designation, innerMm: n(standard.innerMm), outerMm: n(standard.outerMm), widthMm: n(standard.widthMm), lengthMm: n(standard.lengthMm) });
   }, [standardMode, standard]);
+  const liveChecks = checked?.checks ?? [];
+  // The same comparison the server makes and the review page shows first: the standard part against the worn part's
+  // documented sizes.
+  const sizeMismatch = useMemo(() => {
+    if (originalMode !== "existing" || !pickedPart?.dims) return null;
+    const proposed =
+      standardMode === "new"
+        ? checked
+        : pickedStandard?.dims && pickedStandard.kind
+          ? { ...pickedStandard.dims, kind: pickedStandard.kind, designation: pickedStandard.designation }
+          : null;
+    return proposed ? checkAgainstPart({ number: pickedPart.number, ...pickedPart.dims }, proposed) : null;
+  }, [originalMode, pickedPart, standardMode, checked, pickedStandard]);
 
   const machines = choices.machines.filter((m) => m.makerId === Number(makerId));
 
@@ -272,6 +285,13 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
             </div>
             <p className="text-sm text-ink-soft">Sizes are optional when the designation says them; the engine checks any you enter against it.</p>
             <Checks checks={liveChecks} />
+          </div>
+        )}
+        {sizeMismatch && (
+          <div data-testid="size-mismatch">
+            <Notice tone="caution" role="alert">
+              {sizeMismatch.message}
+            </Notice>
           </div>
         )}
       </Section>

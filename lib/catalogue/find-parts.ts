@@ -18,6 +18,8 @@ export interface LookupResult {
   score: number;
   latestNumber: string;
   crossCount: number;
+  /** The part's documented sizes in millimetres, where the catalogue has them. */
+  sizes: { innerMm: number | null; outerMm: number | null; widthMm: number | null; lengthMm: number | null };
 }
 
 interface PartRow {
@@ -28,9 +30,14 @@ interface PartRow {
   number_key: string;
   description: string;
   category: PartCategory;
+  inner_mm: number | null;
+  outer_mm: number | null;
+  width_mm: number | null;
+  length_mm: number | null;
 }
 
-const COLUMNS = `p.id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description, p.category`;
+const COLUMNS = `p.id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description, p.category,
+  p.inner_mm, p.outer_mm, p.width_mm, p.length_mm`;
 
 let prefixCache: { at: number; prefixes: string[] } | undefined;
 
@@ -103,6 +110,7 @@ export async function findPartsByNumber(query: string, limit: number): Promise<L
     score,
     latestNumber: latest.get(row.id) ?? row.number,
     crossCount: counts.get(row.id) ?? 0,
+    sizes: { innerMm: row.inner_mm, outerMm: row.outer_mm, widthMm: row.width_mm, lengthMm: row.length_mm },
   }));
 }
 

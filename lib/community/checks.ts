@@ -148,3 +148,46 @@ export function measurementDeviations(measurements: Measurement[], standard: Sta
   }
   return out;
 }
+
+/** The field of the check that compares a proposal with the worn part's own documented sizes. */
+export const PART_SIZES_FIELD = "original.sizes";
+
+const DIM_NAMES: Record<keyof StandardDims, string> = { innerMm: "bore or shaft", outerMm: "outside diameter", widthMm: "width", lengthMm: "length" };
+
+/**
+ * How far a standard part's size may sit from the worn part's documented one and still be the same size: wear and
+ * inch/metric near misses stay inside (those are shown elsewhere); a different bearing series or seal size does not.
+ * Common practice (no published source).
+ */
+function disagreementMm(key: keyof StandardDims, documentedMm: number, kind: StandardKind): number {
+  if (key === "lengthMm") return documentedMm * 0.05; // a belt's length may be documented as inside, datum or outside
+  if (key === "widthMm") return kind === "bearing" ? 0.3 : 1;
+  return Math.max(0.25, documentedMm * 0.01);
+}
+
+const sizeText = (d: StandardDims) =>
+  [d.innerMm, d.outerMm, d.widthMm].filter((v): v is number => v != null).map((v) => round(v, 2)).join(" × ") + (d.lengthMm != null ? `${d.innerMm ?? d.outerMm ?? d.widthMm ? ", " : ""}length ${round(d.lengthMm, 0)}` : "") + " mm";
+
+/**
+ * A proposed standard part whose sizes disagree with the worn part's documented ones (a 20 × 47 × 14 bearing for a
+ * part documented as 15 × 35 × 11) is flagged before it is sent and at the top of its review. Null when they agree or
+ * either side has no sizes to compare.
+ */
+export function checkAgainstPart(part: StandardDims & { number: string }, standard: StandardDims & { designation: string; kind: StandardKind }): ProposalCheck | null {
+  const differences: string[] = [];
+  for (const key of Object.keys(DIM_NAMES) as Array<keyof StandardDims>) {
+    const documented = part[key];
+    const proposed = standard[key];
+    if (documented == null || proposed == null) continue;
+    const diff = proposed - documented;
+    if (Math.abs(diff) > disagreementMm(key, documented, standard.kind)) {
+      differences.push(`${DIM_NAMES[key]} ${round(Math.abs(diff), 2)} mm ${diff > 0 ? "larger" : "smaller"}`);
+    }
+  }
+  if (differences.length === 0) return null;
+  return {
+    level: "warning",
+    field: PART_SIZES_FIELD,
+    message: `${part.number} is documented as ${sizeText(part)}, but ${standard.designation} is ${sizeText(standard)}: ${differences.join(", ")}. Check the part and the designation: this is not the same size.`,
+  };
+}

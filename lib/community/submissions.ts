@@ -2,7 +2,7 @@ import { Op, QueryTypes, type Transaction } from "sequelize";
 import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
 import { recordAudit } from "@/lib/audit/record";
 import { searchForms } from "@/lib/catalogue/normalise";
-import { checkStandard } from "@/lib/community/checks";
+import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
 import type { Decision, NewPartInput, NewStandardInput, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
 import { checkUploadedPhotos, deleteStoredPhotos } from "@/lib/community/photos";
 import { env } from "@/lib/env";
@@ -28,6 +28,23 @@ interface ResolvedStandard {
   standardPartId: number | null;
   newStandard: (NewStandardInput & { attributes: Record<string, unknown> }) | null;
   checks: ProposalCheck[];
+}
+
+/**
+ * Adds to the standard's checks whether its sizes agree with the worn part's documented ones (existing parts only; a
+ * new part has no documented sizes yet). The member saw the same check in the form before sending.
+ */
+async function withPartSizeCheck(original: ResolvedOriginal, standard: ResolvedStandard): Promise<ResolvedStandard> {
+  if (!original.partId) return standard;
+  const part = await OriginalPart.findByPk(original.partId, { attributes: ["number", "innerMm", "outerMm", "widthMm", "lengthMm"] });
+  const known = standard.standardPartId ? await StandardPart.findByPk(standard.standardPartId) : null;
+  const proposed = known ?? standard.newStandard;
+  if (!part || !proposed) return standard;
+  const check = checkAgainstPart(
+    { number: part.number, innerMm: part.innerMm, outerMm: part.outerMm, widthMm: part.widthMm, lengthMm: part.lengthMm },
+    { kind: proposed.kind, designation: proposed.designation, innerMm: proposed.innerMm ?? null, outerMm: proposed.outerMm ?? null, widthMm: proposed.widthMm ?? null, lengthMm: proposed.lengthMm ?? null },
+  );
+  return check ? { ...standard, checks: [check, ...standard.checks] } : standard;
 }
 
 async function resolveOriginal(input: SubmissionInput["original"]): Promise<ResolvedOriginal> {
@@ -165,7 +182,7 @@ function snapshot(s: Submission): Record<string, unknown> {
 export async function createSubmission(user: Actor, input: SubmissionInput): Promise<SubmitOutcome> {
   await assertSubmissionRate(user.id);
   const original = await resolveOriginal(input.original);
-  const standard = await resolveStandard(input.standard);
+  const standard = await withPartSizeCheck(original, await resolveStandard(input.standard));
   const duplicate = await findDuplicate(original, standard, null);
   if (duplicate?.kind === "cross") {
     const added = await addConfirmation({ crossId: duplicate.id }, user.id, input.notes);
@@ -213,7 +230,7 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
     throw new AppError("conflict", existing.status === "pending" ? "This proposal is waiting for review; it can be changed only when a moderator sends it back." : "This proposal has been decided and can no longer be changed.");
   }
   const original = await resolveOriginal(input.original);
-  const standard = await resolveStandard(input.standard);
+  const standard = await withPartSizeCheck(original, await resolveStandard(input.standard));
   const duplicate = await findDuplicate(original, standard, id);
   if (duplicate?.kind === "cross") throw new AppError("conflict", `That cross is already in the catalogue (cross #${duplicate.id}). Withdraw this proposal and confirm the cross instead.`, { field: "standard" });
   const photos = await checkUploadedPhotos(user.id, input.photoIds, id);

@@ -2,7 +2,7 @@ import { QueryTypes } from "sequelize";
 import { Maker, Machine, Assembly, OriginalPart, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
 import { hasPermission, type Role } from "@/lib/auth/roles";
 import { CATEGORY_NAMES, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
-import { measurementDeviations, type MeasurementDeviation, type StandardDims } from "@/lib/community/checks";
+import { checkAgainstPart, measurementDeviations, PART_SIZES_FIELD, type MeasurementDeviation, type StandardDims } from "@/lib/community/checks";
 import type { Measurement, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
 import { AppError } from "@/lib/errors";
 
@@ -135,6 +135,8 @@ export interface SubmissionDetail extends SubmissionRow {
   deviations: MeasurementDeviation[];
   notes: string | null;
   checks: ProposalCheck[];
+  /** The proposed standard part disagrees with the worn part's documented sizes: shown first to the reviewer. */
+  sizeMismatch: ProposalCheck | null;
   photoList: Array<{ id: number; url: string; fileName: string | null }>;
   existingCrosses: Array<{ id: number; designation: string | null; repairMethod: string | null; fit: Fit; status: string; origin: string; confirmations: number }>;
   submitterRecord: { approved: number; rejected: number; open: number };
@@ -206,7 +208,11 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
     measurements: submission.measurements,
     deviations: measurementDeviations(submission.measurements, standardPart),
     notes: submission.notes,
-    checks: submission.checks,
+    checks: submission.checks.filter((c) => c.field !== PART_SIZES_FIELD),
+    // Worked out afresh, so proposals sent before the check existed are flagged too.
+    sizeMismatch: part
+      ? checkAgainstPart({ number: part.number, innerMm: part.innerMm, outerMm: part.outerMm, widthMm: part.widthMm, lengthMm: part.lengthMm }, standardPart)
+      : null,
     photoList: photos.map((p) => ({ id: p.id, url: `/api/photos/${p.id}`, fileName: p.fileName })),
     existingCrosses: existingCrosses.map((c) => ({ id: c.id, designation: c.designation, repairMethod: c.repair_method, fit: c.fit, status: c.status, origin: c.origin, confirmations: Number(c.confirmations) })),
     submitterRecord: { approved: Number(record.approved), rejected: Number(record.rejected), open: Number(record.open) },

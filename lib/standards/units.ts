@@ -126,3 +126,24 @@ export function mmLabel(mm: number): string {
 export function lengthLabel(value: number, unit: LengthUnit): string {
   return unit === "in" ? inchLabel(value) : mmLabel(value);
 }
+
+/**
+ * What a person typed, said again in the other unit: `24.98` mm becomes `0.983` in, `1-1/2` in becomes `38.1` mm, at
+ * the trade's precision. Text that is not a size (empty, half-typed) is left as it is, for the field to report.
+ */
+export function convertTyped(text: string, from: LengthUnit, to: LengthUnit): string {
+  if (from === to || text.trim() === "") return text;
+  try {
+    const parsed = parseLength(text, from);
+    return String(tradeRound(fromMm(parsed.mm, to), to));
+  } catch {
+    return text;
+  }
+}
+
+/** The typed sizes of a form, each converted with convertTyped. */
+export function convertTypedSizes<T extends Record<string, string>>(sizes: T, names: Array<keyof T>, from: LengthUnit, to: LengthUnit): T {
+  const next = { ...sizes };
+  for (const name of names) next[name] = convertTyped(sizes[name], from, to) as T[keyof T];
+  return next;
+}

@@ -44,6 +44,14 @@ export default async function ReviewProposalPage({ params }: { params: Promise<{
           {d.part.number} <span aria-label="replaced by">→</span> {d.standardPart.designation}
         </h1>
       </header>
+      {d.sizeMismatch && (
+        <div data-testid="size-mismatch">
+          <Notice tone="caution" role="alert">
+            <strong className="mr-1">Not the same size.</strong>
+            {d.sizeMismatch.message}
+          </Notice>
+        </div>
+      )}
 
       <div className="grid gap-6 lg:grid-cols-2">
         <section aria-labelledby="proposal-heading" className="space-y-4">

@@ -73,7 +73,7 @@ describe("deep groove ball bearing boundary dimensions", () => {
       ["R24", 12 / 8, 21 / 8, 7 / 16],
     ];
     for (const [designation, d, D, B] of bosl2) {
-      const [bore, od, width] = dims(designation);
+      const [bore, od, width] = dims(designation) ?? [];
       expect(bore).toBeCloseTo(d * 25.4, 3);
       expect(od).toBeCloseTo(D * 25.4, 3);
       expect(width).toBeCloseTo(B * 25.4, 3);
