@@ -124,14 +124,17 @@ export function ListEditor({ initial }: { initial: ListView }) {
       await mutate();
     };
     return {
-      number: (l: ListLine) => (
-        <>
-          <Link href={`/parts/${l.partId}`} className="num whitespace-nowrap font-bold">
-            {l.number}
-          </Link>
-          {l.requestedNumber && <span className="block text-sm text-ink-soft">asked for as {l.requestedNumber}</span>}
-        </>
-      ),
+      number: (l: ListLine) =>
+        l.partId === null ? (
+          <span className="text-sm text-ink-soft">none: sized from measurements</span>
+        ) : (
+          <>
+            <Link href={`/parts/${l.partId}`} className="num whitespace-nowrap font-bold">
+              {l.number}
+            </Link>
+            {l.requestedNumber && <span className="block text-sm text-ink-soft">asked for as {l.requestedNumber}</span>}
+          </>
+        ),
       part: (l: ListLine) => (
         <div className="min-w-40">
           {l.description}
@@ -161,7 +164,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
               <span className="num font-bold">{l.chosen.designation}</span>
             )}
             <span className="num block text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
-            <FitBadge fit={l.chosen.fit} />
+            {l.measured ? <span className="block text-sm">Sized from your measurements</span> : <FitBadge fit={l.chosen.fit} />}
           </div>
         );
       },

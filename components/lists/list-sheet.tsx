@@ -34,7 +34,7 @@ export function ListSheet({ view }: { view: ListView }) {
           {view.lines.map((l) => (
             <tr key={l.id} className="border-b border-rule align-top" data-testid="sheet-line">
               <td className="num py-1 pr-2">
-                {l.number}
+                {l.partId === null ? "—" : l.number}
                 {l.requestedNumber && <span className="block whitespace-nowrap text-xs">was {l.requestedNumber}</span>}
               </td>
               <td className="py-1 pr-2">
@@ -44,7 +44,7 @@ export function ListSheet({ view }: { view: ListView }) {
               </td>
               <td className="num py-1 pr-2 font-bold">{l.chosen?.designation ?? "— no approved cross"}</td>
               <td className="num whitespace-nowrap py-1 pr-2">{l.chosen ? standardSizes(l.chosen).replace(" mm", "") : ""}</td>
-              <td className="py-1 pr-2">{l.chosen ? FIT_NAMES[l.chosen.fit].word : ""}</td>
+              <td className="py-1 pr-2">{l.measured ? "measured" : l.chosen ? FIT_NAMES[l.chosen.fit].word : ""}</td>
               <td className="num py-1 pr-2 text-right font-bold">{l.quantity}</td>
               <td className="py-1">☐</td>
             </tr>

@@ -2,6 +2,7 @@ import * as accounts from "@/db/migrations/0001-accounts";
 import * as catalogue from "@/db/migrations/0002-catalogue";
 import * as community from "@/db/migrations/0003-community";
 import * as importsAndLists from "@/db/migrations/0004-imports-and-lists";
+import * as measuredListLines from "@/db/migrations/0005-measured-list-lines";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   { name: "0002-catalogue", ...catalogue },
   { name: "0003-community", ...community },
   { name: "0004-imports-and-lists", ...importsAndLists },
+  { name: "0005-measured-list-lines", ...measuredListLines },
 ];

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
+import type { StandardItem } from "@/lib/lists/standard-item";
 
 const id = () => ({ type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true });
 
@@ -21,8 +22,10 @@ JobList.init(
 export class JobListLine extends Model<InferAttributes<JobListLine>, InferCreationAttributes<JobListLine>> {
   declare id: CreationOptional<number>;
   declare listId: number;
-  declare partId: number;
+  declare partId: number | null;
   declare requestedNumber: string | null;
+  /** A standard part worked out from measurements, when the line has no factory part (partId null). */
+  declare standardItem: StandardItem | null;
   declare standardPartId: number | null;
   declare quantity: number;
   declare notes: string | null;
@@ -35,6 +38,7 @@ JobListLine.init(
     listId: DataTypes.INTEGER,
     partId: DataTypes.INTEGER,
     requestedNumber: DataTypes.STRING(60),
+    standardItem: DataTypes.JSONB,
     standardPartId: DataTypes.INTEGER,
     quantity: DataTypes.INTEGER,
     notes: DataTypes.TEXT,

@@ -2,7 +2,7 @@ import { decodeBearing } from "@/lib/standards/bearings";
 import { decodeBelt } from "@/lib/standards/belts";
 import { StandardsInputError } from "@/lib/standards/errors";
 import { INCH_SEALS, METRIC_SEALS } from "@/lib/standards/seal-sizes";
-import { MM_PER_INCH, round, toMm } from "@/lib/standards/units";
+import { MM_PER_INCH, parseLength, round, toMm } from "@/lib/standards/units";
 import type { StandardKind } from "@/lib/catalogue/kinds";
 import type { Measurement, NewStandardInput, ProposalCheck } from "@/lib/community/kinds";
 
@@ -40,7 +40,24 @@ function compareEntered(designation: string, engine: Partial<StandardDims>, ente
   }
 }
 
-const SEAL_SIZE = /(\d+(?:[.,]\d+)?)\s*[x×*]\s*(\d+(?:[.,]\d+)?)\s*[x×*]\s*(\d+(?:[.,]\d+)?)/i;
+/**
+ * Shaft × bore × width from a seal's designation: `35 × 52 × 7`, `35x52x7 mm`, `1-1/2 × 2.374 × 1/2 in`. Without a
+ * unit, three small numbers are inches. Null when it is not three sizes.
+ */
+export function readSealSize(designation: string): { innerMm: number; outerMm: number; widthMm: number; inch: boolean } | null {
+  const unit = /\s*(mm|in\.?|inch(?:es)?|")\s*$/i.exec(designation);
+  const body = unit ? designation.slice(0, unit.index) : designation;
+  const parts = body.trim().split(/\s*[x×*]\s*/i);
+  if (parts.length !== 3) return null;
+  try {
+    const raw = parts.map((p) => parseLength(p, "mm").value);
+    const inch = unit ? !/^mm$/i.test(unit[1]) : raw[0] < 10 && raw[1] < 10 && raw[2] < 2;
+    const [innerMm, outerMm, widthMm] = raw.map((v) => toMm(v, inch ? "in" : "mm"));
+    return { innerMm, outerMm, widthMm, inch };
+  } catch {
+    return null;
+  }
+}
 
 /**
  * Reads a proposed standard part through the standards engine: a bearing or belt designation gives its sizes, and
@@ -99,23 +116,22 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
   }
 
   if (input.kind === "lip_seal") {
-    const m = SEAL_SIZE.exec(designation);
+    const size = readSealSize(designation);
     const dims = { ...entered };
-    if (m) {
-      const [shaft, bore, width] = [m[1], m[2], m[3]].map((v) => Number(v.replace(",", ".")));
-      const inch = /\bin\b|"|inch/i.test(designation) || (shaft < 10 && bore < 10 && width < 2);
-      const read = inch
-        ? { innerMm: toMm(shaft, "in"), outerMm: toMm(bore, "in"), widthMm: toMm(width, "in") }
-        : { innerMm: shaft, outerMm: bore, widthMm: width };
+    if (size) {
+      const { inch, ...read } = size;
       compareEntered(`${designation}`, read, entered, checks);
       Object.assign(dims, read);
       const listed = (inch ? INCH_SEALS.map(([a, b, c]) => [a * MM_PER_INCH, b * MM_PER_INCH, c * MM_PER_INCH]) : METRIC_SEALS).some(
         ([a, b, c]) => Math.abs(a - read.innerMm) < 0.1 && Math.abs(b - read.outerMm) < 0.1 && Math.abs(c - read.widthMm) < 0.1,
       );
+      const sizes = `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm`;
       checks.push(
         listed
-          ? { level: "ok", field: "standard.designation", message: `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm is a listed standard seal size.` }
-          : { level: "warning", field: "standard.designation", message: `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm is not in our table of common seal sizes; check that it can be bought.` },
+          ? { level: "ok", field: "standard.designation", message: `${sizes} is a listed standard seal size.` }
+          : inch
+            ? { level: "ok", field: "standard.designation", message: `${sizes}: an inch seal. Inch seals are made for far more bores than our table of common sizes holds; order by these three sizes.` }
+            : { level: "warning", field: "standard.designation", message: `${sizes} is not in our table of common seal sizes; check that it can be bought.` },
       );
     } else if (entered.innerMm == null || entered.outerMm == null || entered.widthMm == null) {
       checks.push({ level: "warning", field: "standard.designation", message: "A lip seal is ordered by shaft × bore × width: write them in the designation (35 × 52 × 7) or enter the three sizes." });

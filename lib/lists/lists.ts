@@ -7,6 +7,7 @@ import { findPartsByNumber } from "@/lib/catalogue/find-parts";
 import { CATEGORY_NAMES, FIT_NAMES, STANDARD_KIND_NAMES, type CautionKind, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
 import { loadChain } from "@/lib/catalogue/supersessions";
 import { AppError } from "@/lib/errors";
+import { CATEGORY_OF_KIND, toStandardItem, type MeasuredKind, type StandardItem } from "@/lib/lists/standard-item";
 
 export interface Equivalent {
   standardPartId: number;
@@ -22,7 +23,9 @@ export interface Equivalent {
 
 export interface ListLine {
   id: number;
-  partId: number;
+  /** Null for a standard part worked out from measurements (`measured` then says what to order). */
+  partId: number | null;
+  measured: StandardItem | null;
   number: string;
   requestedNumber: string | null;
   maker: string;
@@ -136,15 +139,16 @@ export async function getList(access: { userId: string } | { token: string }, id
   const machine = list.machineId
     ? (await sequelize.query<{ id: number; model: string; maker: string }>("SELECT m.id, m.model, k.name AS maker FROM machines m JOIN makers k ON k.id = m.maker_id WHERE m.id = :id", { replacements: { id: list.machineId }, type: QueryTypes.SELECT }))[0] ?? null
     : null;
-  const lines = await sequelize.query<{ id: number; part_id: number; requested_number: string | null; standard_part_id: number | null; quantity: number; notes: string | null; number: string; maker: string; description: string; category: PartCategory; has_assembly: boolean }>(
-    `SELECT x.id, x.part_id, x.requested_number, x.standard_part_id, x.quantity, x.notes, p.number, k.name AS maker, p.description, p.category,
+  const lines = await sequelize.query<{ id: number; part_id: number | null; standard_item: StandardItem | null; requested_number: string | null; standard_part_id: number | null; quantity: number; notes: string | null; number: string | null; maker: string | null; description: string | null; category: PartCategory | null; has_assembly: boolean }>(
+    `SELECT x.id, x.part_id, x.standard_item, x.requested_number, x.standard_part_id, x.quantity, x.notes, p.number, k.name AS maker, p.description, p.category,
             EXISTS (SELECT 1 FROM part_usages u JOIN part_usages o ON o.machine_id = u.machine_id AND o.assembly_id = u.assembly_id AND o.part_id <> u.part_id WHERE u.part_id = p.id) AS has_assembly
-     FROM job_list_lines x JOIN original_parts p ON p.id = x.part_id JOIN makers k ON k.id = p.maker_id
+     FROM job_list_lines x LEFT JOIN original_parts p ON p.id = x.part_id LEFT JOIN makers k ON k.id = p.maker_id
      WHERE x.list_id = :id ORDER BY x.id`,
     { replacements: { id }, type: QueryTypes.SELECT },
   );
-  const equivalents = await equivalentsFor(lines.map((l) => l.part_id));
+  const equivalents = await equivalentsFor(lines.flatMap((l) => (l.part_id === null ? [] : [l.part_id])));
   const view: ListLine[] = lines.map((l) => {
+    if (l.part_id === null || l.standard_item) return measuredLine(l.id, l.standard_item!, l.quantity, l.notes);
     const options = equivalents.get(l.part_id) ?? [];
     const chosen = options.find((o) => o.standardPartId === l.standard_part_id) ?? options[0] ?? null;
     const warnings: string[] = [];
@@ -154,12 +158,13 @@ export async function getList(access: { userId: string } | { token: string }, id
     return {
       id: l.id,
       partId: l.part_id,
-      number: l.number,
+      measured: null,
+      number: l.number!,
       requestedNumber: l.requested_number && l.requested_number !== l.number ? l.requested_number : null,
-      maker: l.maker,
-      description: l.description,
-      category: l.category,
-      categoryName: CATEGORY_NAMES[l.category],
+      maker: l.maker!,
+      description: l.description!,
+      category: l.category!,
+      categoryName: CATEGORY_NAMES[l.category!],
       quantity: l.quantity,
       notes: l.notes,
       equivalents: options,
@@ -181,7 +186,7 @@ export async function getList(access: { userId: string } | { token: string }, id
   if (view.length > 0) {
     const places = await sequelize.query<{ caution: CautionKind }>(
       "SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id = u.assembly_id WHERE u.part_id IN (:ids) AND a.caution IS NOT NULL",
-      { replacements: { ids: view.map((l) => l.partId) }, type: QueryTypes.SELECT },
+      { replacements: { ids: view.map((l) => l.partId ?? 0) }, type: QueryTypes.SELECT },
     );
     for (const p of places) cautions.add(p.caution);
   }
@@ -197,6 +202,39 @@ export async function getList(access: { userId: string } | { token: string }, id
     totals: [...totals.entries()].map(([category, t]) => ({ category, name: CATEGORY_NAMES[category], ...t })).sort((a, b) => a.name.localeCompare(b.name)),
     warnings: view.filter((l) => l.warnings.length > 0).length,
     cautions: [...cautions],
+  };
+}
+
+/** A line for a standard part worked out from measurements: what to order is the item itself. */
+function measuredLine(id: number, item: StandardItem, quantity: number, notes: string | null): ListLine {
+  const category = CATEGORY_OF_KIND[item.kind];
+  const chosen: Equivalent = {
+    standardPartId: 0,
+    designation: item.designation,
+    kind: item.kind,
+    fit: "dimensions_only",
+    confirmations: 0,
+    innerMm: item.innerMm,
+    outerMm: item.outerMm,
+    widthMm: item.widthMm,
+    lengthMm: item.lengthMm,
+  };
+  return {
+    id,
+    partId: null,
+    measured: item,
+    number: item.designation,
+    requestedNumber: null,
+    maker: "Standard part",
+    description: item.note ?? `${STANDARD_KIND_NAMES[item.kind]} sized from measurements`,
+    category,
+    categoryName: CATEGORY_NAMES[category],
+    quantity,
+    notes,
+    equivalents: [],
+    chosen,
+    warnings: [],
+    hasAssembly: false,
   };
 }
 
@@ -220,8 +258,13 @@ async function resolveNumber(number: string): Promise<{ id: number; typed: strin
  * Adds a part (by id, or by a typed factory number) as its latest number after supersessions, with the best
  * approved equivalent chosen; a part already on the list has its quantity raised instead.
  */
-export async function addLine(userId: string, listId: number, input: { partId?: number; number?: string; quantity: number; notes?: string }) {
+export async function addLine(
+  userId: string,
+  listId: number,
+  input: { partId?: number; number?: string; standard?: { kind: MeasuredKind; designation: string; note?: string }; quantity: number; notes?: string },
+) {
   await ownList(userId, listId);
+  if (input.standard) return addMeasuredLine(listId, toStandardItem(input.standard), input.quantity, input.notes);
   let requested: string | null = null;
   let partId: number;
   if (input.partId) {
@@ -255,12 +298,30 @@ export async function addLine(userId: string, listId: number, input: { partId?: 
   });
 }
 
+/** A standard part from a calculator, by designation and sizes; the same part added again raises its quantity. */
+async function addMeasuredLine(listId: number, item: StandardItem, quantity: number, notes: string | undefined) {
+  return sequelize.transaction(async (transaction) => {
+    await lockList(listId, transaction);
+    const [existing] = await sequelize.query<{ id: number; quantity: number }>(
+      `SELECT id, quantity FROM job_list_lines
+       WHERE list_id = :listId AND part_id IS NULL AND standard_item->>'kind' = :kind AND upper(standard_item->>'designation') = upper(:designation)`,
+      { replacements: { listId, kind: item.kind, designation: item.designation }, type: QueryTypes.SELECT, transaction },
+    );
+    if (existing) {
+      await JobListLine.update({ quantity: Math.min(existing.quantity + quantity, 9999) }, { where: { id: existing.id }, transaction });
+    }
+    const line = existing ?? (await JobListLine.create({ listId, partId: null, standardItem: item, requestedNumber: null, standardPartId: null, quantity, notes: notes || null }, { transaction }));
+    await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
+    return { lineId: line.id, partId: null, merged: Boolean(existing), superseded: false };
+  });
+}
+
 export async function updateLine(userId: string, listId: number, lineId: number, patch: { quantity?: number; notes?: string; standardPartId?: number | null }) {
   await ownList(userId, listId);
   const line = await JobListLine.findOne({ where: { id: lineId, listId } });
   if (!line) throw new AppError("not_found", "That line is not on this list.");
   if (patch.standardPartId) {
-    const options = (await equivalentsFor([line.partId])).get(line.partId) ?? [];
+    const options = line.partId === null ? [] : ((await equivalentsFor([line.partId])).get(line.partId) ?? []);
     if (!options.some((o) => o.standardPartId === patch.standardPartId)) {
       throw new AppError("validation_failed", "That standard part is not an approved equivalent of this part.", { field: "standardPartId" });
     }
@@ -287,6 +348,7 @@ export async function addRestOfAssembly(userId: string, listId: number, lineId: 
   const list = await ownList(userId, listId);
   const line = await JobListLine.findOne({ where: { id: lineId, listId } });
   if (!line) throw new AppError("not_found", "That line is not on this list.");
+  if (line.partId === null) throw new AppError("validation_failed", "This line is a standard part sized from measurements; it belongs to no assembly.", { field: "lineId" });
   const usages = await sequelize.query<{ machine_id: number; assembly_id: number; model: string; assembly: string }>(
     `SELECT u.machine_id, u.assembly_id, m.model, a.name AS assembly FROM part_usages u JOIN machines m ON m.id = u.machine_id JOIN assemblies a ON a.id = u.assembly_id
      WHERE u.part_id = :partId ORDER BY (u.machine_id = :machineId) DESC, m.model, a.name`,
@@ -336,7 +398,7 @@ export function listCsv(view: ListView): string {
     mm(l.chosen?.outerMm ?? null),
     mm(l.chosen?.widthMm ?? null),
     mm(l.chosen?.lengthMm ?? null),
-    l.chosen ? FIT_NAMES[l.chosen.fit].word : "no approved cross",
+    l.measured ? "sized from measurements" : l.chosen ? FIT_NAMES[l.chosen.fit].word : "no approved cross",
     l.quantity,
     [l.notes, l.requestedNumber ? `asked for as ${l.requestedNumber}` : null].filter(Boolean).join("; "),
   ]);

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { MEASURED_KINDS } from "@/lib/lists/standard-item";
 import { positiveId } from "@/lib/validation/ids";
 
 const quantity = z.number({ error: "The quantity is a whole number." }).int("The quantity is a whole number.").min(1, "The quantity is at least 1.").max(9999, "The quantity is at most 9999.");
@@ -11,14 +12,25 @@ export const listInput = z.object({
 
 export const listPatch = listInput.partial();
 
+/** A standard part worked out by a calculator: what to ask for, by kind and designation, with a note of the sizes. */
+export const measuredItemInput = z.object({
+  kind: z.enum(MEASURED_KINDS, { error: `The kind is one of: ${MEASURED_KINDS.join(", ")}.` }),
+  designation: z.string({ error: "Give the designation." }).trim().min(2, "Give the designation, e.g. 6205-2RS or 1-1/2 × 2.374 × 1/2 in.").max(80, "A designation is at most 80 characters."),
+  note: z.string().trim().max(300, "A note is at most 300 characters.").optional(),
+});
+
 export const lineInput = z
   .object({
     partId: positiveId("the part").optional(),
     number: z.string().trim().min(1, "Type a factory number.").max(60, "A factory number is at most 60 characters.").optional(),
+    standard: measuredItemInput.optional(),
     quantity: quantity.default(1),
     notes: z.string().trim().max(500, "Notes are at most 500 characters.").optional(),
   })
-  .refine((v) => v.partId !== undefined || v.number !== undefined, { message: "Give a part id or a factory number.", path: ["number"] });
+  .refine((v) => [v.partId, v.number, v.standard].filter((x) => x !== undefined).length === 1, {
+    message: "Give one of: a part id, a factory number, or a standard part from a calculator.",
+    path: ["number"],
+  });
 
 export const linePatch = z.object({
   quantity: quantity.optional(),
