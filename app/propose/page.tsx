@@ -5,12 +5,17 @@ import { Cautions } from "@/components/safety/cautions";
 import { OriginalPart, Maker } from "@/db";
 import { requirePagePermission } from "@/lib/auth/session";
 import { loadFormChoices } from "@/lib/community/form-choices";
+import { readProposalPrefill } from "@/lib/community/prefill";
 
 export const metadata: Metadata = { title: "Propose a cross" };
 
-export default async function ProposePage({ searchParams }: { searchParams: Promise<{ part?: string }> }) {
-  const { part: partParam } = await searchParams;
-  await requirePagePermission("proposals:create", `/propose${partParam ? `?part=${encodeURIComponent(partParam)}` : ""}`);
+export default async function ProposePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const params = await searchParams;
+  const partParam = typeof params.part === "string" ? params.part : undefined;
+  // Signing in comes back to the same form, filled in as the calculator left it.
+  const back = new URLSearchParams(Object.entries(params).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])));
+  await requirePagePermission("proposals:create", `/propose${back.size > 0 ? `?${back}` : ""}`);
+  const prefill = readProposalPrefill(params);
   const choices = await loadFormChoices();
   const partId = Number(partParam);
   const part = Number.isInteger(partId) && partId > 0 && partId < 2 ** 31 ? await OriginalPart.findByPk(partId) : null;
@@ -33,13 +38,17 @@ export default async function ProposePage({ searchParams }: { searchParams: Prom
           choices={choices}
           defaults={{
             original: part ? { mode: "existing", partId: part.id } : { mode: "existing", partId: null },
-            standard: { mode: "existing", standardPartId: null },
+            standard: prefill?.standard ?? { mode: "existing", standardPartId: null },
             fit: undefined as never,
-            measurements: [],
+            measurements: prefill?.measurements ?? [],
             notes: "",
             photoIds: [],
           }}
-          pickedPart={part && maker ? { id: part.id, number: part.number, maker: maker.name, description: part.description } : null}
+          pickedPart={
+            part && maker
+              ? { id: part.id, number: part.number, maker: maker.name, description: part.description, dims: { innerMm: part.innerMm, outerMm: part.outerMm, widthMm: part.widthMm, lengthMm: part.lengthMm } }
+              : null
+          }
           pickedStandard={null}
           photos={[]}
         />

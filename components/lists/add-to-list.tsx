@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useId, useState } from "react";
 import useSWR from "swr";
 import { postJson } from "@/lib/http/post-json";
+import type { MeasuredKind } from "@/lib/lists/standard-item";
 
 interface ListSummary {
   id: number;
@@ -16,8 +17,11 @@ const fetchLists = async (url: string): Promise<ListSummary[]> => {
   return ((await response.json()) as { lists: ListSummary[] }).lists;
 };
 
-/** Puts this part on one of the member's job lists (or a new one), under its latest number. */
-export function AddToList({ partId, number, compact = false }: { partId: number; number: string; compact?: boolean }) {
+/** What goes on the list: a catalogue part (under its latest number), or a standard part a calculator worked out. */
+export type ListItem = { partId: number } | { standard: { kind: MeasuredKind; designation: string; note?: string } };
+
+/** Puts this part on one of the member's job lists (or a new one). */
+export function AddToList({ item, number, compact = false }: { item: ListItem; number: string; compact?: boolean }) {
   const [open, setOpen] = useState(false);
   const { data: lists, mutate } = useSWR(open ? "/api/lists" : null, fetchLists);
   const [choice, setChoice] = useState("");
@@ -55,7 +59,7 @@ export function AddToList({ partId, number, compact = false }: { partId: number;
           listId = created.data.id;
           await mutate();
         }
-        const added = await postJson<{ superseded: boolean; merged: boolean }>(`/api/lists/${listId}/lines`, { partId, quantity: Number(quantity) || 1 });
+        const added = await postJson<{ superseded: boolean; merged: boolean }>(`/api/lists/${listId}/lines`, { ...item, quantity: Number(quantity) || 1 });
         if (!added.ok) return setError(added.error.message);
         setDone({ id: listId, text: added.data.merged ? `${number} was already on the list; quantity raised.` : added.data.superseded ? `Added under ${number}'s latest number.` : `${number} added.` });
       }}

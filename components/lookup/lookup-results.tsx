@@ -47,7 +47,7 @@ export function LookupResults({ query, signedIn = false }: { query: string; sign
             </Link>
             {signedIn && (
               <div className="mt-1 pl-4">
-                <AddToList partId={r.id} number={r.number} compact />
+                <AddToList item={{ partId: r.id }} number={r.number} compact />
               </div>
             )}
           </li>

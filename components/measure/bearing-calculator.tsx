@@ -4,6 +4,8 @@ import { useState } from "react";
 import { BearingDrawing, type BearingDimension } from "@/components/measure/bearing-drawing";
 import { CandidatesTable } from "@/components/measure/candidates-table";
 import { CatalogueMatches } from "@/components/measure/catalogue-matches";
+import { OrderCard } from "@/components/measure/order-card";
+import { ResultActions } from "@/components/measure/result-actions";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
@@ -12,7 +14,8 @@ import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
-import type { LengthUnit } from "@/lib/standards/units";
+import { useLengthUnit } from "@/lib/hooks/use-length-unit";
+import { convertTypedSizes, measuredValues, type LengthUnit } from "@/lib/standards/units";
 
 const inches = (mm: number) => (mm / 25.4).toFixed(4).replace(/0+$/, "").replace(/\.$/, "");
 
@@ -48,14 +51,19 @@ function DecodeCard({ decoded }: { decoded: DecodedBearing }) {
           ))}
         </ul>
       )}
+      <ResultActions kind="bearing" designation={decoded.designation} measurements={[]} />
     </div>
   );
 }
 
 export function BearingCalculator() {
   const [designation, setDesignation] = useState("");
-  const [unit, setUnit] = useState<LengthUnit>("mm");
+  const [unit, setUnit] = useLengthUnit();
   const [sizes, setSizes] = useState({ bore: "", od: "", width: "", tolerance: "" });
+  const changeUnit = (next: LengthUnit) => {
+    setSizes((s) => convertTypedSizes(s, ["bore", "od", "width", "tolerance"], unit, next));
+    setUnit(next);
+  };
   const [active, setActive] = useState<BearingDimension>(null);
   const settledDesignation = useDebounced(designation);
   const settled = useDebounced(sizes);
@@ -91,7 +99,7 @@ export function BearingCalculator() {
         </h2>
         <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
           <div className="space-y-4">
-            <UnitSwitch unit={unit} onChange={setUnit} />
+            <UnitSwitch unit={unit} onChange={changeUnit} />
             <div className="grid gap-4 sm:grid-cols-2">
               <SizeField id="bore" label="Bore (d)" hint="Inside diameter of the inner ring." value={sizes.bore} onChange={set("bore")} onFocus={() => setActive("bore")} error={errorFor(match.error, "bore")} unit={unit} />
               <SizeField id="od" label="Outside diameter (D)" value={sizes.od} onChange={set("od")} onFocus={() => setActive("od")} error={errorFor(match.error, "od")} unit={unit} />
@@ -110,9 +118,28 @@ export function BearingCalculator() {
           </Notice>
         )}
         <div aria-live="polite" aria-busy={match.isLoading} className="space-y-3">
+          {match.data && match.data.candidates[0] && (
+            <OrderCard
+              title={match.data.candidates[0].score >= 0.7 ? "The bearing to ask for" : "The nearest standard bearing (a poor match: measure again)"}
+              label={match.data.candidates[0].designation}
+              notes={[match.data.candidates[0].explanation, ...match.data.candidates[0].warnings]}
+              source="ISO 15:2017 boundary dimensions (deep groove ball bearings); ABMA inch series for R sizes"
+            >
+              <ResultActions
+                kind="bearing"
+                designation={match.data.candidates[0].designation}
+                measurements={measuredValues([
+                  ["inner", settled.bore],
+                  ["outer", settled.od],
+                  ["width", settled.width],
+                ], unit)}
+              />
+            </OrderCard>
+          )}
           <WarningList warnings={match.data?.warnings} />
           {match.data && (
             <CandidatesTable
+              title="All the standard bearings near these sizes"
               caption="Standard bearings that match the measured sizes"
               unit={unit}
               emptyText="No standard deep groove ball bearing is near these sizes."

@@ -4,6 +4,7 @@ import { useState } from "react";
 import { BeltDrawing, type BeltDimension } from "@/components/measure/belt-drawing";
 import { CandidatesTable } from "@/components/measure/candidates-table";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
+import { ResultActions } from "@/components/measure/result-actions";
 import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
@@ -12,11 +13,12 @@ import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-ca
 import { BELT_SECTIONS } from "@/lib/standards/belt-sections";
 import type { DecodedBelt, SectionCandidate } from "@/lib/standards/belts";
 import type { DriveResult } from "@/lib/standards/drive";
-import { inchLabel, type LengthUnit } from "@/lib/standards/units";
+import { useLengthUnit } from "@/lib/hooks/use-length-unit";
+import { convertTypedSizes, inchLabel, measuredValues, type LengthUnit } from "@/lib/standards/units";
 
 interface DriveAnswer extends DriveResult {
   unit: LengthUnit;
-  standardLengths?: Array<{ designation: string; length: number }>;
+  standardLengths?: Array<{ designation: string; length: number; nearest: boolean }>;
   adjustableRange?: { shortest: number; longest: number };
 }
 
@@ -40,12 +42,17 @@ function Figure({ label, value, unit }: { label: string; value: number; unit: st
 }
 
 export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] }) {
-  const [unit, setUnit] = useState<LengthUnit>("in");
+  const [unit, setUnit] = useLengthUnit();
   const [designation, setDesignation] = useState("");
   const [section, setSection] = useState({ top: "", height: "" });
   const [drive, setDrive] = useState({ large: "", small: "", center: "", length: "", smallMax: "", section: "" });
   const [know, setKnow] = useState<"center" | "length">("center");
   const [active, setActive] = useState<BeltDimension>(null);
+  const changeUnit = (next: LengthUnit) => {
+    setSection((s) => convertTypedSizes(s, ["top", "height"], unit, next));
+    setDrive((d) => convertTypedSizes(d, ["large", "small", "center", "length", "smallMax"], unit, next));
+    setUnit(next);
+  };
   const settledDesignation = useDebounced(designation);
   const settledSection = useDebounced(section);
   const settledDrive = useDebounced(drive);
@@ -70,7 +77,7 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
         <h2 id="belt-number-heading" className="text-2xl">
           Read the number on the belt
         </h2>
-        <SizeField id="belt-designation" label="Belt number" hint="For example B60, A42, 4L380, 5V800 or SPA1250." value={designation} onChange={setDesignation} error={errorFor(decoded.error, "designation")} placeholder="B60" />
+        <SizeField id="belt-designation" label="Belt number" hint="For example B60, A42, 4L380, 5V800, SPA1250, or a metric B 1600 Li." value={designation} onChange={setDesignation} error={errorFor(decoded.error, "designation")} placeholder="B60" />
         {decoded.data && !decoded.error && (
           <div className="space-y-3 rounded-lg border-2 border-ink/80 bg-ground-raised p-4" data-testid="belt-decoded">
             <p>
@@ -91,13 +98,14 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
                 </li>
               ))}
             </ul>
+            <ResultActions kind="v_belt" designation={decoded.data.designation} measurements={[]} />
           </div>
         )}
       </section>
 
       <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
         <div className="space-y-10">
-          <UnitSwitch unit={unit} onChange={setUnit} />
+          <UnitSwitch unit={unit} onChange={changeUnit} />
           <section aria-labelledby="section-heading" className="space-y-3">
             <h2 id="section-heading" className="text-2xl">
               Which section is it?
@@ -175,15 +183,22 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
                   <Figure label="Speed ratio" value={solved.data.ratio} unit=": 1" />
                 </dl>
                 <p className="text-sm text-ink-soft">Deflection: press the middle of the span; 1/64 in per inch of span is the usual shop rule, not a maker&apos;s figure.</p>
-                {solved.data.standardLengths && (
-                  <p>
-                    Nearest standard belts:{" "}
-                    {solved.data.standardLengths.map((l) => (
-                      <span key={l.designation} className="num mr-3 font-bold">
-                        {l.designation}
-                      </span>
-                    ))}
-                  </p>
+                {solved.data.standardLengths && solved.data.standardLengths.length > 0 && (
+                  <div className="space-y-2 rounded-md border border-rule bg-ground-raised p-3">
+                    <p>
+                      Nearest standard belts:{" "}
+                      {solved.data.standardLengths.map((l) => (
+                        <span key={l.designation} className="num mr-3 font-bold">
+                          {l.designation}
+                        </span>
+                      ))}
+                    </p>
+                    <ResultActions
+                      kind="v_belt"
+                      designation={(solved.data.standardLengths.find((l) => l.nearest) ?? solved.data.standardLengths[0]).designation}
+                      measurements={measuredValues([["length", settledDrive.length]], unit)}
+                    />
+                  </div>
                 )}
                 {solved.data.adjustableRange && (
                   <p>
@@ -196,8 +211,9 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
             )}
           </section>
         </div>
-        <div className="space-y-4">
-          <figure className="rounded-lg border border-rule bg-ground-raised p-3 md:sticky md:top-4">
+        {/* The drawing and the measuring notes move together, so the drawing never covers the notes. */}
+        <div className="space-y-4 self-start md:sticky md:top-4">
+          <figure className="rounded-lg border border-rule bg-ground-raised p-3">
             <BeltDrawing active={active} />
             <figcaption className="text-sm text-ink-soft">Pitch diameters are measured where the belt&apos;s pitch line runs, a little inside the pulley rim.</figcaption>
           </figure>

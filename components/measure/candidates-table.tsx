@@ -21,9 +21,11 @@ function signed(value: number): string {
   return `${value > 0 ? "+" : "−"}${Math.abs(value)}`;
 }
 
-export function CandidatesTable({ caption, rows, unit, emptyText }: { caption: string; rows: CandidateRow[]; unit: string; emptyText: string }) {
+export function CandidatesTable({ title, caption, rows, unit, emptyText }: { title?: string; caption: string; rows: CandidateRow[]; unit: string; emptyText: string }) {
   if (rows.length === 0) return <p className="rounded-md border border-rule bg-ground-raised p-4 text-ink-soft">{emptyText}</p>;
   return (
+    <div className="space-y-2">
+    {title && <h2 className="text-lg">{title}</h2>}
     <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">{caption}</caption>
@@ -31,7 +33,7 @@ export function CandidatesTable({ caption, rows, unit, emptyText }: { caption: s
           <tr>
             <th scope="col" className="p-3">Standard part</th>
             <th scope="col" className="p-3">Match</th>
-            <th scope="col" className="p-3">Sizes ({unit}): nominal, and your reading against it</th>
+            <th scope="col" className="p-3">Sizes: nominal, and your reading against it ({unit})</th>
           </tr>
         </thead>
         <tbody>
@@ -54,7 +56,7 @@ export function CandidatesTable({ caption, rows, unit, emptyText }: { caption: s
                   <ul className="space-y-0.5">
                     {row.deviations.map((d) => (
                       <li key={d.name} className="num text-[0.95rem]">
-                        {d.label} {d.nominal}{" "}
+                        {d.label} {d.nominalLabel}{" "}
                         <span className={d.withinTolerance ? "text-ink-soft" : "font-bold text-caution"}>({signed(d.deviation)})</span>
                       </li>
                     ))}
@@ -74,6 +76,7 @@ export function CandidatesTable({ caption, rows, unit, emptyText }: { caption: s
           })}
         </tbody>
       </table>
+    </div>
     </div>
   );
 }

@@ -3,6 +3,8 @@
 import { useState } from "react";
 import { CandidatesTable } from "@/components/measure/candidates-table";
 import { CatalogueMatches } from "@/components/measure/catalogue-matches";
+import { OrderCard } from "@/components/measure/order-card";
+import { ResultActions } from "@/components/measure/result-actions";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SealDrawing, type SealDimension } from "@/components/measure/seal-drawing";
 import { SizeField } from "@/components/measure/size-field";
@@ -10,11 +12,13 @@ import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
 import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
-import type { PressFit, SealCandidate, ShaftCheck } from "@/lib/standards/seals";
+import { useLengthUnit } from "@/lib/hooks/use-length-unit";
+import type { PressFit, SealCandidate, SealOrder, ShaftCheck } from "@/lib/standards/seals";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
-import type { LengthUnit } from "@/lib/standards/units";
+import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
 
 interface SealMatch {
+  order: SealOrder;
   candidates: SealCandidate[];
   warnings: string[];
   remedies: string[];
@@ -25,8 +29,12 @@ interface SealMatch {
 const selectClass = "min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg";
 
 export function SealCalculator() {
-  const [unit, setUnit] = useState<LengthUnit>("in");
+  const [unit, setUnit] = useLengthUnit();
   const [sizes, setSizes] = useState({ shaft: "", bore: "", width: "", sealOd: "" });
+  const changeUnit = (next: LengthUnit) => {
+    setSizes((s) => convertTypedSizes(s, ["shaft", "bore", "width", "sealOd"], unit, next));
+    setUnit(next);
+  };
   const [grooved, setGrooved] = useState(false);
   const [spring, setSpring] = useState("1");
   const [dustLip, setDustLip] = useState(false);
@@ -45,7 +53,7 @@ export function SealCalculator() {
     <div className="space-y-8">
       <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
         <div className="space-y-4">
-          <UnitSwitch unit={unit} onChange={setUnit} />
+          <UnitSwitch unit={unit} onChange={changeUnit} />
           <div className="grid gap-4 sm:grid-cols-3">
             <SizeField id="shaft" label="Shaft" hint="Measure the shaft, not the old lip." value={sizes.shaft} onChange={set("shaft")} onFocus={() => setActive("shaft")} error={errorFor(match.error, "shaft")} unit={unit} />
             <SizeField id="bore" label="Housing bore" value={sizes.bore} onChange={set("bore")} onFocus={() => setActive("bore")} error={errorFor(match.error, "bore") ?? errorFor(fit.error, "bore")} unit={unit} />
@@ -81,7 +89,7 @@ export function SealCalculator() {
             </div>
           </fieldset>
         </div>
-        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
+        <figure className="order-first rounded-lg border border-rule bg-ground-raised p-3 md:order-none">
           <SealDrawing active={active} />
           <figcaption className="text-sm text-ink-soft">The spring side of the lip faces the oil. Measure the shaft where the new lip will run.</figcaption>
         </figure>
@@ -93,6 +101,35 @@ export function SealCalculator() {
         </Notice>
       )}
       <section aria-live="polite" aria-busy={match.isLoading} className="space-y-3" aria-label="Matching seals">
+        {match.data && (
+          <OrderCard
+            title="The seal to ask for"
+            label={match.data.order.label}
+            details={
+              <dl className="grid gap-x-4 gap-y-1 sm:grid-cols-[14rem_1fr]">
+                <dt className="font-bold">New seal&apos;s outside diameter</dt>
+                <dd className="num">
+                  {showLength(match.data.order.sealOd.min, match.data.order.unit)} to {showLength(match.data.order.sealOd.max, match.data.order.unit)}
+                </dd>
+                <dt className="font-bold">Ask for</dt>
+                <dd>{match.data.order.askFor}</dd>
+              </dl>
+            }
+            notes={match.data.order.notes}
+            source={match.data.order.source}
+          >
+            <ResultActions
+              kind="lip_seal"
+              designation={match.data.order.label}
+              note={`seal OD ${showLength(match.data.order.sealOd.min, match.data.order.unit)} to ${showLength(match.data.order.sealOd.max, match.data.order.unit)}; ${match.data.order.askFor}`}
+              measurements={measuredValues([
+                ["inner", settled.shaft],
+                ["outer", settled.bore],
+                ["width", settled.width],
+              ], unit)}
+            />
+          </OrderCard>
+        )}
         <WarningList warnings={match.data?.warnings} />
         {match.data && match.data.remedies.length > 0 && (
           <div className="rounded-lg border border-rule-strong bg-ground-raised p-4">
@@ -107,9 +144,10 @@ export function SealCalculator() {
         {match.data && <Notice>{match.data.shaft.message}</Notice>}
         {match.data && (
           <CandidatesTable
-            caption="Standard lip seals that match the measured sizes"
+            title="Standard sizes nearby"
+            caption="Tabulated lip seal sizes near the measured ones"
             unit={unit}
-            emptyText="No standard lip seal is near these sizes."
+            emptyText="No tabulated size is near; order by the sizes above."
             rows={match.data.candidates.map((c) => ({
               key: c.size,
               name: c.size,

@@ -2,24 +2,57 @@ import { ArrowDefs, DimensionLine } from "@/components/measure/dimension-line";
 
 export type SealDimension = "shaft" | "bore" | "width" | "sealOd" | null;
 
-/** A lip seal in its housing on the shaft, cut through the axis (upper half): what to measure, and where. */
-export function SealDrawing({ active }: { active: SealDimension }) {
+function Label({ x, y, text, active, anchor = "start" }: { x: number; y: number; text: string; active: boolean; anchor?: "start" | "end" | "middle" }) {
   return (
-    <svg viewBox="0 0 380 270" role="img" aria-labelledby="seal-drawing-title" className="h-auto w-full max-w-sm">
-      <title id="seal-drawing-title">Cross-section of a lip seal: shaft diameter, housing bore and width</title>
+    <text
+      x={x}
+      y={y}
+      textAnchor={anchor}
+      fontSize={active ? 17 : 15}
+      fontWeight={active ? 700 : 400}
+      fill={active ? "#8a5d12" : "#2f333a"}
+      fontFamily="JetBrains Mono, monospace"
+    >
+      {text}
+    </text>
+  );
+}
+
+/**
+ * A lip seal in its housing on the shaft, cut through the axis: the shaft diameter, the housing bore and the seal's
+ * width, each named where it is measured. Every label sits inside the picture.
+ */
+export function SealDrawing({ active }: { active: SealDimension }) {
+  const ink = "#23262b";
+  return (
+    <svg viewBox="0 0 360 320" role="img" aria-labelledby="seal-drawing-title" className="h-auto w-full max-w-sm">
+      <title id="seal-drawing-title">Cross-section of a lip seal in its housing on the shaft: shaft diameter, housing bore and seal width</title>
       <ArrowDefs />
-      {/* housing */}
-      <path d="M 60 30 H 260 V 70 H 210 V 80 H 60 Z" fill="url(#hatch)" stroke="#23262b" strokeWidth={2} />
-      {/* seal: case and lip with its spring */}
-      <path d="M 130 80 H 200 V 90 H 140 V 112 L 176 136 L 170 142 L 132 120 V 80 Z" fill="#d9d1c3" stroke="#23262b" strokeWidth={2} />
-      <circle cx={158} cy={122} r={5} fill="none" stroke="#23262b" strokeWidth={2} />
-      {/* shaft */}
-      <rect x={40} y={142} width={250} height={40} fill="#ece6da" stroke="#23262b" strokeWidth={2} />
-      <line x1={30} y1={240} x2={300} y2={240} stroke="#6b7079" strokeDasharray="14 4 3 4" strokeWidth={1.2} />
-      <DimensionLine x1={290} y1={142} x2={290} y2={240} label="shaft Ø ÷ 2" active={active === "shaft"} />
-      <DimensionLine x1={40} y1={80} x2={40} y2={240} label="bore Ø ÷ 2" active={active === "bore" || active === "sealOd"} />
-      <DimensionLine x1={130} y1={16} x2={200} y2={16} label="width" active={active === "width"} />
-      <text x={214} y={112} fontSize={13} fill="#4a4f57">
+      {/* housing, above and below the shaft */}
+      <path d="M 80 40 H 280 V 80 H 80 Z" fill="url(#hatch)" stroke={ink} strokeWidth={2} />
+      <path d="M 80 260 H 280 V 300 H 80 Z" fill="url(#hatch)" stroke={ink} strokeWidth={2} />
+      {/* seal: case against the bore, lip on the shaft with its spring */}
+      <path d="M 150 80 H 210 V 92 H 160 V 108 L 192 126 L 186 130 L 152 112 V 80 Z" fill="#d9d1c3" stroke={ink} strokeWidth={2} />
+      <circle cx={174} cy={112} r={4.5} fill="none" stroke={ink} strokeWidth={1.8} />
+      <path d="M 150 260 H 210 V 248 H 160 V 232 L 192 214 L 186 210 L 152 228 V 260 Z" fill="#d9d1c3" stroke={ink} strokeWidth={2} />
+      <circle cx={174} cy={228} r={4.5} fill="none" stroke={ink} strokeWidth={1.8} />
+      {/* shaft and axis */}
+      <rect x={60} y={130} width={270} height={80} fill="#ece6da" stroke={ink} strokeWidth={2} />
+      <line x1={50} y1={170} x2={340} y2={170} stroke="#6b7079" strokeDasharray="14 4 3 4" strokeWidth={1.2} />
+      {/* extension lines */}
+      <g stroke="#6b7079" strokeWidth={0.9} strokeDasharray="3 3">
+        <line x1={150} y1={80} x2={150} y2={18} />
+        <line x1={210} y1={80} x2={210} y2={18} />
+        <line x1={80} y1={80} x2={22} y2={80} />
+        <line x1={80} y1={260} x2={22} y2={260} />
+      </g>
+      <DimensionLine x1={150} y1={24} x2={210} y2={24} label="" active={active === "width"} />
+      <Label x={218} y={30} text="width" active={active === "width"} />
+      <DimensionLine x1={30} y1={80} x2={30} y2={260} label="" active={active === "bore" || active === "sealOd"} />
+      <Label x={38} y={112} text="bore Ø" active={active === "bore" || active === "sealOd"} />
+      <DimensionLine x1={300} y1={130} x2={300} y2={210} label="" active={active === "shaft"} />
+      <Label x={292} y={162} text="shaft Ø" active={active === "shaft"} anchor="end" />
+      <text x={222} y={116} fontSize={13} fill="#4a4f57">
         oil side
       </text>
     </svg>

@@ -388,7 +388,7 @@ const mm = (v: number | null) => (v === null ? "" : String(v));
 export function listCsv(view: ListView): string {
   const fields = ["Factory number", "Maker", "Description", "Kind", "Standard designation", "Standard part", "Bore mm", "Outside mm", "Width mm", "Length mm", "Fit", "Quantity", "Notes"];
   const data = view.lines.map((l) => [
-    l.number,
+    l.partId === null ? "" : l.number,
     l.maker,
     l.description,
     l.categoryName,

@@ -145,7 +145,7 @@ function decodeMetricBelt(input: string, sectionName: string, length: number, ba
 }
 
 /** Nearby standard lengths in the section's designation basis, nearest first. */
-export function nearestStandardLengths(section: BeltSection, designatedLength: number, count = 3): Array<{ designation: string; length: number }> {
+export function nearestStandardLengths(section: BeltSection, designatedLength: number, count = 3): Array<{ designation: string; length: number; nearest: boolean }> {
   let lengths: number[];
   if (section.family === "narrow") lengths = [10, 100].flatMap((k) => R40.map((n) => (n * k) / 100)); // 25.0 … 950 in, tenths below
   else if (section.family === "iso-narrow") lengths = [1, 10].flatMap((k) => R40.map((n) => n * k)); // 100 … 9500 mm
@@ -154,12 +154,13 @@ export function nearestStandardLengths(section: BeltSection, designatedLength: n
     const centre = Math.round(designatedLength);
     lengths = Array.from({ length: 9 }, (_, i) => centre - 4 + i).filter((n) => n > 10);
   }
-  return lengths
+  const nearest = lengths
     .map((length) => ({ length, distance: Math.abs(length - designatedLength) }))
     .sort((a, b) => a.distance - b.distance)
-    .slice(0, count)
-    .sort((a, b) => a.length - b.length)
-    .map(({ length }) => ({ designation: `${section.section}${round(length * section.designationScale, 1)}`, length }));
+    .slice(0, count);
+  return nearest
+    .map(({ length }) => ({ designation: `${section.section}${round(length * section.designationScale, 1)}`, length, nearest: length === nearest[0]?.length }))
+    .sort((a, b) => a.length - b.length);
 }
 
 export interface SectionCandidate {

@@ -1,5 +1,5 @@
 import { StandardsInputError } from "@/lib/standards/errors";
-import { round } from "@/lib/standards/units";
+import { round, tradeRound, type LengthUnit } from "@/lib/standards/units";
 
 /**
  * Open-belt drive geometry on pitch diameters. The exact relations of two circles and their outer tangents:
@@ -91,4 +91,17 @@ export function adjustablePulleyRange(input: { fixed: number; adjustableMin: num
   }
   const lengthAt = (d: number) => beltPitchLength(Math.max(input.fixed, d), Math.min(input.fixed, d), input.center);
   return { shortest: round(lengthAt(input.adjustableMin), 3), longest: round(lengthAt(input.adjustableMax), 3) };
+}
+
+/** A drive's answer at the trade's precision for the unit it was worked in: lengths to 0.001 in or 0.01 mm, angles whole. */
+export function atTradePrecision(drive: DriveResult, unit: LengthUnit): DriveResult {
+  return {
+    ...drive,
+    pitchLength: tradeRound(drive.pitchLength, unit),
+    center: tradeRound(drive.center, unit),
+    span: tradeRound(drive.span, unit),
+    deflection: tradeRound(drive.deflection, unit),
+    wrapAngleSmallDeg: round(drive.wrapAngleSmallDeg, 0),
+    ratio: round(drive.ratio, 2),
+  };
 }

@@ -147,3 +147,15 @@ export function convertTypedSizes<T extends Record<string, string>>(sizes: T, na
   for (const name of names) next[name] = convertTyped(sizes[name], from, to) as T[keyof T];
   return next;
 }
+
+/** Typed sizes as measured values (value in the unit it was typed in), leaving out what is empty or unreadable. */
+export function measuredValues<D extends string>(typed: Array<[D, string]>, defaultUnit: LengthUnit): Array<{ dimension: D; value: number; unit: LengthUnit }> {
+  return typed.flatMap(([dimension, text]) => {
+    try {
+      const parsed = parseLength(text, defaultUnit);
+      return [{ dimension, value: parsed.value, unit: parsed.unit }];
+    } catch {
+      return [];
+    }
+  });
+}

@@ -50,7 +50,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
         <p className="text-xl">{part.description}</p>
         {user && (
           <div className="no-print">
-            <AddToList partId={part.id} number={part.number} />
+            <AddToList item={{ partId: part.id }} number={part.number} />
           </div>
         )}
         {part.chain.latest.id !== part.id && (

@@ -1,8 +1,8 @@
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { findSection, standardLengthsForPitch } from "@/lib/standards/belts";
-import { adjustablePulleyRange, solveDrive } from "@/lib/standards/drive";
-import { fromMm, toMm } from "@/lib/standards/units";
+import { adjustablePulleyRange, atTradePrecision, solveDrive } from "@/lib/standards/drive";
+import { fromMm, toMm, tradeRound } from "@/lib/standards/units";
 import { driveQuery, forField, readOptionalSize, readSize } from "@/lib/validation/standards";
 import { parseWith } from "@/lib/validation/parse";
 
@@ -18,12 +18,11 @@ export const GET = handle(async (request) => {
   const length = inUnit(readOptionalSize("length", q.length, q.unit));
   const field = center !== undefined ? "center" : "length";
   const drive = forField(field, () => solveDrive({ large, small, center, length }));
-  const body: Record<string, unknown> = { unit: q.unit, ...drive };
+  const body: Record<string, unknown> = { unit: q.unit, ...atTradePrecision(drive, q.unit) };
   const smallMax = inUnit(readOptionalSize("smallMax", q.smallMax, q.unit));
   if (smallMax !== undefined) {
-    body.adjustableRange = forField("smallMax", () =>
-      adjustablePulleyRange({ fixed: large, adjustableMin: small, adjustableMax: smallMax, center: drive.center }),
-    );
+    const range = forField("smallMax", () => adjustablePulleyRange({ fixed: large, adjustableMin: small, adjustableMax: smallMax, center: drive.center }));
+    body.adjustableRange = { shortest: tradeRound(range.shortest, q.unit), longest: tradeRound(range.longest, q.unit) };
   }
   if (q.section) {
     const section = forField("section", () => findSection(q.section as string));

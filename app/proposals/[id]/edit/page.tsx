@@ -56,8 +56,10 @@ export default async function EditProposalPage({ params }: { params: Promise<{ i
           notes: detail.notes ?? "",
           photoIds: detail.photoList.map((ph) => ph.id),
         }}
-        pickedPart={p.isNew ? null : { id: p.id!, number: p.number, maker: p.maker, description: p.description }}
-        pickedStandard={s.isNew ? null : { id: s.id!, designation: s.designation, sizes: standardSizes(s) }}
+        pickedPart={p.isNew ? null : { id: p.id!, number: p.number, maker: p.maker, description: p.description, dims: p.dims }}
+        pickedStandard={
+          s.isNew ? null : { id: s.id!, designation: s.designation, sizes: standardSizes(s), kind: s.kind, dims: { innerMm: s.innerMm, outerMm: s.outerMm, widthMm: s.widthMm, lengthMm: s.lengthMm } }
+        }
         photos={detail.photoList.map((ph) => ({ key: `stored-${ph.id}`, name: ph.fileName ?? `Photo ${ph.id}`, preview: ph.url, status: "done", photoId: ph.id }))}
       />
     </div>

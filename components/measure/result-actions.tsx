@@ -1,0 +1,21 @@
+"use client";
+
+import Link from "next/link";
+import { AddToList } from "@/components/lists/add-to-list";
+import { proposalHref, type ProposalPrefill } from "@/lib/community/prefill";
+import type { MeasuredKind } from "@/lib/lists/standard-item";
+
+/**
+ * From a calculator's answer to the job: put the standard part on a job list by its designation and sizes, or
+ * propose it as the cross for a factory part, with the form filled in.
+ */
+export function ResultActions({ kind, designation, note, measurements }: { kind: MeasuredKind; designation: string; note?: string; measurements: ProposalPrefill["measurements"] }) {
+  return (
+    <div className="flex flex-wrap items-start gap-x-6 gap-y-3 border-t border-rule pt-3" data-testid="result-actions">
+      <AddToList item={{ standard: { kind, designation, note } }} number={designation} />
+      <Link href={proposalHref({ kind, designation, measurements })} className="font-bold">
+        Propose as a cross for a part…
+      </Link>
+    </div>
+  );
+}

@@ -1,0 +1,70 @@
+import { z } from "zod";
+import { STANDARD_KINDS, type StandardKind } from "@/lib/catalogue/kinds";
+import { checkStandard } from "@/lib/community/checks";
+import { MEASURED_DIMENSIONS, type Measurement } from "@/lib/community/kinds";
+import type { SubmissionFormValues } from "@/lib/validation/submissions";
+
+/** What a calculator hands the proposal form: the standard part it worked out and what was measured. */
+export interface ProposalPrefill {
+  kind: StandardKind;
+  designation: string;
+  measurements: Measurement[];
+}
+
+const measurementText = z
+  .string()
+  .regex(/^(inner|outer|width|length|other):\d+(\.\d+)?:(mm|in)$/)
+  .transform((text) => {
+    const [dimension, value, unit] = text.split(":");
+    return { dimension: dimension as Measurement["dimension"], value: Number(value), unit: unit as "mm" | "in" };
+  });
+
+// Query parameters are read leniently: a link with something odd in it still opens the form, without that part.
+const prefillQuery = z.object({
+  kind: z.enum(STANDARD_KINDS).optional().catch(undefined),
+  designation: z.string().trim().min(2).max(80).optional().catch(undefined),
+  m: z.string().max(400).optional().catch(undefined),
+});
+
+/** The link from a calculator's result to the proposal form, filled in. */
+export function proposalHref(prefill: ProposalPrefill): string {
+  const query = new URLSearchParams({ kind: prefill.kind, designation: prefill.designation });
+  const m = prefill.measurements
+    .filter((x) => Number.isFinite(x.value) && x.value > 0)
+    .map((x) => `${x.dimension}:${x.value}:${x.unit}`)
+    .join(",");
+  if (m) query.set("m", m);
+  return `/propose?${query}`;
+}
+
+/**
+ * The proposal form's standard part and measurements from a calculator's link: the standard part entered by its
+ * designation, its sizes read by the standards engine, the measurements as typed. Null when the link carries none.
+ */
+export function readProposalPrefill(params: Record<string, string | string[] | undefined>): Pick<SubmissionFormValues, "standard" | "measurements"> | null {
+  const q = prefillQuery.parse({ kind: one(params.kind), designation: one(params.designation), m: one(params.m) });
+  if (!q.kind || !q.designation) return null;
+  const checked = checkStandard({ kind: q.kind, designation: q.designation });
+  const measurements = (q.m ?? "")
+    .split(",")
+    .map((text) => measurementText.safeParse(text))
+    .flatMap((r) => (r.success && MEASURED_DIMENSIONS.includes(r.data.dimension) ? [r.data] : []))
+    .slice(0, 12);
+  const size = (v: number | null) => (v === null ? null : Math.round(v * 1000) / 1000);
+  return {
+    standard: {
+      mode: "new",
+      kind: q.kind,
+      designation: checked.designation,
+      innerMm: size(checked.innerMm),
+      outerMm: size(checked.outerMm),
+      widthMm: size(checked.widthMm),
+      lengthMm: size(checked.lengthMm),
+    },
+    measurements,
+  };
+}
+
+function one(value: string | string[] | undefined): string | undefined {
+  return Array.isArray(value) ? value[0] : value;
+}
