@@ -139,3 +139,41 @@ describe("the demo job list", () => {
     expect(list.lines.every((l: { description: string }) => /pump|impeller/i.test(l.description))).toBe(true);
   });
 });
+
+describe("POST /api/lists/{id}/lines with a standard part from a calculator", () => {
+  it("adds the seal to order by its sizes, merges a repeat, and exports it without a factory number", async () => {
+    const id = await newList("Fan hub reseal");
+    const seal = { kind: "lip_seal", designation: "1-1/2 × 2.374 × 1/2 in", note: "seal OD 2.376 in to 2.380 in" };
+    const added = await send("post", `/api/lists/${id}/lines`, { standard: seal, quantity: 1 }, { cookie: owner });
+    expect(added.status).toBe(201);
+    const again = await send("post", `/api/lists/${id}/lines`, { standard: seal, quantity: 1 }, { cookie: owner });
+    expect(again.status).toBe(200);
+    expect(again.body.merged).toBe(true);
+
+    const { body } = await send("get", `/api/lists/${id}`, undefined, { cookie: owner });
+    expect(body.lines).toHaveLength(1);
+    expect(body.lines[0]).toMatchObject({ partId: null, quantity: 2, category: "lip_seal", description: "seal OD 2.376 in to 2.380 in", hasAssembly: false });
+    // 1-1/2 in = 38.1 mm and 2.374 in = 60.2996 mm (25.4 mm/in).
+    expect(body.lines[0].chosen.designation).toBe("1-1/2 × 2.374 × 1/2 in");
+    expect(body.lines[0].chosen.innerMm).toBeCloseTo(38.1, 3);
+    expect(body.lines[0].chosen.outerMm).toBeCloseTo(60.2996, 3);
+
+    const csv = await send("get", `/api/lists/${id}/export.csv`, undefined, { cookie: owner });
+    const rows = Papa.parse<string[]>(csv.text.trim()).data;
+    expect(rows[1][0]).toBe("");
+    expect(rows[1][4]).toBe("1-1/2 × 2.374 × 1/2 in");
+    expect(rows[1]).toContain("sized from measurements");
+  });
+
+  it("refuses a line that names no part, or two at once, with the field", async () => {
+    const id = await newList();
+    const none = await send("post", `/api/lists/${id}/lines`, { quantity: 1 }, { cookie: owner });
+    expect(none.status).toBe(400);
+    expect(none.body.field).toBe("number");
+    const both = await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B", standard: { kind: "bearing", designation: "6203" } }, { cookie: owner });
+    expect(both.status).toBe(400);
+    const badKind = await send("post", `/api/lists/${id}/lines`, { standard: { kind: "rocket", designation: "6203" } }, { cookie: owner });
+    expect(badKind.status).toBe(400);
+    expect(badKind.body.field).toBe("standard.kind");
+  });
+});

@@ -1,6 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Assembly, AuditEvent, Confirmation, Cross, Maker, Machine, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
+import { Assembly, AuditEvent, Confirmation, Cross, Maker, Machine, OriginalPart, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
 import { sendProposalDigest } from "@/lib/community/digest";
 import { sweepAbandonedPhotos } from "@/lib/community/photos";
 import { headObject } from "@/lib/storage/s3";
@@ -348,5 +348,32 @@ describe("a new part with its machine", () => {
     const part = await send("get", `/api/parts/${decided.body.cross.partId}`);
     expect(part.body.number).toBe(number);
     expect(part.body.whereUsed).toEqual([expect.objectContaining({ machineId: machine!.id })]);
+  });
+});
+
+describe("POST /api/submissions against the worn part's documented sizes", () => {
+  it("flags a 20 × 47 × 14 bearing proposed for a part documented as 15 × 35 × 11", async () => {
+    // DIN 625-1 via BOLTS: 6204 is 20 × 47 × 14 mm; 15 × 35 × 11 mm is the size of 6202. The part itself is test data.
+    const number = `TST-${randomUUID().slice(0, 8).toUpperCase()}`;
+    const part = await OriginalPart.create({
+      makerId, number, numberNormalized: number.replace(/-/g, ""), numberKey: number.replace(/-/g, ""), description: "Test water pump bearing",
+      category: "bearing", innerMm: 15, outerMm: 35, widthMm: 11, lengthMm: null, dimensionsNote: null,
+    });
+    const body = {
+      original: { mode: "existing", partId: part.id },
+      standard: { mode: "new", kind: "bearing", designation: "6204" },
+      fit: "direct",
+      measurements: [],
+      notes: "",
+    };
+    const response = await submit(member, body);
+    expect(response.status).toBe(201);
+    const flagged = response.body.checks.find((c: { field: string }) => c.field === "original.sizes");
+    expect(flagged).toMatchObject({ level: "warning" });
+    expect(flagged.message).toMatch(/15 × 35 × 11 mm/);
+
+    const review = await send("get", `/review/${response.body.submission.id}`, undefined, { cookie: moderator });
+    expect(review.status).toBe(200);
+    expect(review.text).toContain("Not the same size.");
   });
 });

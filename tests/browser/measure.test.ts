@@ -38,6 +38,30 @@ describe("measuring a part", () => {
     await page.getByText("Fit OK.").waitFor();
   });
 
+  it("orders the worn inch fan-hub seal and converts the sizes when the unit changes", async () => {
+    // Worked example of common practice (no published source): 1-1/2 in shaft worn to 1.497 in, 2.374 in bore,
+    // 1/2 in wide; the inch press-fit table (RMA OS-4) gives a new seal OD of 2.376 to 2.380 in.
+    const page = currentPage();
+    await page.goto(`${APP_URL}/measure/seal`);
+    await page.getByText("inch", { exact: true }).click();
+    await field("Shaft").fill("1.497");
+    await field("Housing bore").fill("2.374");
+    await field("Width").fill("0.5");
+    await page.getByTestId("order-label").getByText("1-1/2 × 2.374 × 1/2 in").waitFor();
+    await page.getByTestId("order").getByText("2.376 in to 2.380 in").waitFor();
+    expect(await page.getByTestId("order").textContent()).not.toMatch(/memory/i);
+
+    await page.getByText("mm", { exact: true }).click();
+    // 1.497 in = 38.0238 mm and 2.374 in = 60.2996 mm (25.4 mm/in), at 0.01 mm.
+    await page.waitForFunction(() => (document.querySelector("#shaft") as HTMLInputElement).value === "38.02");
+    expect(await field("Housing bore").inputValue()).toBe("60.3");
+    expect(await field("Width").inputValue()).toBe("12.7");
+
+    // The choice is remembered: another calculator opens in millimetres.
+    await page.goto(`${APP_URL}/measure/bearing`);
+    expect(await page.getByRole("radio", { name: "mm" }).isChecked()).toBe(true);
+  });
+
   it("reads a belt number, names the section and works out a drive", async () => {
     const page = currentPage();
     await page.goto(`${APP_URL}/measure/belt`);

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { checkStandard, measurementDeviations } from "@/lib/community/checks";
+import { checkAgainstPart, checkStandard, measurementDeviations, PART_SIZES_FIELD, readSealSize } from "@/lib/community/checks";
+import { proposalHref, readProposalPrefill } from "@/lib/community/prefill";
+import { toStandardItem } from "@/lib/lists/standard-item";
 
 describe("checking a proposed standard part with the standards engine", () => {
   it("reads a bearing designation and takes its sizes from the tables", () => {
@@ -62,5 +64,71 @@ describe("measured sizes beside the standard part's", () => {
       { dimension: "outer", label: "outer", measuredMm: 51.994, nominalMm: 52, deviationMm: -0.006 },
       { dimension: "inner", label: "inner", measuredMm: 24.98, nominalMm: 25, deviationMm: -0.02 },
     ]);
+  });
+});
+
+describe("a proposal against the worn part's own sizes", () => {
+  const part = { number: "XX-1", innerMm: 15, outerMm: 35, widthMm: 11, lengthMm: null };
+
+  it("flags a 20 × 47 × 14 bearing for a part documented as 15 × 35 × 11", () => {
+    // DIN 625-1 via BOLTS: 6204 is 20 × 47 × 14 mm and 6202 is 15 × 35 × 11 mm.
+    const check = checkAgainstPart(part, { kind: "bearing", designation: "6204", innerMm: 20, outerMm: 47, widthMm: 14, lengthMm: null });
+    expect(check).toMatchObject({ level: "warning", field: PART_SIZES_FIELD });
+    expect(check?.message).toMatch(/15 × 35 × 11 mm.*6204 is 20 × 47 × 14 mm.*bore or shaft 5 mm larger/);
+  });
+
+  it("passes the same size, and a part that has no documented sizes", () => {
+    expect(checkAgainstPart(part, { kind: "bearing", designation: "6202-2RS", innerMm: 15, outerMm: 35, widthMm: 11, lengthMm: null })).toBeNull();
+    expect(checkAgainstPart({ number: "XX-2", innerMm: null, outerMm: null, widthMm: null, lengthMm: null }, { kind: "bearing", designation: "6204", innerMm: 20, outerMm: 47, widthMm: 14, lengthMm: null })).toBeNull();
+  });
+
+  it("leaves an inch/metric near miss to its own warning", () => {
+    // 1-1/2 in = 38.1 mm against a 38 mm seal: 0.1 mm, flagged elsewhere as a near miss, not as another size.
+    expect(checkAgainstPart({ number: "XX-3", innerMm: 38.1, outerMm: 55, widthMm: 8, lengthMm: null }, { kind: "lip_seal", designation: "38 × 55 × 8", innerMm: 38, outerMm: 55, widthMm: 8, lengthMm: null })).toBeNull();
+  });
+});
+
+describe("reading a seal's designation", () => {
+  it("reads fractions and thousandths of an inch", () => {
+    // 1 in = 25.4 mm exactly.
+    const size = readSealSize("1-1/2 × 2.374 × 1/2 in");
+    expect(size?.inch).toBe(true);
+    expect(size?.innerMm).toBeCloseTo(38.1, 6);
+    expect(size?.outerMm).toBeCloseTo(60.2996, 6);
+    expect(size?.widthMm).toBeCloseTo(12.7, 6);
+  });
+
+  it("reads millimetres with or without the unit, and refuses what is not three sizes", () => {
+    expect(readSealSize("35x52x7 mm")).toMatchObject({ innerMm: 35, outerMm: 52, widthMm: 7, inch: false });
+    expect(readSealSize("35 × 52 × 7")).toMatchObject({ inch: false });
+    expect(readSealSize("35 × 52")).toBeNull();
+    expect(readSealSize("a × b × c")).toBeNull();
+  });
+
+  it("does not call an inch seal ordered by its sizes unbuyable", () => {
+    const checked = checkStandard({ kind: "lip_seal", designation: "1-1/2 × 2.374 × 1/2 in" });
+    expect(checked.checks.every((c) => c.level === "ok")).toBe(true);
+  });
+});
+
+describe("from a calculator to the proposal form", () => {
+  it("carries the standard part and the measurements through the link", () => {
+    const href = proposalHref({ kind: "lip_seal", designation: "1-1/2 × 2.374 × 1/2 in", measurements: [{ dimension: "inner", value: 1.497, unit: "in" }] });
+    const params = Object.fromEntries(new URL(href, "http://x").searchParams);
+    const prefill = readProposalPrefill(params);
+    expect(prefill?.standard).toMatchObject({ mode: "new", kind: "lip_seal", designation: "1-1/2 × 2.374 × 1/2 in", innerMm: 38.1, outerMm: 60.3, widthMm: 12.7 });
+    expect(prefill?.measurements).toEqual([{ dimension: "inner", value: 1.497, unit: "in" }]);
+  });
+
+  it("ignores what it cannot read instead of failing", () => {
+    expect(readProposalPrefill({ kind: "rocket", designation: "6205" })).toBeNull();
+    expect(readProposalPrefill({ kind: "bearing", designation: "6205", m: "inner:abc:in,outer:52:mm" })?.measurements).toEqual([{ dimension: "outer", value: 52, unit: "mm" }]);
+  });
+});
+
+describe("a measured standard part on a job list", () => {
+  it("takes its sizes from the engine's reading of the designation", () => {
+    // DIN 625-1 via BOLTS: 6205 is 25 × 52 × 15 mm.
+    expect(toStandardItem({ kind: "bearing", designation: "6205 2rs" })).toMatchObject({ designation: "6205-2RS", innerMm: 25, outerMm: 52, widthMm: 15 });
   });
 });

@@ -2,7 +2,7 @@ import fc from "fast-check";
 // @ts-expect-error convert-units 2 ships no types; it is used here only as an independent reference.
 import convert from "convert-units";
 import { describe, expect, it } from "vitest";
-import { fromMm, inchLabel, parseLength, round, showDeviation, showLength, toMm, UnitParseError } from "@/lib/standards/units";
+import { convertTyped, convertTypedSizes, fromMm, inchLabel, measuredValues, parseLength, round, showDeviation, showLength, toMm, UnitParseError } from "@/lib/standards/units";
 
 describe("inch and millimetre", () => {
   it("converts exactly at 25.4 mm to the inch", () => {
@@ -83,5 +83,30 @@ describe("numbers at the trade's precision", () => {
     expect(round(-1.5, 0)).toBe(-2);
     expect(round(1.5, 0)).toBe(2);
     expect(round(1.005, 2)).toBe(1.01);
+  });
+});
+
+describe("switching units converts what was typed", () => {
+  it("says 24.98 mm again as 0.983 in, and 1-1/2 in as 38.1 mm", () => {
+    // 1 in = 25.4 mm exactly (1959 agreement): 24.98 / 25.4 = 0.98346…; 1.5 × 25.4 = 38.1.
+    expect(convertTyped("24.98", "mm", "in")).toBe("0.983");
+    expect(convertTyped("1-1/2", "in", "mm")).toBe("38.1");
+    expect(convertTyped('2 3/8"', "mm", "mm")).toBe('2 3/8"');
+  });
+
+  it("leaves text that is not a size as it was, for the field to report", () => {
+    expect(convertTyped("about an inch", "in", "mm")).toBe("about an inch");
+    expect(convertTyped("", "in", "mm")).toBe("");
+  });
+
+  it("converts the named fields of a form and no others", () => {
+    expect(convertTypedSizes({ shaft: "1.5", bore: "2.374", note: "1" }, ["shaft", "bore"], "in", "mm")).toEqual({ shaft: "38.1", bore: "60.3", note: "1" });
+  });
+
+  it("reads typed sizes as measured values in the unit each was typed in", () => {
+    expect(measuredValues([["inner", "1.497"], ["outer", "60.3 mm"], ["width", ""]], "in")).toEqual([
+      { dimension: "inner", value: 1.497, unit: "in" },
+      { dimension: "outer", value: 60.3, unit: "mm" },
+    ]);
   });
 });
