@@ -15,9 +15,10 @@ import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-ca
 import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
 import { useLengthUnit } from "@/lib/hooks/use-length-unit";
-import { convertTypedSizes, measuredValues, type LengthUnit } from "@/lib/standards/units";
+import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
 
-const inches = (mm: number) => (mm / 25.4).toFixed(4).replace(/0+$/, "").replace(/\.$/, "");
+// A bearing's metric size said in inches as a person would read it with a micrometer: to the thousandth.
+const inches = (mm: number) => showLength(mm / 25.4, "in").replace(" in", "");
 
 function DecodeCard({ decoded }: { decoded: DecodedBearing }) {
   const rows: Array<[string, string]> = [

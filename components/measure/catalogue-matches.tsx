@@ -1,10 +1,11 @@
 import Link from "next/link";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
+import { fromMm, showLength } from "@/lib/standards/units";
 
 /** Original factory parts whose documented sizes match the measurement: a way to name an unnumbered part. */
 export function CatalogueMatches({ parts, unit }: { parts: SizedPart[] | undefined; unit: "mm" | "in" }) {
   if (!parts || parts.length === 0) return null;
-  const show = (mm: number) => (unit === "in" ? `${(mm / 25.4).toFixed(4)} in` : `${mm} mm`);
+  const show = (mm: number) => showLength(fromMm(mm, unit), unit);
   return (
     <section aria-labelledby="catalogue-matches-heading" className="space-y-2 rounded-lg border border-rule bg-ground-sunk p-4">
       <h3 id="catalogue-matches-heading" className="text-lg">

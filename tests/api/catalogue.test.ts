@@ -22,7 +22,7 @@ describe("GET /api/parts/lookup", () => {
     const { status, body } = await lookup("CV-3003-A");
     expect(status).toBe(200);
     expect(body.results[0]).toMatchObject({ number: "CV-3003-A", maker: "Corvane Tractor Works", matchedBy: "exact", score: 1 });
-    expect(Object.keys(body.results[0]).sort()).toEqual(["category", "crossCount", "description", "id", "latestNumber", "maker", "matchedBy", "number", "score", "why"].sort());
+    expect(Object.keys(body.results[0]).sort()).toEqual(["category", "crossCount", "description", "id", "latestNumber", "maker", "matchedBy", "number", "score", "sizes", "why"].sort());
   });
 
   it("finds it typed sloppily: case, spaces, no dashes", async () => {

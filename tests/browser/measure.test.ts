@@ -16,6 +16,8 @@ describe("measuring a part", () => {
     await field("Bearing number as stamped on its side").fill("6305-2Z");
     await page.getByTestId("bearing-decoded").getByText("62 mm").waitFor();
 
+    // The calculators open in inches on a first visit; this bearing was measured in millimetres.
+    await page.getByText("mm", { exact: true }).click();
     await field("Bore (d)").fill("25.03");
     await field("Outside diameter (D)").fill("61.97");
     await field("Width (B)").fill("17");
@@ -48,7 +50,7 @@ describe("measuring a part", () => {
     await field("Housing bore").fill("2.374");
     await field("Width").fill("0.5");
     await page.getByTestId("order-label").getByText("1-1/2 × 2.374 × 1/2 in").waitFor();
-    await page.getByTestId("order").getByText("2.376 in to 2.380 in").waitFor();
+    await page.getByTestId("order").getByText("2.376 in to 2.380 in", { exact: true }).waitFor();
     expect(await page.getByTestId("order").textContent()).not.toMatch(/memory/i);
 
     await page.getByText("mm", { exact: true }).click();
