@@ -124,7 +124,7 @@ export function BearingCalculator() {
               title={match.data.candidates[0].score >= 0.7 ? "The bearing to ask for" : "The nearest standard bearing (a poor match: measure again)"}
               label={match.data.candidates[0].designation}
               notes={[match.data.candidates[0].explanation, ...match.data.candidates[0].warnings]}
-              source="ISO 15:2017 boundary dimensions (deep groove ball bearings); ABMA inch series for R sizes"
+              source={match.data.candidates[0].system === "inch" ? "ABMA inch radial ball bearing series (R sizes)" : "ISO 15:2017, boundary dimensions of deep groove ball bearings"}
             >
               <ResultActions
                 kind="bearing"

@@ -188,8 +188,9 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
                     <p>
                       Nearest standard belts:{" "}
                       {solved.data.standardLengths.map((l) => (
-                        <span key={l.designation} className="num mr-3 font-bold">
+                        <span key={l.designation} className={`num mr-3 ${l.nearest ? "font-bold underline decoration-brass decoration-2" : ""}`}>
                           {l.designation}
+                          {l.nearest && <span className="font-sans text-sm font-normal no-underline"> (nearest)</span>}
                         </span>
                       ))}
                     </p>

@@ -52,7 +52,7 @@ export function readSealSize(designation: string): { innerMm: number; outerMm: n
   try {
     const raw = parts.map((p) => parseLength(p, "mm").value);
     const inch = unit ? !/^mm$/i.test(unit[1]) : raw[0] < 10 && raw[1] < 10 && raw[2] < 2;
-    const [innerMm, outerMm, widthMm] = raw.map((v) => toMm(v, inch ? "in" : "mm"));
+    const [innerMm, outerMm, widthMm] = raw.map((v) => round(toMm(v, inch ? "in" : "mm"), 4));
     return { innerMm, outerMm, widthMm, inch };
   } catch {
     return null;

@@ -1,5 +1,6 @@
 import { checkStandard } from "@/lib/community/checks";
 import type { PartCategory, StandardKind } from "@/lib/catalogue/kinds";
+import { round } from "@/lib/standards/units";
 
 /** The kinds of standard part a calculator works out, and the part category a job list files each under. */
 export const MEASURED_KINDS = ["bearing", "lip_seal", "v_belt"] as const;
@@ -22,13 +23,15 @@ export interface StandardItem {
 /** The item as stored: its sizes read by the standards engine from the designation, as a proposal's are. */
 export function toStandardItem(input: { kind: MeasuredKind; designation: string; note?: string }): StandardItem {
   const checked = checkStandard({ kind: input.kind as StandardKind, designation: input.designation });
+  // Kept to the micrometre: an inch size in mm (1-1/2 in = 38.1 mm) carries no binary noise into lists and CSV files.
+  const size = (v: number | null) => (v === null ? null : round(v, 3));
   return {
     kind: input.kind,
     designation: checked.designation,
     note: input.note?.trim() || null,
-    innerMm: checked.innerMm,
-    outerMm: checked.outerMm,
-    widthMm: checked.widthMm,
-    lengthMm: checked.lengthMm,
+    innerMm: size(checked.innerMm),
+    outerMm: size(checked.outerMm),
+    widthMm: size(checked.widthMm),
+    lengthMm: size(checked.lengthMm),
   };
 }
