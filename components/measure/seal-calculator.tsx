@@ -89,7 +89,7 @@ export function SealCalculator() {
             </div>
           </fieldset>
         </div>
-        <figure className="order-first rounded-lg border border-rule bg-ground-raised p-3 md:order-none">
+        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
           <SealDrawing active={active} />
           <figcaption className="text-sm text-ink-soft">The spring side of the lip faces the oil. Measure the shaft where the new lip will run.</figcaption>
         </figure>
