@@ -16,20 +16,36 @@ function requestSource(request: NextRequest): string | null {
   }
 }
 
-/** The hosts a page of ours is served from: the one the request was addressed to, and the configured APP_URL's. */
-function ownHosts(request: NextRequest): string[] {
-  const hosts = [request.headers.get("host")];
+/**
+ * The origins a page of ours is served from, scheme included: the one the request was addressed to, and the
+ * configured APP_URL's. An http page on the same host is another origin, as browsers count it.
+ */
+function ownOrigins(request: NextRequest): string[] {
+  const origins: string[] = [];
+  const host = request.headers.get("host");
+  if (host) origins.push(`${request.nextUrl.protocol}//${host}`);
   try {
-    hosts.push(new URL(process.env.APP_URL ?? "").host);
+    origins.push(new URL(process.env.APP_URL ?? "").origin);
   } catch {
-    // APP_URL unset or malformed: the Host header alone decides.
+    // APP_URL unset or malformed: the request's own address alone decides.
   }
-  return hosts.filter((host): host is string => Boolean(host));
+  return origins;
 }
 
 function isOwnOrigin(source: string, request: NextRequest): boolean {
   try {
-    return ownHosts(request).includes(new URL(source).host);
+    return ownOrigins(request).includes(new URL(source).origin);
+  } catch {
+    return false;
+  }
+}
+
+function isDecodablePath(pathname: string): boolean {
+  try {
+    for (const segment of pathname.split("/")) {
+      if (decodeURIComponent(segment).includes("\u0000")) return false;
+    }
+    return true;
   } catch {
     return false;
   }
@@ -38,6 +54,14 @@ function isOwnOrigin(source: string, request: NextRequest): boolean {
 // Only cheap work here: the CSRF origin check and the session cookie's sliding expiry.
 // Who may do what is checked by each page, handler and action itself.
 export function proxy(request: NextRequest) {
+  // A path with a broken % escape (/api/parts/%FF) cannot be decoded into route parameters; the framework would
+  // answer 500, so it is refused here with the reason.
+  if (!isDecodablePath(request.nextUrl.pathname)) {
+    return NextResponse.json(
+      { error: "validation_failed", message: "The address has a broken % escape.", field: "path" },
+      { status: 400 },
+    );
+  }
   if (!SAFE_METHODS.has(request.method)) {
     const source = requestSource(request);
     if (!source || !isOwnOrigin(source, request)) {

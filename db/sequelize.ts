@@ -2,13 +2,15 @@ import pg from "pg";
 import { Sequelize } from "sequelize";
 import { env } from "@/lib/env";
 
-export function createSequelize(databaseUrl: string): Sequelize {
+export function createSequelize(databaseUrl: string, pool = { max: env.DB_POOL_MAX, acquire: env.DB_POOL_ACQUIRE_MS }): Sequelize {
   return new Sequelize(databaseUrl, {
     dialect: "postgres",
     // Handing pg over explicitly keeps bundlers from having to resolve Sequelize's dynamic require.
     dialectModule: pg,
     logging: false,
-    pool: { max: 10, min: 0, idle: 10_000 },
+    // A request holds at most one pooled connection at a time: work inside a transaction passes the transaction on,
+    // or a dozen concurrent requests each holding one and waiting for another would exhaust the pool.
+    pool: { max: pool.max, min: 0, idle: 10_000, acquire: pool.acquire },
     define: { underscored: true },
     hooks: {
       // Look-up's similar-number search uses pg_trgm's % operator; its threshold is set once per pooled connection

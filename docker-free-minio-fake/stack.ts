@@ -60,6 +60,9 @@ const testSettings: Record<string, string> = {
   AUTH_MAX_FAILURES_PER_ACCOUNT: "5",
   AUTH_MAX_FAILURES_PER_ADDRESS: "20",
   AUTH_FAILURE_WINDOW_MINUTES: "15",
+  // A short wait for a pooled connection, so that a request that would deadlock the pool fails the test quickly.
+  DB_POOL_MAX: "10",
+  DB_POOL_ACQUIRE_MS: "8000",
 };
 
 // The benchmark keeps its own cluster between runs: loading the synthetic catalogue takes minutes.

@@ -10,12 +10,8 @@ import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { signInBody, type SignInBody } from "@/lib/validation/auth";
 
-/** Only same-site paths are followed after signing in, so a crafted link cannot send people elsewhere. */
-function safeNext(next: string | undefined): string {
-  return next && next.startsWith("/") && !next.startsWith("//") ? next : "/";
-}
-
-export function SignInForm({ next }: { next?: string }) {
+/** `next` is a path on this site, already checked by the page (safeReturnPath), so a crafted link cannot lead away. */
+export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
   const [unverifiedEmail, setUnverifiedEmail] = useState<string | null>(null);
   const { form, onSubmit, formError, pending } = useApiForm<SignInBody, SignInBody, unknown>({
@@ -23,7 +19,7 @@ export function SignInForm({ next }: { next?: string }) {
     endpoint: "/api/auth/sign-in",
     defaultValues: { email: "", password: "" },
     onSuccess: () => {
-      router.replace(safeNext(next));
+      router.replace(next);
       router.refresh();
     },
     onError: (error) => {

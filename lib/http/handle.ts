@@ -20,12 +20,45 @@ export async function readJson(request: Request): Promise<unknown> {
     }
     chunks.push(value);
   }
-  const text = Buffer.concat(chunks).toString("utf8").trim();
-  if (text === "") return {};
+  let text: string;
   try {
-    return JSON.parse(text);
+    text = new TextDecoder("utf-8", { fatal: true }).decode(Buffer.concat(chunks)).trim();
+  } catch {
+    throw new AppError("validation_failed", "The request body is not UTF-8 text.", { field: "body" });
+  }
+  if (text === "") return {};
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
   } catch {
     throw new AppError("validation_failed", "The request body is not valid JSON.", { field: "body" });
+  }
+  assertPlainText(value, []);
+  return value;
+}
+
+/** Why a string cannot be stored as text, or null: PostgreSQL refuses NUL, and a lone surrogate is no character. */
+export function textFault(value: string): string | null {
+  if (value.includes("\u0000")) return "contains a NUL character";
+  if (!value.isWellFormed()) return "contains a broken character (a lone UTF-16 surrogate)";
+  return null;
+}
+
+/** Every string in a parsed body, keys included, is text that can be stored; the first that is not is a 400. */
+function assertPlainText(value: unknown, path: string[]): void {
+  if (typeof value === "string") {
+    const fault = textFault(value);
+    if (fault) {
+      const field = path.length > 0 ? path.join(".") : "body";
+      throw new AppError("validation_failed", `This text ${fault}.`, { field, fields: { [field]: `This text ${fault}.` } });
+    }
+  } else if (Array.isArray(value)) {
+    value.forEach((item, i) => assertPlainText(item, [...path, String(i)]));
+  } else if (value && typeof value === "object") {
+    for (const [key, item] of Object.entries(value)) {
+      assertPlainText(key, path);
+      assertPlainText(item, [...path, key]);
+    }
   }
 }
 

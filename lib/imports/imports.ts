@@ -82,7 +82,8 @@ export async function setMapping(actor: Actor, id: number, mapping: Record<strin
 export async function saveMapping(actor: Actor, name: string, mapping: Record<string, unknown>): Promise<ImportMapping> {
   if (!hasPermission(actor.role, "imports:review-queue")) throw new AppError("forbidden", "Your account's role does not allow imports.");
   const clean = cleanMapping(mapping, Object.values(mapping).filter((v): v is string => typeof v === "string"));
-  const [saved] = await ImportMapping.upsert({ name, mapping: clean, createdBy: actor.id }, { returning: true });
+  // The name is the mapping's identity: saving under a name already used replaces that mapping.
+  const [saved] = await ImportMapping.upsert({ name, mapping: clean, createdBy: actor.id }, { returning: true, conflictFields: ["name"] });
   return saved;
 }
 

@@ -279,6 +279,9 @@ export async function addLine(
   const chain = await loadChain(partId);
   const latestId = chain.latestId;
   requested ??= latestId !== partId ? original!.number : null;
+  // Read before the transaction: inside it, a query without the transaction would take a second pooled connection
+  // while this one holds the list's lock, and a burst of adds would exhaust the pool waiting on each other.
+  const best = (await equivalentsFor([latestId])).get(latestId)?.[0] ?? null;
   return sequelize.transaction(async (transaction) => {
     // Adds to one list take turns (the list row is locked), so two quick clicks merge instead of colliding.
     await lockList(listId, transaction);
@@ -288,7 +291,6 @@ export async function addLine(
       await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
       return { lineId: existing.id, partId: latestId, merged: true, superseded: latestId !== partId };
     }
-    const best = (await equivalentsFor([latestId])).get(latestId)?.[0] ?? null;
     const line = await JobListLine.create(
       { listId, partId: latestId, requestedNumber: requested, standardPartId: best?.standardPartId ?? null, quantity: input.quantity, notes: input.notes || null },
       { transaction },

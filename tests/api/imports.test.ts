@@ -228,3 +228,18 @@ describe("other files", () => {
     expect(await Submission.count({ where: { status: "pending" } })).toBeGreaterThan(0);
   });
 });
+
+describe("POST /api/import-mappings", () => {
+  it("replaces a saved mapping when one of the same name is saved again", async () => {
+    const name = `Halvard club ${Date.now()}`;
+    const first = await send("post", "/api/import-mappings", { name, mapping: { number: "Part no", maker: "Maker" } }, { cookie: admin });
+    expect(first.status).toBe(201);
+    const again = await send("post", "/api/import-mappings", { name, mapping: { number: "Stamped as", maker: "Maker" } }, { cookie: admin });
+    expect(again.status).toBe(201);
+    expect(again.body.id).toBe(first.body.id);
+    const { body } = await send("get", "/api/import-mappings", undefined, { cookie: admin });
+    const saved = body.mappings.filter((m: { name: string }) => m.name === name);
+    expect(saved).toHaveLength(1);
+    expect(saved[0].mapping.number).toBe("Stamped as");
+  });
+});

@@ -177,3 +177,19 @@ describe("POST /api/lists/{id}/lines with a standard part from a calculator", ()
     expect(badKind.body.field).toBe("standard.kind");
   });
 });
+
+describe("POST /api/lists/{id}/lines under concurrency", () => {
+  it("takes a burst of quick adds of one member without running out of connections", async () => {
+    // More adds at once than the pool has connections: each one's transaction must not reach for a second
+    // connection while it holds the list's row lock, or they wait on each other until the acquire timeout (500).
+    const id = await newList("Twelve quick adds");
+    const numbers = ["CV-3003-B", "HM 210 007", "cv 3003a", "CV-3009-A", "CV-3012-A", "CV-3015-A"];
+    const responses = await Promise.all(
+      Array.from({ length: 24 }, (_, i) => send("post", `/api/lists/${id}/lines`, { number: numbers[i % numbers.length] }, { cookie: owner })),
+    );
+    expect(responses.map((r) => r.status).filter((s) => s >= 500)).toEqual([]);
+    expect(responses.every((r) => r.status === 200 || r.status === 201)).toBe(true);
+    const { body } = await send("get", `/api/lists/${id}`, undefined, { cookie: owner });
+    expect(body.lines.reduce((sum: number, l: { quantity: number }) => sum + l.quantity, 0)).toBe(24);
+  });
+});

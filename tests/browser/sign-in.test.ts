@@ -71,3 +71,26 @@ describe("opening an account", () => {
     await page.getByTestId("user-menu").waitFor();
   });
 });
+
+describe("after signing in", () => {
+  for (const next of ["/%5Cevil.example/", "/%09/evil.example/", "//evil.example/", "https://evil.example/"]) {
+    it(`stays on this site for next=${next}`, async () => {
+      const page = currentPage();
+      await page.goto(`${APP_URL}/sign-in?next=${next}`);
+      await page.getByLabel("E-mail").fill("member@understudy.test");
+      await page.getByLabel("Password").fill(DEMO_PASSWORD);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.getByTestId("user-menu").waitFor();
+      expect(new URL(page.url()).origin).toBe(new URL(APP_URL).origin);
+    });
+  }
+
+  it("follows a path on this site", async () => {
+    const page = currentPage();
+    await page.goto(`${APP_URL}/sign-in?next=${encodeURIComponent("/lists?from=sign-in")}`);
+    await page.getByLabel("E-mail").fill("member@understudy.test");
+    await page.getByLabel("Password").fill(DEMO_PASSWORD);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(/\/lists\?from=sign-in$/);
+  });
+});
