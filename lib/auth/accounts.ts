@@ -3,10 +3,12 @@ import { sequelize, User } from "@/db";
 import { consumeAccountToken, issueAccountToken } from "@/lib/auth/account-tokens";
 import { lucia } from "@/lib/auth/lucia";
 import { hashPassword, spendPasswordTime, verifyPassword } from "@/lib/auth/password";
+import { passwordWeakness } from "@/lib/auth/password-strength";
 import type { Role } from "@/lib/auth/roles";
 import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "@/lib/auth/throttle";
 import { env } from "@/lib/env";
 import { recordAudit } from "@/lib/audit/record";
+import { takeTurn } from "@/lib/concurrency/take-turn";
 import { AppError } from "@/lib/errors";
 import { sendMail, trySend } from "@/lib/mail/send";
 import { accountExistsMail, resetPasswordMail, verifyEmailMail } from "@/lib/mail/templates";
@@ -31,9 +33,18 @@ export const SIGN_IN_REFUSED = "That e-mail and password do not match an account
  * Opens an account and mails the confirmation link. An address that already has an account gets a
  * "you already have an account" message instead, and the caller sees the same answer either way.
  */
+/** A new password that is easy to guess is refused with the estimator's reason, on the password field. */
+function assertStrongPassword(password: string, userInputs: string[]): void {
+  const weakness = passwordWeakness(password, userInputs);
+  if (weakness) throw new AppError("validation_failed", weakness, { field: "password", fields: { password: weakness } });
+}
+
 export async function signUp(input: { email: string; password: string }): Promise<{ mailSent: boolean }> {
+  assertStrongPassword(input.password, [input.email]);
   const passwordHash = await hashPassword(input.password);
   const outcome = await sequelize.transaction(async (transaction) => {
+    // Two sign-ups of one address at once take turns: the second finds the first's account, as a later one would.
+    await takeTurn(transaction, `sign-up:${input.email.toLowerCase()}`);
     const existing = await User.findOne({ where: { email: input.email }, transaction });
     if (existing) {
       return { mail: accountExistsMail(input.email, link("/reset-password", await issueAccountToken(existing.id, "reset_password", transaction))) };
@@ -106,6 +117,7 @@ export async function requestPasswordReset(email: string): Promise<{ mailSent: b
 
 /** Sets the new password, confirms the address (the mail reached its owner) and signs out every other session. */
 export async function resetPassword(input: { token: string; password: string }): Promise<AccountView> {
+  assertStrongPassword(input.password, []);
   const passwordHash = await hashPassword(input.password);
   const user = await sequelize.transaction(async (transaction) => {
     const userId = await consumeAccountToken(input.token, "reset_password", transaction);

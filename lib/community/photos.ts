@@ -1,6 +1,7 @@
 import { randomBytes } from "node:crypto";
 import { Op } from "sequelize";
-import { SubmissionPhoto } from "@/db";
+import { sequelize, SubmissionPhoto } from "@/db";
+import { takeTurn } from "@/lib/concurrency/take-turn";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 import { PHOTO_MAX_BYTES, PHOTO_TYPES, type PhotoType } from "@/lib/community/kinds";
@@ -22,14 +23,20 @@ export interface UploadGrant {
  * 192 random bits, so nobody can reach a photo by guessing where it is stored.
  */
 export async function grantUpload(userId: string, file: { contentType: PhotoType; size: number; fileName?: string }): Promise<UploadGrant> {
-  const recent = await SubmissionPhoto.count({ where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } } });
-  if (recent >= env.UPLOADS_PER_HOUR) {
-    throw new AppError("rate_limited", `You have uploaded ${env.UPLOADS_PER_HOUR} photos in the last hour. Wait a while before adding more.`, { retryAfterSeconds: 3600 });
-  }
   const key = `photos/${randomBytes(24).toString("base64url")}.${EXTENSIONS[file.contentType]}`;
   const expiresInSeconds = 600;
+  const photo = await sequelize.transaction(async (transaction) => {
+    await takeTurn(transaction, `upload:${userId}`);
+    const recent = await SubmissionPhoto.count({ where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } }, transaction });
+    if (recent >= env.UPLOADS_PER_HOUR) {
+      throw new AppError("rate_limited", `You have uploaded ${env.UPLOADS_PER_HOUR} photos in the last hour. Wait a while before adding more.`, { retryAfterSeconds: 3600 });
+    }
+    return SubmissionPhoto.create(
+      { userId, submissionId: null, objectKey: key, contentType: file.contentType, sizeBytes: file.size, fileName: file.fileName?.slice(0, 200) ?? null },
+      { transaction },
+    );
+  });
   const uploadUrl = await presignPut(key, file.contentType, file.size, expiresInSeconds);
-  const photo = await SubmissionPhoto.create({ userId, submissionId: null, objectKey: key, contentType: file.contentType, sizeBytes: file.size, fileName: file.fileName?.slice(0, 200) ?? null });
   return { photoId: photo.id, uploadUrl, method: "PUT", headers: { "Content-Type": file.contentType }, expiresInSeconds };
 }
 

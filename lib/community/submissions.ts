@@ -4,6 +4,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { searchForms } from "@/lib/catalogue/normalise";
 import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
 import type { Decision, NewPartInput, NewStandardInput, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
+import { takeTurn } from "@/lib/concurrency/take-turn";
 import { checkUploadedPhotos, deleteStoredPhotos } from "@/lib/community/photos";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
@@ -137,8 +138,10 @@ async function addConfirmation(target: { crossId?: number; submissionId?: number
   return rows.length > 0;
 }
 
-async function assertSubmissionRate(userId: string): Promise<void> {
-  const recent = await Submission.count({ where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } } });
+/** Within the transaction that saves a proposal: the member's proposals take turns, so the count cannot be raced. */
+async function assertSubmissionRate(userId: string, transaction: Transaction): Promise<void> {
+  await takeTurn(transaction, `proposal:${userId}`);
+  const recent = await Submission.count({ where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } }, transaction });
   if (recent >= env.SUBMISSIONS_PER_HOUR) {
     throw new AppError("rate_limited", `You have sent ${env.SUBMISSIONS_PER_HOUR} proposals in the last hour. Thank you! Wait a while before sending more.`, { retryAfterSeconds: 3600 });
   }
@@ -180,7 +183,6 @@ function snapshot(s: Submission): Record<string, unknown> {
  * listed in `photosMissing`; the text is saved regardless.
  */
 export async function createSubmission(user: Actor, input: SubmissionInput): Promise<SubmitOutcome> {
-  await assertSubmissionRate(user.id);
   const original = await resolveOriginal(input.original);
   const standard = await withPartSizeCheck(original, await resolveStandard(input.standard));
   const duplicate = await findDuplicate(original, standard, null);
@@ -211,6 +213,7 @@ export async function createSubmission(user: Actor, input: SubmissionInput): Pro
 
   const photos = await checkUploadedPhotos(user.id, input.photoIds, null);
   const submission = await sequelize.transaction(async (transaction) => {
+    await assertSubmissionRate(user.id, transaction);
     const created = await Submission.create(
       { userId: user.id, ...proposalFields(original, standard, input) },
       { transaction },

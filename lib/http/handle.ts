@@ -1,3 +1,4 @@
+import { ConnectionError, DatabaseError } from "sequelize";
 import { AppError, errorBody, type ErrorBody } from "@/lib/errors";
 
 const MAX_JSON_BYTES = 64 * 1024;
@@ -68,11 +69,32 @@ function tooLarge(): AppError {
   });
 }
 
+const DATABASE_RETRY_SECONDS = 30;
+
+// PostgreSQL's codes for a server going away or not yet taking connections (admin shutdown, crash shutdown, cannot
+// connect now) and for a connection lost in the middle of a query.
+const OUTAGE_CODES = new Set(["57P01", "57P02", "57P03", "08000", "08001", "08003", "08004", "08006"]);
+
+/** The database is down, restarting or out of reach (a connection refused, lost, or not had in time from the pool). */
+function isDatabaseUnavailable(error: unknown): boolean {
+  if (error instanceof ConnectionError) return true;
+  if (error instanceof DatabaseError) {
+    const code = (error.parent as { code?: string } | undefined)?.code;
+    return code !== undefined && OUTAGE_CODES.has(code);
+  }
+  return false;
+}
+
 export function errorResponse(error: unknown): Response {
   if (error instanceof AppError) {
     const headers: Record<string, string> = {};
     if (error.options.retryAfterSeconds) headers["Retry-After"] = String(error.options.retryAfterSeconds);
     return Response.json(errorBody(error), { status: error.status, headers });
+  }
+  if (isDatabaseUnavailable(error)) {
+    console.error("[understudy] database unavailable", error instanceof Error ? error.message : error);
+    const body: ErrorBody = { error: "unavailable", message: "The catalogue's database is not answering just now. Please try again in a minute." };
+    return Response.json(body, { status: 503, headers: { "Retry-After": String(DATABASE_RETRY_SECONDS) } });
   }
   console.error("[understudy] unexpected error", error);
   const body: ErrorBody = { error: "internal", message: "Something went wrong on our side. Please try again." };

@@ -377,3 +377,19 @@ describe("POST /api/submissions against the worn part's documented sizes", () =>
     expect(review.text).toContain("Not the same size.");
   });
 });
+
+describe("hourly limits under concurrency", () => {
+  it("grants no more photo uploads in an hour than the limit, however many arrive at once", async () => {
+    // UPLOADS_PER_HOUR is 60 (lib/env.ts default, not overridden for tests).
+    const email = "club.member1@understudy.test";
+    const cookie = await signIn(email);
+    const user = await User.findOne({ where: { email } });
+    const already = await SubmissionPhoto.count({ where: { userId: user!.id } });
+    const responses = await Promise.all(
+      Array.from({ length: 75 }, () => send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 1000 }, { cookie })),
+    );
+    const granted = responses.filter((r) => r.status === 201).length;
+    expect(responses.every((r) => r.status === 201 || r.status === 429)).toBe(true);
+    expect(granted).toBe(Math.max(0, 60 - already));
+  });
+});
