@@ -102,9 +102,9 @@ export type SubmitOutcome =
   | { outcome: "confirmed_pending"; submissionId: number; message: string };
 
 /** The open or approved record this proposal repeats, if any. */
-async function findDuplicate(original: ResolvedOriginal, standard: ResolvedStandard, excludeSubmissionId: number | null) {
+async function findDuplicate(original: ResolvedOriginal, standard: ResolvedStandard, excludeSubmissionId: number | null, transaction?: Transaction) {
   if (original.partId && standard.standardPartId) {
-    const cross = await Cross.findOne({ where: { originalPartId: original.partId, standardPartId: standard.standardPartId, status: "approved" }, attributes: ["id"] });
+    const cross = await Cross.findOne({ where: { originalPartId: original.partId, standardPartId: standard.standardPartId, status: "approved" }, attributes: ["id"], transaction });
     if (cross) return { kind: "cross" as const, id: cross.id };
   }
   const [row] = await sequelize.query<{ id: number; user_id: string }>(
@@ -124,6 +124,7 @@ async function findDuplicate(original: ResolvedOriginal, standard: ResolvedStand
         designation: standard.newStandard?.designation.toUpperCase() ?? "",
       },
       type: QueryTypes.SELECT,
+      transaction,
     },
   );
   return row ? { kind: "submission" as const, id: row.id, userId: row.user_id } : null;
@@ -185,44 +186,49 @@ function snapshot(s: Submission): Record<string, unknown> {
 export async function createSubmission(user: Actor, input: SubmissionInput): Promise<SubmitOutcome> {
   const original = await resolveOriginal(input.original);
   const standard = await withPartSizeCheck(original, await resolveStandard(input.standard));
-  const duplicate = await findDuplicate(original, standard, null);
-  if (duplicate?.kind === "cross") {
-    const added = await addConfirmation({ crossId: duplicate.id }, user.id, input.notes);
-    return {
-      outcome: "confirmed",
-      crossId: duplicate.id,
-      partId: original.partId!,
-      message: added
-        ? "This cross is already in the catalogue, so your report was counted as a confirmation of it. Thank you."
-        : "This cross is already in the catalogue and you have confirmed it before.",
-    };
-  }
-  if (duplicate?.kind === "submission") {
-    if (duplicate.userId === user.id) {
-      throw new AppError("conflict", `You have already proposed this cross (proposal #${duplicate.id}); it is waiting for review.`, { field: "original" });
-    }
-    const added = await addConfirmation({ submissionId: duplicate.id }, user.id, input.notes);
-    return {
-      outcome: "confirmed_pending",
-      submissionId: duplicate.id,
-      message: added
-        ? "Another member has proposed the same cross and it is waiting for review. Your report was added to it as a confirmation."
-        : "Another member has proposed the same cross, and you have already confirmed it.",
-    };
-  }
-
   const photos = await checkUploadedPhotos(user.id, input.photoIds, null);
-  const submission = await sequelize.transaction(async (transaction) => {
+  return sequelize.transaction(async (transaction): Promise<SubmitOutcome> => {
+    // Reports of one cross take turns, so that of two sent at once the second finds the first and becomes its
+    // confirmation (or, from the same member, is refused) instead of both landing in the queue.
+    await takeTurn(transaction, crossKey(original, standard));
+    const duplicate = await findDuplicate(original, standard, null, transaction);
+    if (duplicate?.kind === "cross") {
+      const added = await addConfirmation({ crossId: duplicate.id }, user.id, input.notes, transaction);
+      return {
+        outcome: "confirmed",
+        crossId: duplicate.id,
+        partId: original.partId!,
+        message: added
+          ? "This cross is already in the catalogue, so your report was counted as a confirmation of it. Thank you."
+          : "This cross is already in the catalogue and you have confirmed it before.",
+      };
+    }
+    if (duplicate?.kind === "submission") {
+      if (duplicate.userId === user.id) {
+        throw new AppError("conflict", `You have already proposed this cross (proposal #${duplicate.id}); it is waiting for review.`, { field: "original" });
+      }
+      const added = await addConfirmation({ submissionId: duplicate.id }, user.id, input.notes, transaction);
+      return {
+        outcome: "confirmed_pending",
+        submissionId: duplicate.id,
+        message: added
+          ? "Another member has proposed the same cross and it is waiting for review. Your report was added to it as a confirmation."
+          : "Another member has proposed the same cross, and you have already confirmed it.",
+      };
+    }
     await assertSubmissionRate(user.id, transaction);
-    const created = await Submission.create(
-      { userId: user.id, ...proposalFields(original, standard, input) },
-      { transaction },
-    );
+    const created = await Submission.create({ userId: user.id, ...proposalFields(original, standard, input) }, { transaction });
     if (photos.usable.length > 0) await SubmissionPhoto.update({ submissionId: created.id }, { where: { id: photos.usable, userId: user.id }, transaction });
     await recordAudit({ actorId: user.id, action: "submission.create", subjectType: "submission", subjectId: created.id, after: snapshot(created) }, transaction);
-    return created;
+    return { outcome: "submitted", submission: { id: created.id, status: created.status }, checks: standard.checks, photosMissing: photos.missing };
   });
-  return { outcome: "submitted", submission: { id: submission.id, status: submission.status }, checks: standard.checks, photosMissing: photos.missing };
+}
+
+/** What makes two reports the same cross: the worn part (or the new one's maker and number) and the standard part. */
+function crossKey(original: ResolvedOriginal, standard: ResolvedStandard): string {
+  const part = original.partId ? `p${original.partId}` : `n${original.newPart?.makerId}:${original.newPart?.numberNormalized}`;
+  const target = standard.standardPartId ? `s${standard.standardPartId}` : `n${standard.newStandard?.kind}:${standard.newStandard?.designation.toUpperCase()}`;
+  return `cross:${part}:${target}`;
 }
 
 /** The submitter changes a proposal a moderator sent back; it goes back into the queue as pending. */
@@ -284,6 +290,12 @@ async function numberAndStandard(s: Submission, transaction?: Transaction): Prom
 
 /** Puts an approved proposal into the catalogue: the part and standard part if new, and the approved cross. */
 async function landInCatalogue(s: Submission, transaction: Transaction): Promise<{ partId: number; crossId: number }> {
+  // Two approvals of the same cross take turns: the second finds the part, standard part and cross the first made.
+  // The database's one-approved-cross rule (migration 0006) stands behind this.
+  await takeTurn(
+    transaction,
+    crossKey({ partId: s.originalPartId, newPart: s.newPart }, { standardPartId: s.standardPartId, newStandard: s.newStandard as ResolvedStandard["newStandard"], checks: [] }),
+  );
   let partId = s.originalPartId;
   if (!partId && s.newPart) {
     const np = s.newPart;

@@ -393,3 +393,38 @@ describe("hourly limits under concurrency", () => {
     expect(granted).toBe(Math.max(0, 60 - already));
   });
 });
+
+describe("the same cross proposed at once", () => {
+  it("makes one proposal of two members' simultaneous reports, the other a confirmation of it", async () => {
+    const { body } = newPartProposal();
+    const [a, b] = await Promise.all([submit(member, body), submit(other, body)]);
+    const outcomes = [a.body.outcome, b.body.outcome].sort();
+    expect(outcomes).toEqual(["confirmed_pending", "submitted"]);
+  });
+
+  it("refuses the same member's second copy sent at the same moment", async () => {
+    const { body } = newPartProposal();
+    const responses = await Promise.all([submit(member, body), submit(member, body), submit(member, body)]);
+    expect(responses.map((r) => r.status).sort()).toEqual([201, 409, 409]);
+  });
+
+  it("never approves two identical crosses, even when two proposals of one were both pending", async () => {
+    // Two proposals of one cross that reached the queue separately (say, one by import): approving both leaves one
+    // approved cross in the catalogue, the second approval counted as a confirmation.
+    const { body } = newPartProposal();
+    const first = await submit(member, body);
+    const [part] = await sequelize.query<{ id: number }>("SELECT id FROM submissions WHERE id = :id", { replacements: { id: first.body.submission.id }, type: "SELECT" as never });
+    const twin = await Submission.create({ ...(await Submission.findByPk(part.id))!.get({ plain: true }), id: undefined as never, userId: (await User.findOne({ where: { email: OTHER } }))!.id });
+    const decide = (id: number) => send("post", `/api/submissions/${id}/decision`, { action: "approve", message: "" }, { cookie: moderator });
+    const [x, y] = await Promise.all([decide(first.body.submission.id), decide(twin.id)]);
+    expect([x.status, y.status]).toEqual([200, 200]);
+    expect(x.body.cross.id).toBe(y.body.cross.id);
+    const crosses = await Cross.count({ where: { id: x.body.cross.id } });
+    expect(crosses).toBe(1);
+    const [{ n }] = await sequelize.query<{ n: string }>(
+      "SELECT count(*) AS n FROM crosses WHERE original_part_id = :p AND standard_part_id = :s AND status = 'approved'",
+      { replacements: { p: x.body.cross.partId, s: bearing6205 }, type: "SELECT" as never },
+    );
+    expect(Number(n)).toBe(1);
+  });
+});
