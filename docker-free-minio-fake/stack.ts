@@ -270,15 +270,20 @@ async function main(): Promise<number> {
   }
 
   const shown = env.APP_URL.replace("127.0.0.1", "localhost");
-  console.log(`
-  Understudy is running at ${shown}
-
+  // In production there are no demo accounts and no captured-mail page, so the banner names neither.
+  const demo =
+    env.APP_ENV === "production"
+      ? ""
+      : `
   Demo accounts (password: understudy-demo)
     member@understudy.test      member
     moderator@understudy.test   moderator
     admin@understudy.test       admin
 
-  Mail the app sends is captured, not delivered: ${shown}/dev/mail
+  Mail the app sends is captured, not delivered: ${shown}/dev/mail`;
+  console.log(`
+  Understudy is running at ${shown}
+${demo}
   Health of the services: ${shown}/api/health
   Press Ctrl-C to stop the app and its services.
 `);

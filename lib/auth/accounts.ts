@@ -4,6 +4,7 @@ import { consumeAccountToken, issueAccountToken } from "@/lib/auth/account-token
 import { lucia } from "@/lib/auth/lucia";
 import { hashPassword, spendPasswordTime, verifyPassword } from "@/lib/auth/password";
 import { passwordWeakness } from "@/lib/auth/password-strength";
+import { accountUsable } from "@/lib/auth/demo-accounts";
 import type { Role } from "@/lib/auth/roles";
 import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "@/lib/auth/throttle";
 import { env } from "@/lib/env";
@@ -86,7 +87,9 @@ export async function signIn(input: {
 }): Promise<{ user: AccountView; sessionId: string }> {
   const keys = { account: input.email, address: input.address };
   await assertSignInAllowed(keys);
-  const user = await User.findOne({ where: { email: input.email } });
+  const found = await User.findOne({ where: { email: input.email } });
+  // A demo account in production is answered exactly like an unknown address.
+  const user = found && accountUsable(found.email, env.APP_ENV) ? found : null;
   const valid = user ? await verifyPassword(user.passwordHash, input.password) : (await spendPasswordTime(input.password), false);
   if (!user || !valid) {
     await recordSignInFailure(keys);

@@ -4,6 +4,8 @@ import { cache } from "react";
 import type { Session, User } from "lucia";
 import { lucia } from "@/lib/auth/lucia";
 import { hasPermission, type Permission } from "@/lib/auth/roles";
+import { accountUsable } from "@/lib/auth/demo-accounts";
+import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 
 export type CurrentUser = User;
@@ -14,7 +16,9 @@ export const getCurrentSession = cache(async (): Promise<CurrentSession> => {
   const store = await cookies();
   const sessionId = store.get(lucia.sessionCookieName)?.value ?? null;
   if (!sessionId) return { user: null, session: null };
-  const result = await lucia.validateSession(sessionId);
+  const validated = await lucia.validateSession(sessionId);
+  // A session a demo account opened before the app went into production no longer counts.
+  const result: CurrentSession = validated.user && !accountUsable(validated.user.email, env.APP_ENV) ? { user: null, session: null } : validated;
   try {
     if (result.session?.fresh) {
       const cookie = lucia.createSessionCookie(result.session.id);

@@ -66,7 +66,14 @@ export async function checkUploadedPhotos(userId: string, photoIds: number[], su
     } catch (error) {
       console.error("[understudy] photo storage could not be reached", error);
     }
-    const ok = stored !== null && stored.size > 0 && stored.size <= PHOTO_MAX_BYTES && (PHOTO_TYPES as readonly string[]).includes(stored.contentType ?? "");
+    // What arrived must be what was granted: real S3 enforces the signed type and length, the local fake does not.
+    const ok =
+      stored !== null &&
+      stored.size > 0 &&
+      stored.size <= PHOTO_MAX_BYTES &&
+      stored.size === row.sizeBytes &&
+      stored.contentType === row.contentType &&
+      (PHOTO_TYPES as readonly string[]).includes(stored.contentType ?? "");
     (ok ? usable : missing).push(row.id);
   }
   return { usable, missing };

@@ -378,6 +378,21 @@ describe("POST /api/submissions against the worn part's documented sizes", () =>
   });
 });
 
+describe("photos checked against their grant", () => {
+  it("leaves out a photo whose upload is larger, or of another type, than was granted", async () => {
+    // Real S3 refuses a presigned PUT whose length or type differs from the signed ones; the local fake does not,
+    // so the app checks what arrived against the grant.
+    const bytes = Buffer.from("\xff\xd8\xff\xe0 a test image body that is longer than granted \xff\xd9", "latin1");
+    const grant = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 10 }, { cookie: member });
+    const put = await fetch(grant.body.uploadUrl, { method: "PUT", body: bytes, headers: grant.body.headers });
+    expect(put.status).toBe(200);
+    const { body } = newPartProposal({ photoIds: [grant.body.photoId] });
+    const created = await submit(member, body);
+    expect(created.status).toBe(201);
+    expect(created.body.photosMissing).toEqual([grant.body.photoId]);
+  });
+});
+
 describe("hourly limits under concurrency", () => {
   it("grants no more photo uploads in an hour than the limit, however many arrive at once", async () => {
     // UPLOADS_PER_HOUR is 60 (lib/env.ts default, not overridden for tests).
