@@ -8,8 +8,9 @@ const nextConfig = {
   experimental: {
     // forbidden() and app/forbidden.tsx for pages a role may not open.
     authInterrupts: true,
-    // proxy.ts sees every request, so Next buffers bodies for it; CSV imports may be up to 50 MB (lib/imports/kinds.ts).
-    proxyClientMaxBodySize: "52mb",
+    // proxy.ts sees every request but the import upload, and Next buffers bodies for it: no route behind the proxy
+    // takes more than 64 KB (lib/http/origin.ts), so nothing larger is ever buffered.
+    proxyClientMaxBodySize: "64kb",
   },
 };
 

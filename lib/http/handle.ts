@@ -1,7 +1,8 @@
 import { ConnectionError, DatabaseError } from "sequelize";
 import { AppError, errorBody, type ErrorBody } from "@/lib/errors";
+import { MAX_BODY_BYTES } from "@/lib/http/origin";
 
-const MAX_JSON_BYTES = 64 * 1024;
+const MAX_JSON_BYTES = MAX_BODY_BYTES;
 
 /** Reads a JSON body with a size cap, so an oversized or malformed body is a 400 and never reaches the parser whole. */
 export async function readJson(request: Request): Promise<unknown> {

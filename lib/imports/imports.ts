@@ -156,6 +156,9 @@ export async function runCommit(actor: Actor, id: number, options: { failAfterRo
   const row = (await Import.findByPk(id))!;
   try {
     const counts = await sequelize.transaction(async (transaction) => {
+      // Held for as long as this commit's transaction lives: when the server dies, PostgreSQL ends the session and
+      // the lock with it, which is how a retry knows at once that the commit is dead (recoverStalled).
+      await sequelize.query("SELECT pg_advisory_xact_lock(:space, :id)", { replacements: { space: COMMIT_LOCK_SPACE, id }, transaction });
       const result = await runPass({
         importId: id,
         userId: actor.id,
@@ -242,11 +245,31 @@ export interface ImportView {
   rejectionsTotal: number;
 }
 
-// Work that has written no progress for this long was cut off (the server stopped); a commit's transaction died with it.
+// Reading that has written no progress for this long was cut off (the server stopped).
 const STALLED_MS = 10 * 60 * 1000;
+// A commit holds an advisory lock in this space, keyed by the import's id, while its transaction runs.
+const COMMIT_LOCK_SPACE = 1651;
+// The moment between claiming a commit and its transaction taking the lock.
+const COMMIT_START_GRACE_MS = 15_000;
+
+/** Whether a commit's transaction is still alive: its advisory lock is held by some session. */
+async function commitAlive(id: number): Promise<boolean> {
+  return sequelize.transaction(async (transaction) => {
+    const [row] = await sequelize.query<{ free: boolean }>("SELECT pg_try_advisory_xact_lock(:space, :id) AS free", {
+      replacements: { space: COMMIT_LOCK_SPACE, id },
+      type: QueryTypes.SELECT,
+      transaction,
+    });
+    return !row.free;
+  });
+}
 
 async function recoverStalled(row: Import): Promise<void> {
-  if (!["uploaded", "parsing", "committing"].includes(row.status) || Date.now() - row.updatedAt.getTime() < STALLED_MS) return;
+  if (!["uploaded", "parsing", "committing"].includes(row.status)) return;
+  const idle = Date.now() - row.updatedAt.getTime();
+  // A commit is known dead as soon as nobody holds its lock; reading has no lock and waits out the longer stall.
+  const dead = row.status === "committing" ? idle >= COMMIT_START_GRACE_MS && !(await commitAlive(row.id)) : idle >= STALLED_MS;
+  if (!dead) return;
   const message =
     row.status === "committing"
       ? "The commit was interrupted (the server stopped), so nothing was changed. Commit again."

@@ -243,3 +243,50 @@ describe("POST /api/import-mappings", () => {
     expect(saved[0].mapping.number).toBe("Stamped as");
   });
 });
+
+describe("a commit cut off by a server stop", () => {
+  it("can be committed again at once, as soon as nothing holds the commit's lock", async () => {
+    const number = `CV-77${Date.now() % 100000}-Z`;
+    const text = `Maker,Part No.,Description,Kind,Standard designation,Fit\r\nCorvane Tractor Works,${number},Governor weight bearing,bearing,6200-2RS,direct\r\n`;
+    const response = await upload(admin, Buffer.from(text), "cut-off.csv");
+    const id = response.body.id;
+    await settled(admin, id);
+    // As a dead server leaves it: claimed for committing a minute ago, and no transaction holding the commit's lock.
+    await sequelize.query("UPDATE imports SET status = 'committing', updated_at = now() - interval '1 minute' WHERE id = :id", { replacements: { id } });
+    // While a commit's transaction is alive (here, this test holds its lock) the import is left committing.
+    await sequelize.transaction(async (transaction) => {
+      await sequelize.query("SELECT pg_advisory_xact_lock(1651, :id)", { replacements: { id }, transaction });
+      expect((await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body.status).toBe("committing");
+    });
+    const after = (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body;
+    expect(after.status).toBe("parsed");
+    expect(after.errorMessage).toMatch(/interrupted/);
+    expect((await send("post", `/api/imports/${id}/commit`, {}, { cookie: admin })).status).toBe(202);
+    expect((await settled(admin, id)).status).toBe("committed");
+    expect(await OriginalPart.findOne({ where: { number } })).not.toBeNull();
+    expect((await send("post", `/api/imports/${id}/rollback`, {}, { cookie: admin })).status).toBe(200);
+  });
+});
+
+describe("large bodies", () => {
+  it("refuses a large body on every route but the import upload, before reading it", async () => {
+    // 200 KB of JSON to routes that take a few hundred bytes, signed in and not.
+    const big = { title: "x".repeat(200 * 1024) };
+    expect((await send("post", "/api/lists", big, { cookie: admin })).status).toBe(413);
+    expect((await send("post", "/api/auth/sign-in", { email: "a@example.org", password: "x".repeat(200 * 1024) })).status).toBe(413);
+  });
+
+  it("takes a large CSV on the import upload, which makes the origin check itself", async () => {
+    // About 600 KB: the sample's rows repeated, well above what any other route takes.
+    const header = SAMPLE.toString("utf8").split(/\r?\n/)[0];
+    const rows = Array.from({ length: 6000 }, (_, i) => `Pellworth & Sons,PW-BIG-${i},Test row ${i},bearing,6201-2RS,direct`);
+    const bytes = Buffer.from([header, ...rows].join("\r\n"));
+    expect(bytes.length).toBeGreaterThan(200 * 1024);
+    const response = await upload(admin, bytes, "big.csv");
+    expect(response.status).toBe(202);
+
+    const foreign = await request(APP_URL).post("/api/imports").set("Origin", "http://elsewhere.example").set("Cookie", admin).attach("file", Buffer.from("a,b\r\n1,2\r\n"), { filename: "x.csv", contentType: "text/csv" });
+    expect(foreign.status).toBe(403);
+    expect(foreign.body.error).toBe("forbidden_origin");
+  });
+});
