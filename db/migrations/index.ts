@@ -4,6 +4,7 @@ import * as community from "@/db/migrations/0003-community";
 import * as importsAndLists from "@/db/migrations/0004-imports-and-lists";
 import * as measuredListLines from "@/db/migrations/0005-measured-list-lines";
 import * as oneApprovedCross from "@/db/migrations/0006-one-approved-cross";
+import * as hashedSessions from "@/db/migrations/0007-hashed-sessions";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   { name: "0004-imports-and-lists", ...importsAndLists },
   { name: "0005-measured-list-lines", ...measuredListLines },
   { name: "0006-one-approved-cross", ...oneApprovedCross },
+  { name: "0007-hashed-sessions", ...hashedSessions },
 ];

@@ -204,3 +204,20 @@ describe("POST /api/auth/sign-up under concurrency", () => {
     expect(await User.count({ where: { email } })).toBe(1);
   });
 });
+
+describe("sessions at rest", () => {
+  it("keeps only a SHA-256 of the session token in the database, and the token still signs in", async () => {
+    const cookie = await signIn("club.member2@understudy.test");
+    const token = cookie.split("=")[1];
+    const [stored] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM sessions WHERE id = :token", { replacements: { token }, type: "SELECT" as never });
+    expect(Number(stored.n)).toBe(0);
+    // SHA-256 (FIPS 180-4) of the token, in hex, as PostgreSQL's own sha256() computes it.
+    const [hashed] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM sessions WHERE id = encode(sha256(convert_to(:token, 'UTF8')), 'hex')", {
+      replacements: { token },
+      type: "SELECT" as never,
+    });
+    expect(Number(hashed.n)).toBe(1);
+    const me = await send("get", "/api/auth/me", undefined, { cookie });
+    expect(me.body.user.email).toBe("club.member2@understudy.test");
+  });
+});
