@@ -14,6 +14,7 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { createWriteStream, existsSync, mkdirSync, rmSync } from "node:fs";
 import path from "node:path";
+import { hasExited, waitForExit } from "./children";
 import { startMailFake } from "./mail-fake";
 import { PostgresCluster } from "./postgres";
 import { startS3Fake } from "./s3-fake";
@@ -109,7 +110,7 @@ function stopEverything(): Promise<void> {
 
 async function shutDown(): Promise<void> {
   for (const child of children) {
-    if (child.pid && child.exitCode === null) {
+    if (child.pid && !hasExited(child)) {
       try {
         process.kill(-child.pid, "SIGTERM");
       } catch {
@@ -117,7 +118,7 @@ async function shutDown(): Promise<void> {
       }
     }
   }
-  await Promise.all(children.map((child) => (child.exitCode === null ? new Promise((r) => child.once("exit", r)) : null)));
+  await Promise.all(children.map((child) => waitForExit(child)));
   for (const cleanup of cleanups.reverse()) {
     try {
       await cleanup();
@@ -151,17 +152,12 @@ function run(command: string, args: string[], options: { logFile?: string } = {}
   return child;
 }
 
-function finished(child: ChildProcess): Promise<number> {
-  return new Promise((resolve) => {
-    if (child.exitCode !== null) resolve(child.exitCode);
-    else child.once("exit", (code, signal) => resolve(code ?? (signal ? 1 : 0)));
-  });
-}
+const finished = waitForExit;
 
 async function waitForHealth(url: string, child: ChildProcess, seconds = 90): Promise<void> {
   const deadline = Date.now() + seconds * 1000;
   while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error("The app server stopped while starting; see its output above.");
+    if (hasExited(child)) throw new Error("The app server stopped while starting; see its output above.");
     try {
       const response = await fetch(`${url}/api/health`);
       if (response.ok) return;
@@ -287,7 +283,11 @@ ${demo}
   Health of the services: ${shown}/api/health
   Press Ctrl-C to stop the app and its services.
 `);
-  return finished(server);
+  // The server ends on its own only when something went wrong (a crash, or it was killed): say so, stop the services
+  // and exit non-zero. Ctrl-C ends the whole run through the signal handlers instead.
+  const code = await finished(server);
+  console.error(`[understudy] the app server stopped (exit status ${code}); stopping the services.`);
+  return code === 0 ? 1 : code;
 }
 
 let exitCode = 1;
