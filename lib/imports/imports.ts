@@ -31,10 +31,25 @@ function shapeOf(row: Import): FileShape {
  * Stores the uploaded file as it came, before anything reads it, then works out its encoding, delimiter and column
  * titles and matches them to the catalogue's fields. The dry run is started by the caller.
  */
+/**
+ * Why the bytes are not a CSV file we can read, or null. UTF-8 and Windows-1252 text never hold a NUL byte; UTF-16
+ * text (what some spreadsheets save as "Unicode text") and binary files (a photo, a workbook) do.
+ */
+export function whyNotCsvText(bytes: Uint8Array): string | null {
+  const utf16Bom = (bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff);
+  if (utf16Bom) return "The file is UTF-16 text. Save it as CSV (UTF-8 or Windows-1252) and upload it again.";
+  if (bytes.includes(0)) {
+    return "The file holds binary data, so it is not a CSV file (a workbook or a photo, perhaps). Save it as CSV and upload it again.";
+  }
+  return null;
+}
+
 export async function createImport(actor: Actor, file: { name: string; bytes: Uint8Array }, target: ImportTarget, mappingId?: number): Promise<Import> {
   assertMayImport(actor, target);
   if (file.bytes.length === 0) throw new AppError("validation_failed", "The file is empty.", { field: "file" });
   if (file.bytes.length > IMPORT_MAX_BYTES) throw new AppError("validation_failed", `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB.`, { field: "file" });
+  const notText = whyNotCsvText(file.bytes);
+  if (notText) throw new AppError("validation_failed", notText, { field: "file" });
   const saved = mappingId ? await ImportMapping.findByPk(mappingId) : null;
   if (mappingId && !saved) throw new AppError("validation_failed", "There is no saved column mapping with that id.", { field: "mappingId" });
 
@@ -44,7 +59,8 @@ export async function createImport(actor: Actor, file: { name: string; bytes: Ui
     userId: actor.id,
     target,
     objectKey: key,
-    fileName: file.name.slice(0, 200) || "import.csv",
+    // Control characters (a NUL above all) cannot be stored as text and never belong in a file name.
+    fileName: file.name.replace(/[\u0000-\u001f\u007f]/g, "").slice(0, 200) || "import.csv",
     sizeBytes: file.bytes.length,
     sha256: createHash("sha256").update(file.bytes).digest("hex"),
     encoding: null,

@@ -290,3 +290,22 @@ describe("large bodies", () => {
     expect(foreign.body.error).toBe("forbidden_origin");
   });
 });
+
+describe("files that are not CSV text", () => {
+  it("refuses a binary file and a UTF-16 file with 400 on the file field, naming the reason", async () => {
+    const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d, 0x49, 0x48, 0x44, 0x52, 0x00, 0x01, 0x00, 0x00]);
+    const binary = await upload(admin, png, "photo.csv");
+    expect(binary.status).toBe(400);
+    expect(binary.body.field).toBe("file");
+
+    const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from("Maker,Part No.,Description\r\nCorvane Tractor Works,CV-1,Test\r\n", "utf16le")]);
+    const wide = await upload(admin, utf16, "wide.csv");
+    expect(wide.status).toBe(400);
+    expect(wide.body.field).toBe("file");
+    expect(wide.body.message).toMatch(/UTF-16/);
+
+    const nul = await upload(admin, Buffer.from("Maker,Part No.\r\nCorvane Tractor Works,CV-\u00001\r\n"), "nul.csv");
+    expect(nul.status).toBe(400);
+    expect(nul.body.field).toBe("file");
+  });
+});
