@@ -60,6 +60,7 @@ const testSettings: Record<string, string> = {
   MAIL_FAKE_DIR: ".data/test/mail",
   AUTH_MAX_FAILURES_PER_ACCOUNT: "5",
   AUTH_MAX_FAILURES_PER_ADDRESS: "20",
+  AUTH_MAX_FAILURES_ACCOUNT_WIDE: "12",
   AUTH_FAILURE_WINDOW_MINUTES: "15",
   // A short wait for a pooled connection, so that a request that would deadlock the pool fails the test quickly.
   DB_POOL_MAX: "10",

@@ -39,6 +39,7 @@ const schema = z.object({
 
   AUTH_MAX_FAILURES_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
   AUTH_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
+  AUTH_MAX_FAILURES_ACCOUNT_WIDE: z.coerce.number().int().min(1).default(50),
   AUTH_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
 
   // Per member, per rolling hour: proposals saved and photo uploads granted.

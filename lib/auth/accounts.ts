@@ -6,7 +6,7 @@ import { hashPassword, spendPasswordTime, verifyPassword } from "@/lib/auth/pass
 import { passwordWeakness } from "@/lib/auth/password-strength";
 import { accountUsable } from "@/lib/auth/demo-accounts";
 import type { Role } from "@/lib/auth/roles";
-import { assertSignInAllowed, clearAccountFailures, recordSignInFailure } from "@/lib/auth/throttle";
+import { clearAccountFailures, settleSuccessfulSignIn, takeSignInAttempt } from "@/lib/auth/throttle";
 import { env } from "@/lib/env";
 import { recordAudit } from "@/lib/audit/record";
 import { takeTurn } from "@/lib/concurrency/take-turn";
@@ -86,16 +86,13 @@ export async function signIn(input: {
   address: string;
 }): Promise<{ user: AccountView; sessionId: string }> {
   const keys = { account: input.email, address: input.address };
-  await assertSignInAllowed(keys);
+  await takeSignInAttempt(keys);
   const found = await User.findOne({ where: { email: input.email } });
   // A demo account in production is answered exactly like an unknown address.
   const user = found && accountUsable(found.email, env.APP_ENV) ? found : null;
   const valid = user ? await verifyPassword(user.passwordHash, input.password) : (await spendPasswordTime(input.password), false);
-  if (!user || !valid) {
-    await recordSignInFailure(keys);
-    throw new AppError("unauthenticated", SIGN_IN_REFUSED);
-  }
-  await clearAccountFailures(input.email);
+  if (!user || !valid) throw new AppError("unauthenticated", SIGN_IN_REFUSED);
+  await settleSuccessfulSignIn(keys);
   if (!user.emailVerifiedAt) {
     throw new AppError(
       "email_not_verified",

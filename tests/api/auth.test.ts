@@ -114,18 +114,41 @@ describe("failed sign-ins", () => {
     expect(wrong.body).toEqual(unknown.body);
   });
 
-  it("refuses the sixth fast failure on one account with 429, even with the right password", async () => {
+  it("refuses the sixth failure on one account from one address, even with the right password, but not its owner elsewhere", async () => {
     const email = uniqueEmail("hammered");
     await send("post", "/api/auth/sign-up", { email, password });
+    const stranger = uniqueAddress();
     for (let attempt = 1; attempt <= 5; attempt += 1) {
-      const response = await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: uniqueAddress() });
+      const response = await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: stranger });
       expect(response.status).toBe(401);
     }
-    const sixth = await send("post", "/api/auth/sign-in", { email, password: "guess-6" }, { address: uniqueAddress() });
+    const sixth = await send("post", "/api/auth/sign-in", { email, password: "guess-6" }, { address: stranger });
     expect(sixth.status).toBe(429);
     expect(Number(sixth.headers["retry-after"])).toBeGreaterThan(0);
-    const right = await send("post", "/api/auth/sign-in", { email, password }, { address: uniqueAddress() });
-    expect(right.status).toBe(429);
+    expect((await send("post", "/api/auth/sign-in", { email, password }, { address: stranger })).status).toBe(429);
+    // The owner, from their own address, is not locked out by the stranger's guesses (the account is not confirmed
+    // yet, so the right password answers 403, not 429).
+    expect((await send("post", "/api/auth/sign-in", { email, password }, { address: uniqueAddress() })).status).toBe(403);
+  });
+
+  it("slows guessing spread over many addresses with the account-wide limit", async () => {
+    const email = uniqueEmail("spread");
+    const limit = Number(process.env.AUTH_MAX_FAILURES_ACCOUNT_WIDE ?? 12);
+    for (let attempt = 1; attempt <= limit; attempt += 1) {
+      expect((await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: uniqueAddress() })).status).toBe(401);
+    }
+    expect((await send("post", "/api/auth/sign-in", { email, password: "guess" }, { address: uniqueAddress() })).status).toBe(429);
+  });
+
+  it("checks no more than the limit of forty wrong passwords sent at once", async () => {
+    const address = uniqueAddress();
+    const email = uniqueEmail("flood");
+    const responses = await Promise.all(
+      Array.from({ length: 40 }, (_, i) => send("post", "/api/auth/sign-in", { email, password: `guess-${i}` }, { address })),
+    );
+    const checked = responses.filter((r) => r.status === 401).length;
+    expect(responses.every((r) => r.status === 401 || r.status === 429)).toBe(true);
+    expect(checked).toBe(5);
   });
 
   it("refuses an address that fails on many accounts, once it passes the per-address limit", async () => {
