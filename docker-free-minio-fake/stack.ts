@@ -61,6 +61,8 @@ const testSettings: Record<string, string> = {
   AUTH_MAX_FAILURES_PER_ACCOUNT: "5",
   AUTH_MAX_FAILURES_PER_ADDRESS: "20",
   AUTH_MAX_FAILURES_ACCOUNT_WIDE: "12",
+  // The tests play a trusted proxy, so that each request can say which client address it comes from.
+  TRUSTED_PROXIES: "127.0.0.1",
   AUTH_FAILURE_WINDOW_MINUTES: "15",
   // A short wait for a pooled connection, so that a request that would deadlock the pool fails the test quickly.
   DB_POOL_MAX: "10",
@@ -252,9 +254,9 @@ async function main(): Promise<number> {
     children = children.filter((child) => child !== build);
   }
 
-  const server = run(process.execPath, [nextBin, mode === "dev" ? "dev" : "start", "-p", String(env.PORT), "-H", "127.0.0.1"], {
-    logFile: serverLog,
-  });
+  // `next dev` for development; otherwise server.ts, which tells the app who opened each connection.
+  const serverArgs = mode === "dev" ? [nextBin, "dev", "-p", String(env.PORT), "-H", "127.0.0.1"] : [path.join(root, "node_modules/tsx/dist/cli.mjs"), "server.ts"];
+  const server = run(process.execPath, serverArgs, { logFile: serverLog });
   await waitForHealth(`http://127.0.0.1:${env.PORT}`, server);
 
   if (mode === "test") {

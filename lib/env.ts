@@ -41,6 +41,11 @@ const schema = z.object({
   AUTH_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
   AUTH_MAX_FAILURES_ACCOUNT_WIDE: z.coerce.number().int().min(1).default(50),
   AUTH_FAILURE_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  // Reverse proxies in front of the app whose X-Forwarded-For is believed (comma-separated addresses); none by default.
+  TRUSTED_PROXIES: z
+    .string()
+    .default("")
+    .transform((value) => value.split(",").map((address) => address.trim()).filter(Boolean)),
 
   // Per member, per rolling hour: proposals saved and photo uploads granted.
   SUBMISSIONS_PER_HOUR: z.coerce.number().int().min(1).default(20),
