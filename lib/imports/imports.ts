@@ -266,7 +266,7 @@ const STALLED_MS = 10 * 60 * 1000;
 // A commit holds an advisory lock in this space, keyed by the import's id, while its transaction runs.
 const COMMIT_LOCK_SPACE = 1651;
 // The moment between claiming a commit and its transaction taking the lock.
-const COMMIT_START_GRACE_MS = 15_000;
+const COMMIT_START_GRACE_MS = 5_000;
 
 /** Whether a commit's transaction is still alive: its advisory lock is held by some session. */
 async function commitAlive(id: number): Promise<boolean> {

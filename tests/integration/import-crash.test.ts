@@ -1,0 +1,74 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
+import request from "supertest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { sequelize } from "@/db";
+import { send, signIn } from "../helpers/api";
+
+// A second app server on its own port, over the same database and storage, that this test kills mid-commit (the
+// server npm test started serves the other tests and the retry).
+const PORT = 3109;
+const SECOND = `http://127.0.0.1:${PORT}`;
+let server: ChildProcess | undefined;
+let admin = "";
+
+afterAll(async () => {
+  if (server?.pid && server.exitCode === null && server.signalCode === null) process.kill(-server.pid, "SIGKILL");
+  await sequelize.close();
+});
+
+beforeAll(async () => {
+  admin = await signIn("admin@understudy.test");
+  server = spawn(process.execPath, [path.resolve("node_modules/tsx/dist/cli.mjs"), "server.ts"], {
+    env: { ...process.env, PORT: String(PORT) },
+    detached: true,
+    stdio: "ignore",
+  });
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    const up = await fetch(`${SECOND}/api/health`).then((r) => r.ok).catch(() => false);
+    if (up) break;
+    if (Date.now() > deadline) throw new Error("The second app server did not start");
+    await new Promise((r) => setTimeout(r, 300));
+  }
+}, 90_000);
+
+async function status(id: number) {
+  return (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body as { status: string; progress: { rows?: number } | null; errorMessage: string | null };
+}
+
+async function until(id: number, done: (s: Awaited<ReturnType<typeof status>>) => boolean, seconds: number) {
+  const deadline = Date.now() + seconds * 1000;
+  for (;;) {
+    const s = await status(id);
+    if (done(s)) return s;
+    if (Date.now() > deadline) throw new Error(`import ${id} is still ${s.status}`);
+    await new Promise((r) => setTimeout(r, 100));
+  }
+}
+
+describe("an import commit whose server is killed", () => {
+  it("leaves the catalogue untouched and can be committed again at once on the server that is still up", async () => {
+    const stamp = Date.now() % 1_000_000;
+    const rows = Array.from({ length: 30_000 }, (_, i) => `Corvane Tractor Works,CV-K${stamp}-${i},Test crash row ${i},bearing,6201-2RS,direct`);
+    const csv = Buffer.from(["Maker,Part No.,Description,Kind,Standard designation,Fit", ...rows].join("\r\n"));
+    const uploaded = await request(SECOND).post("/api/imports").set("Origin", SECOND).set("Cookie", admin).attach("file", csv, { filename: "crash.csv", contentType: "text/csv" });
+    expect(uploaded.status).toBe(202);
+    const id = uploaded.body.id as number;
+    await until(id, (s) => s.status === "parsed", 120);
+
+    expect((await request(SECOND).post(`/api/imports/${id}/commit`).set("Origin", SECOND).set("Cookie", admin).send({})).status).toBe(202);
+    await until(id, (s) => s.status === "committing" && (s.progress?.rows ?? 0) > 0, 60);
+    process.kill(-server!.pid!, "SIGKILL");
+
+    // Nothing of the cut-off commit landed, and the import is ready to commit again within seconds, not minutes.
+    const recovered = await until(id, (s) => s.status === "parsed", 20);
+    expect(recovered.errorMessage).toMatch(/interrupted/);
+    const [{ n }] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM original_parts WHERE number LIKE :p", { replacements: { p: `CV-K${stamp}-%` }, type: "SELECT" as never });
+    expect(Number(n)).toBe(0);
+
+    expect((await send("post", `/api/imports/${id}/commit`, {}, { cookie: admin })).status).toBe(202);
+    expect((await until(id, (s) => s.status !== "committing", 120)).status).toBe("committed");
+    expect((await send("post", `/api/imports/${id}/rollback`, {}, { cookie: admin })).status).toBe(200);
+  }, 300_000);
+});
