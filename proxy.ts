@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { SESSION_COOKIE } from "@/lib/auth/cookie";
+import { contentSecurityPolicy, photoStoreOrigin } from "@/lib/http/csp";
 import { isOwnOrigin, MAX_BODY_BYTES } from "@/lib/http/origin";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
@@ -46,7 +47,13 @@ export function proxy(request: NextRequest) {
     return NextResponse.next();
   }
 
-  const response = NextResponse.next();
+  // A fresh nonce for every page: Next reads it from the request's policy and puts it on its own scripts.
+  const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
+  const policy = contentSecurityPolicy(nonce, { development: process.env.NODE_ENV === "development", photoStore: photoStoreOrigin(process.env.S3_ENDPOINT) });
+  const requestHeaders = new Headers(request.headers);
+  requestHeaders.set("content-security-policy", policy);
+  const response = NextResponse.next({ request: { headers: requestHeaders } });
+  response.headers.set("Content-Security-Policy", policy);
   const sessionId = request.cookies.get(SESSION_COOKIE)?.value;
   if (request.method === "GET" && sessionId) {
     response.cookies.set(SESSION_COOKIE, sessionId, {

@@ -9,10 +9,25 @@ describe("security headers", () => {
       expect(csp).toContain("frame-ancestors 'none'");
       expect(csp).toContain("object-src 'none'");
       expect(csp).toContain("default-src 'self'");
+      expect(csp).toMatch(/script-src 'self' 'nonce-[A-Za-z0-9+/=]+' 'strict-dynamic'/);
+      expect(csp).not.toContain("'unsafe-inline' 'strict-dynamic'");
       expect(response.headers["x-content-type-options"]).toBe("nosniff");
       expect(response.headers["referrer-policy"]).toBe("strict-origin-when-cross-origin");
       // HSTS belongs to production (over TLS) only; the test server is plain http.
       expect(response.headers["strict-transport-security"]).toBeUndefined();
     });
   }
+});
+
+describe("the page's script nonce", () => {
+  it("is new for every request and on every script Next puts in the page", async () => {
+    const [a, b] = await Promise.all([send("get", "/measure/seal"), send("get", "/measure/seal")]);
+    const nonceOf = (csp: string) => /'nonce-([^']+)'/.exec(csp)?.[1];
+    const first = nonceOf(String(a.headers["content-security-policy"]));
+    expect(first).toBeTruthy();
+    expect(first).not.toBe(nonceOf(String(b.headers["content-security-policy"])));
+    const scripts = [...a.text.matchAll(/<script\b[^>]*>/g)].map((m) => m[0]);
+    expect(scripts.length).toBeGreaterThan(0);
+    for (const tag of scripts) expect(tag).toContain(`nonce="${first}"`);
+  });
 });
