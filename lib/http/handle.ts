@@ -80,8 +80,11 @@ const OUTAGE_CODES = new Set(["57P01", "57P02", "57P03", "08000", "08001", "0800
 function isDatabaseUnavailable(error: unknown): boolean {
   if (error instanceof ConnectionError) return true;
   if (error instanceof DatabaseError) {
-    const code = (error.parent as { code?: string } | undefined)?.code;
-    return code !== undefined && OUTAGE_CODES.has(code);
+    const parent = error.parent as { code?: string; message?: string } | undefined;
+    if (parent?.code !== undefined && OUTAGE_CODES.has(parent.code)) return true;
+    // A pooled connection cut under a query (the server restarted, the network dropped) has no SQLSTATE, only the
+    // driver's words or the socket's error code.
+    return /Connection terminated|connection error|not queryable|ECONNRESET|EPIPE|ECONNREFUSED/i.test(`${parent?.code ?? ""} ${parent?.message ?? ""}`);
   }
   return false;
 }
