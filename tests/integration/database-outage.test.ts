@@ -1,19 +1,18 @@
-import { spawn, type ChildProcess } from "node:child_process";
 import net from "node:net";
-import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { startSecondServer } from "../helpers/second-server";
 
 // A second app server whose database connections pass through a forwarder this test controls: closing the
 // forwarder (and cutting the connections through it) is the database going away, as in a restart or an outage,
 // without touching the database the other tests use. Opening it again is the database coming back.
 const APP_PORT = 3108;
 const FORWARD_PORT = 54398;
-const APP = `http://127.0.0.1:${APP_PORT}`;
+let APP = "";
 const target = new URL(process.env.DATABASE_URL!);
 
 let forwarder: net.Server | null = null;
 const sockets = new Set<net.Socket>();
-let server: ChildProcess | undefined;
+let second: Awaited<ReturnType<typeof startSecondServer>> | undefined;
 
 function openForwarder(): Promise<void> {
   forwarder = net.createServer((client) => {
@@ -42,20 +41,12 @@ beforeAll(async () => {
   await openForwarder();
   const url = new URL(process.env.DATABASE_URL!);
   url.port = String(FORWARD_PORT);
-  server = spawn(process.execPath, [path.resolve("node_modules/tsx/dist/cli.mjs"), "server.ts"], {
-    env: { ...process.env, PORT: String(APP_PORT), DATABASE_URL: url.toString(), DB_POOL_ACQUIRE_MS: "3000" },
-    detached: true,
-    stdio: ["ignore", "ignore", process.env.OUTAGE_LOG ? "inherit" : "ignore"],
-  });
-  const deadline = Date.now() + 60_000;
-  while (!(await fetch(`${APP}/api/health`).then((r) => r.ok).catch(() => false))) {
-    if (Date.now() > deadline) throw new Error("The second app server did not start");
-    await new Promise((r) => setTimeout(r, 300));
-  }
+  second = await startSecondServer(APP_PORT, { DATABASE_URL: url.toString(), DB_POOL_ACQUIRE_MS: "3000" });
+  APP = second.url;
 }, 90_000);
 
 afterAll(async () => {
-  if (server?.pid && server.exitCode === null && server.signalCode === null) process.kill(-server.pid, "SIGKILL");
+  second?.kill();
   await closeForwarder();
 });
 

@@ -1,36 +1,24 @@
-import { spawn, type ChildProcess } from "node:child_process";
-import path from "node:path";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { sequelize } from "@/db";
 import { send, signIn } from "../helpers/api";
+import { startSecondServer } from "../helpers/second-server";
 
 // A second app server on its own port, over the same database and storage, that this test kills mid-commit (the
 // server npm test started serves the other tests and the retry).
-const PORT = 3109;
-const SECOND = `http://127.0.0.1:${PORT}`;
-let server: ChildProcess | undefined;
+let second: Awaited<ReturnType<typeof startSecondServer>>;
+let SECOND = "";
 let admin = "";
 
 afterAll(async () => {
-  if (server?.pid && server.exitCode === null && server.signalCode === null) process.kill(-server.pid, "SIGKILL");
+  second?.kill();
   await sequelize.close();
 });
 
 beforeAll(async () => {
   admin = await signIn("admin@understudy.test");
-  server = spawn(process.execPath, [path.resolve("node_modules/tsx/dist/cli.mjs"), "server.ts"], {
-    env: { ...process.env, PORT: String(PORT) },
-    detached: true,
-    stdio: "ignore",
-  });
-  const deadline = Date.now() + 60_000;
-  for (;;) {
-    const up = await fetch(`${SECOND}/api/health`).then((r) => r.ok).catch(() => false);
-    if (up) break;
-    if (Date.now() > deadline) throw new Error("The second app server did not start");
-    await new Promise((r) => setTimeout(r, 300));
-  }
+  second = await startSecondServer(3109);
+  SECOND = second.url;
 }, 90_000);
 
 async function status(id: number) {
@@ -59,7 +47,7 @@ describe("an import commit whose server is killed", () => {
 
     expect((await request(SECOND).post(`/api/imports/${id}/commit`).set("Origin", SECOND).set("Cookie", admin).send({})).status).toBe(202);
     await until(id, (s) => s.status === "committing" && (s.progress?.rows ?? 0) > 0, 60);
-    process.kill(-server!.pid!, "SIGKILL");
+    second.kill();
 
     // Nothing of the cut-off commit landed, and the import is ready to commit again within seconds, not minutes.
     const recovered = await until(id, (s) => s.status === "parsed", 20);
