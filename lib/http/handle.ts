@@ -2,12 +2,11 @@ import { ConnectionError, DatabaseError } from "sequelize";
 import { AppError, errorBody, type ErrorBody } from "@/lib/errors";
 import { MAX_BODY_BYTES } from "@/lib/http/origin";
 
-const MAX_JSON_BYTES = MAX_BODY_BYTES;
 
 /** Reads a JSON body with a size cap, so an oversized or malformed body is a 400 and never reaches the parser whole. */
 export async function readJson(request: Request): Promise<unknown> {
   const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > MAX_JSON_BYTES) throw tooLarge();
+  if (declared > MAX_BODY_BYTES) throw tooLarge();
   const reader = request.body?.getReader();
   if (!reader) return {};
   const chunks: Uint8Array[] = [];
@@ -16,7 +15,7 @@ export async function readJson(request: Request): Promise<unknown> {
     const { done, value } = await reader.read();
     if (done) break;
     size += value.byteLength;
-    if (size > MAX_JSON_BYTES) {
+    if (size > MAX_BODY_BYTES) {
       await reader.cancel();
       throw tooLarge();
     }
@@ -65,7 +64,7 @@ function assertPlainText(value: unknown, path: string[]): void {
 }
 
 function tooLarge(): AppError {
-  return new AppError("validation_failed", `The request body is larger than ${MAX_JSON_BYTES / 1024} KB.`, {
+  return new AppError("validation_failed", `The request body is larger than ${MAX_BODY_BYTES / 1024} KB.`, {
     field: "body",
   });
 }

@@ -148,7 +148,8 @@ export async function getList(access: { userId: string } | { token: string }, id
   );
   const equivalents = await equivalentsFor(lines.flatMap((l) => (l.part_id === null ? [] : [l.part_id])));
   const view: ListLine[] = lines.map((l) => {
-    if (l.part_id === null || l.standard_item) return measuredLine(l.id, l.standard_item!, l.quantity, l.notes);
+    // The table's check constraint: a line has a factory part or a measured item, never both.
+    if (l.part_id === null) return measuredLine(l.id, l.standard_item!, l.quantity, l.notes);
     const options = equivalents.get(l.part_id) ?? [];
     const chosen = options.find((o) => o.standardPartId === l.standard_part_id) ?? options[0] ?? null;
     const warnings: string[] = [];
@@ -209,6 +210,7 @@ export async function getList(access: { userId: string } | { token: string }, id
 function measuredLine(id: number, item: StandardItem, quantity: number, notes: string | null): ListLine {
   const category = CATEGORY_OF_KIND[item.kind];
   const chosen: Equivalent = {
+    // Not a catalogue row: 0 is no standard part's id, and a measured line offers no other equivalents to pick.
     standardPartId: 0,
     designation: item.designation,
     kind: item.kind,

@@ -47,20 +47,27 @@ export function scoreDimensions(measured: MeasuredDimension[], nominalMm: Record
     const tolerances = Math.abs(deviationMm) / dim.toleranceMm;
     if (tolerances > CUTOFF * (towardWear ? 2 : 1)) return null;
     total += towardWear ? tolerances / 2 : tolerances;
-    // Nominal sizes keep their exact decimal (5/32 in is 0.15625 in); readings and deviations are at the trade's precision.
-    deviations.push({
-      name: dim.name,
-      label: dim.label,
-      nominal: round(fromMm(nominal, unit), unit === "in" ? 5 : 2),
-      nominalLabel: unit === "in" ? inchLabel(fromMm(nominal, unit)) : mmLabel(nominal),
-      measured: round(fromMm(dim.measuredMm, unit), TRADE_DECIMALS[unit]),
-      deviation: round(fromMm(deviationMm, unit), TRADE_DECIMALS[unit]),
-      withinTolerance: tolerances <= (towardWear ? 2 : 1),
-    });
+    deviations.push(deviationOf(dim, nominal, unit, tolerances <= (towardWear ? 2 : 1)));
   }
   if (deviations.length === 0) return null;
   const score = Math.max(0, 1 - total / (deviations.length * CUTOFF));
   return { score: round(score, 3), deviations, withinTolerance: deviations.every((d) => d.withinTolerance) };
+}
+
+/**
+ * One measured dimension against one nominal size, in the unit asked for. Nominal sizes keep their exact decimal
+ * (5/32 in is 0.15625 in); readings and deviations are at the trade's precision.
+ */
+export function deviationOf(dim: MeasuredDimension, nominalMm: number, unit: LengthUnit, withinTolerance: boolean): Deviation {
+  return {
+    name: dim.name,
+    label: dim.label,
+    nominal: round(fromMm(nominalMm, unit), unit === "in" ? 5 : 2),
+    nominalLabel: unit === "in" ? inchLabel(fromMm(nominalMm, unit)) : mmLabel(nominalMm),
+    measured: round(fromMm(dim.measuredMm, unit), TRADE_DECIMALS[unit]),
+    deviation: round(fromMm(dim.measuredMm - nominalMm, unit), TRADE_DECIMALS[unit]),
+    withinTolerance,
+  };
 }
 
 /** "bore 0.02 mm over, OD exact, width 0.1 mm under": the deviations in words. */

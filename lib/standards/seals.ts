@@ -1,4 +1,4 @@
-import { byScore, describeDeviations, scoreDimensions, type Deviation } from "@/lib/standards/match";
+import { byScore, describeDeviations, deviationOf, scoreDimensions, type Deviation, type MeasuredDimension } from "@/lib/standards/match";
 import { nearMiss, nearMissFor, nominalCandidates } from "@/lib/standards/nominal";
 import {
   INCH_PRESS_FIT,
@@ -91,7 +91,7 @@ export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[];
     candidates.push({ ...seal, score: scored.score, deviations: scored.deviations, explanation: describeDeviations(scored.deviations, input.unit), orderAs, warnings });
   }
   candidates.sort(byScore);
-  if (candidates.length === 0) candidates.push(...nearestSeals(input, orderAs, nominalCandidates(input.shaftMm, input.unit, "shaft")[0].system));
+  if (candidates.length === 0) candidates.push(...nearestSeals(measured, input.unit, orderAs, nominalCandidates(input.shaftMm, input.unit, "shaft")[0].system));
   for (const inch of candidates.filter((c) => c.system === "inch")) {
     for (const metric of candidates.filter((c) => c.system === "metric")) {
       const miss = nearMiss(inch.shaftMm / MM_PER_INCH, metric.shaftMm);
@@ -112,33 +112,20 @@ export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[];
  * The tabulated sizes nearest a measurement that none of them matches: shown as "sizes nearby", never as a match, so a
  * person sees what the tables hold while ordering by the worked-out size.
  */
-function nearestSeals(input: SealMatchInput, orderAs: string, system: "inch" | "metric"): SealCandidate[] {
-  const distance = (seal: StandardSeal) =>
-    Math.abs(seal.shaftMm - input.shaftMm) + Math.abs(seal.boreMm - input.boreMm) + (input.widthMm ? Math.abs(seal.widthMm - input.widthMm) / 4 : 0);
+function nearestSeals(measured: MeasuredDimension[], unit: LengthUnit, orderAs: string, system: "inch" | "metric"): SealCandidate[] {
+  const nominalOf = (seal: StandardSeal): Record<string, number> => ({ shaft: seal.shaftMm, bore: seal.boreMm, width: seal.widthMm });
+  // Width counts a quarter: a seat takes a seal a little narrower, and width is the size least often known.
+  const distance = (seal: StandardSeal) => measured.reduce((sum, dim) => sum + Math.abs(nominalOf(seal)[dim.name] - dim.measuredMm) * (dim.name === "width" ? 0.25 : 1), 0);
   return [...ALL_SEALS]
     .sort((a, b) => Number(b.system === system) - Number(a.system === system) || distance(a) - distance(b))
     .slice(0, 3)
     .map((seal) => {
-      const deviations = (["shaft", "bore", "width"] as const)
-        .filter((name) => name !== "width" || input.widthMm !== undefined)
-        .map((name) => {
-          const nominal = { shaft: seal.shaftMm, bore: seal.boreMm, width: seal.widthMm }[name];
-          const measured = { shaft: input.shaftMm, bore: input.boreMm, width: input.widthMm ?? 0 }[name];
-          return {
-            name,
-            label: name,
-            nominal: round(fromMm(nominal, input.unit), input.unit === "in" ? 5 : 2),
-            nominalLabel: input.unit === "in" ? inchLabel(fromMm(nominal, input.unit)) : `${round(nominal, 2)} mm`,
-            measured: tradeRound(fromMm(measured, input.unit), input.unit),
-            deviation: tradeRound(fromMm(measured - nominal, input.unit), input.unit),
-            withinTolerance: false,
-          };
-        });
+      const deviations = measured.map((dim) => deviationOf(dim, nominalOf(seal)[dim.name], unit, false));
       return {
         ...seal,
         score: 0,
         deviations,
-        explanation: describeDeviations(deviations, input.unit),
+        explanation: describeDeviations(deviations, unit),
         orderAs,
         warnings: ["Not this size: the nearest in the table, shown for comparison. Order by the sizes worked out above."],
       };
