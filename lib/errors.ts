@@ -25,6 +25,8 @@ export interface AppErrorOptions {
   field?: string;
   fields?: Record<string, string>;
   retryAfterSeconds?: number;
+  /** What the person can pick from to go on (several parts with one number, the serial ranges of an assembly). */
+  choices?: unknown[];
 }
 
 /** The one error type that lib/ throws for the caller to see; anything else is a bug and becomes a 500. */
@@ -49,14 +51,16 @@ export interface ErrorBody {
   message: string;
   field?: string;
   fields?: Record<string, string>;
+  choices?: unknown[];
 }
 
 export function errorBody(error: AppError): ErrorBody {
-  const { field, fields } = error.options;
+  const { field, fields, choices } = error.options;
   return {
     error: error.code,
     message: error.message,
     ...(field ? { field } : {}),
     ...(fields ? { fields } : {}),
+    ...(choices ? { choices } : {}),
   };
 }

@@ -41,7 +41,7 @@ export default async function ProposalsPage() {
               <div className="flex flex-wrap items-center gap-3">
                 <StatusBadge status={r.status} />
                 <span className="text-sm text-ink-soft">
-                  #{r.id} · sent {date(r.createdAt)}
+                  <Link href={`/proposals/${r.id}`}>#{r.id}, open it</Link> · sent {date(r.createdAt)}
                   {r.confirmations > 0 && ` · ${r.confirmations} ${r.confirmations === 1 ? "member" : "members"} fitted the same`}
                 </span>
               </div>

@@ -1,6 +1,7 @@
 "use client";
 
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
@@ -33,7 +34,7 @@ function Progress({ view }: { view: ImportView }) {
   );
 }
 
-const COUNT_WORDS: Array<[keyof ImportCounts, string]> = [
+const COUNT_WORDS: Array<[Exclude<keyof ImportCounts, "newMakerNames" | "newStandardPartNames">, string]> = [
   ["newParts", "new parts"],
   ["newCrosses", "new crosses"],
   ["updates", "updates"],
@@ -58,7 +59,28 @@ function Counts({ counts, target, title }: { counts: ImportCounts; target: Impor
           </div>
         ))}
       </dl>
+      <NewNames title="New makers" names={counts.newMakerNames} total={counts.newMakers} />
+      <NewNames title="New standard parts" names={counts.newStandardPartNames} total={counts.newStandardParts} />
+      {target === "catalogue" && <p className="text-sm text-ink-soft">No machines are added by an import: rows naming a machine the catalogue lacks are rejected.</p>}
     </section>
+  );
+}
+
+/** The names behind a count, so an admin can spot a misspelt maker before it becomes a second maker. */
+function NewNames({ title, names = [], total }: { title: string; names?: string[]; total: number }) {
+  if (total === 0) return null;
+  return (
+    <div className="text-sm">
+      <h3 className="font-bold">{title}</h3>
+      <ul className="flex flex-wrap gap-2" data-testid={`names-${title.toLowerCase().replace(/\s+/g, "-")}`}>
+        {names.map((n) => (
+          <li key={n} className="num rounded border border-rule bg-ground-raised px-2 py-0.5">
+            {n}
+          </li>
+        ))}
+      </ul>
+      {total > names.length && <p className="text-ink-soft">and {(total - names.length).toLocaleString("en-GB")} more.</p>}
+    </div>
   );
 }
 
@@ -164,6 +186,7 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
     refreshInterval: (latest) => (latest && BUSY.includes(latest.status) ? 700 : 0),
   });
   const view = data ?? initial;
+  const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const busyOnServer = BUSY.includes(view.status);
@@ -181,9 +204,7 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
           {view.encoding ? `, ${view.encoding}, “${view.delimiter === "\t" ? "tab" : view.delimiter}” between columns` : ""} · sent by {view.by ?? "?"} on{" "}
           {new Date(view.createdAt).toUTCString().slice(0, 22)}
         </p>
-        <p className="text-sm text-ink-soft">
-          The original file is kept as it came in storage, under <span className="num">{view.objectKey}</span>.
-        </p>
+        <p className="text-sm text-ink-soft">The original file is kept as it was sent, so what the import did can be checked against it later.</p>
       </header>
 
       {busyOnServer && <Progress view={view} />}
@@ -198,6 +219,12 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
         </Notice>
       )}
 
+      {view.status === "rolled_back" && (
+        <Notice tone="caution" role="status">
+          Rolled back on {new Date(view.rolledBackAt ?? view.createdAt).toUTCString().slice(0, 22)}: everything this import added was removed and everything it changed was put
+          back. The figures below are what the commit had done.
+        </Notice>
+      )}
       {view.committedCounts && <Counts counts={view.committedCounts} target={view.target} title="What the commit did" />}
       {!view.committedCounts && view.counts && <Counts counts={view.counts} target={view.target} title="Dry run: what a commit would do" />}
 
@@ -223,6 +250,23 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
             Commit {(view.counts.rows - view.counts.rejected).toLocaleString("en-GB")} rows
           </Button>
         </div>
+      )}
+
+      {!view.committedAt && !busyOnServer && (
+        <p>
+          <button
+            type="button"
+            className="underline"
+            onClick={async () => {
+              if (!window.confirm("Discard this import? Its dry run, rejected rows and the file are thrown away; the catalogue is not touched.")) return;
+              const result = await sendJson("DELETE", `/api/imports/${view.id}`);
+              if (result.ok) router.push("/admin/imports?discarded=1");
+              else setError(result.error.message);
+            }}
+          >
+            Discard this import
+          </button>
+        </p>
       )}
 
       {view.status === "committed" && <WrittenRows id={view.id} />}

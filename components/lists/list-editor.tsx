@@ -11,7 +11,7 @@ import { Notice } from "@/components/ui/notice";
 import { SortableTable } from "@/components/ui/sortable-table";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import { sendJson } from "@/lib/http/post-json";
-import type { ListLine, ListView } from "@/lib/lists/lists";
+import type { ListLine, ListView, NumberChoice, SerialChoice } from "@/lib/lists/lists";
 
 const WIDE = "(min-width: 768px)";
 const subscribeWide = (onChange: () => void) => {
@@ -31,26 +31,47 @@ async function fetchList(url: string): Promise<ListView> {
   return response.json();
 }
 
-function NotesCell({ line, save }: { line: ListLine; save: (notes: string) => Promise<string | null> }) {
-  const [value, setValue] = useState(line.notes ?? "");
+/** A text field of a line saved when it loses focus: notes, supplier, supplier's number, unit price. */
+function TextCell({
+  line,
+  label,
+  value: saved,
+  save,
+  placeholder,
+  maxLength,
+  width = "w-36",
+  numeric = false,
+}: {
+  line: ListLine;
+  label: string;
+  value: string | null;
+  save: (value: string) => Promise<string | null>;
+  placeholder?: string;
+  maxLength: number;
+  width?: string;
+  numeric?: boolean;
+}) {
+  const [value, setValue] = useState(saved ?? "");
   const [error, setError] = useState<string | null>(null);
+  const id = `${label.replace(/\W+/g, "-").toLowerCase()}-${line.id}`;
   return (
     <div>
       <input
-        aria-label={`Notes for ${line.number}`}
+        aria-label={`${label} for ${line.number}`}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `notes-${line.id}-error` : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
         value={value}
-        maxLength={500}
-        placeholder="e.g. customer supplies"
+        maxLength={maxLength}
+        inputMode={numeric ? "decimal" : undefined}
+        placeholder={placeholder}
         onChange={(e) => setValue(e.target.value)}
         onBlur={async () => {
-          if (value === (line.notes ?? "")) return;
+          if (value === (saved ?? "")) return;
           setError(await save(value));
         }}
-        className={`w-36 rounded-md border-2 bg-ground px-2 py-1 text-sm ${error ? "border-caution" : "border-rule-strong"}`}
+        className={`${width} rounded-md border-2 bg-ground px-2 py-1 text-sm ${numeric ? "num" : ""} ${error ? "border-caution" : "border-rule-strong"}`}
       />
-      {error && <FieldError id={`notes-${line.id}-error`}>{error}</FieldError>}
+      {error && <FieldError id={`${id}-error`}>{error}</FieldError>}
     </div>
   );
 }
@@ -90,15 +111,49 @@ function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number)
   );
 }
 
-/** The job list as its owner works on it: add by number, edit quantities inline, pick equivalents, share, export. */
+/** What the editor says after an action, with the buttons to go on where the server offered choices. */
+type Message = {
+  tone: "success" | "caution";
+  text: string;
+  numbers?: NumberChoice[];
+  serials?: { line: ListLine; choices: SerialChoice[] };
+  undo?: { lineId: number; number: string };
+};
+
+/** How long the Undo button stays after a removal (the server keeps the line longer). */
+const UNDO_SHOWN_MS = 10_000;
+
+/** The job list as its owner works on it: add by number, edit lines inline, pick equivalents, share, export. */
 export function ListEditor({ initial }: { initial: ListView }) {
   const { data, mutate } = useSWR(`/api/lists/${initial.id}`, fetchList, { fallbackData: initial, revalidateOnFocus: false });
   const view = data ?? initial;
   const wide = useWideScreen();
   const [number, setNumber] = useState("");
   const [quantity, setQuantity] = useState("1");
-  const [message, setMessage] = useState<{ tone: "success" | "caution"; text: string } | null>(null);
+  const [message, setMessage] = useState<Message | null>(null);
+  useEffect(() => {
+    if (!message?.undo) return;
+    const timer = setTimeout(() => setMessage((m) => (m?.undo ? null : m)), UNDO_SHOWN_MS);
+    return () => clearTimeout(timer);
+  }, [message]);
   const [adding, setAdding] = useState(false);
+
+  /** Adds by typed number or by a chosen part; says what the number was read as, or offers the parts it may be. */
+  const add = async (item: { number: string } | { partId: number }): Promise<boolean> => {
+    setMessage(null);
+    const result = await sendJson<{ superseded: boolean; merged: boolean; read: string | null; latestNumber: string | null }>("POST", `/api/lists/${view.id}/lines`, { ...item, quantity: Number(quantity) || 1 });
+    if (!result.ok) {
+      setMessage({ tone: "caution", text: result.error.message, numbers: result.error.field === "number" ? (result.error.choices as NumberChoice[] | undefined) : undefined });
+      return false;
+    }
+    const { merged, superseded, read, latestNumber } = result.data;
+    const readAs = read ? `Read as ${read}. ` : "";
+    const text = merged ? "Already on the list: its quantity was raised." : superseded ? `That number is superseded: added as ${latestNumber}.` : "Added.";
+    setMessage({ tone: "success", text: `${readAs}${text}` });
+    setQuantity("1");
+    await mutate();
+    return true;
+  };
   const [shareUrl, setShareUrl] = useState<string | null>(initial.shareToken ? `/lists/shared/${initial.id}?token=${initial.shareToken}` : null);
   const [origin, setOrigin] = useState("");
   useEffect(() => setOrigin(window.location.origin), []);
@@ -110,20 +165,33 @@ export function ListEditor({ initial }: { initial: ListView }) {
       await mutate();
       return result.ok ? null : result.error.message;
     };
-    const addAssembly = async (line: ListLine) => {
-      const result = await sendJson<{ added: number; machine: string; assembly: string }>("POST", `/api/lists/${view.id}/lines/${line.id}/assembly`, {});
-      await mutate();
-      setMessage(
-        result.ok
-          ? { tone: "success", text: result.data.added === 0 ? `Everything from the ${result.data.assembly} (${result.data.machine}) is already on the list.` : `Added ${result.data.added} more ${result.data.added === 1 ? "part" : "parts"} of the ${result.data.assembly} (${result.data.machine}).` }
-          : { tone: "caution", text: result.error.message },
+    const addAssembly = async (line: ListLine, serial?: string) => {
+      const result = await sendJson<{ added: number; machine: string; assembly: string; serial: string | null; serials: string | null; skipped: string[] }>(
+        "POST",
+        `/api/lists/${view.id}/lines/${line.id}/assembly`,
+        serial ? { serial } : {},
       );
+      await mutate();
+      if (!result.ok) {
+        const choices = result.error.field === "serial" ? (result.error.choices as SerialChoice[] | undefined) : undefined;
+        setMessage({ tone: "caution", text: result.error.message, serials: choices ? { line, choices } : undefined });
+        return;
+      }
+      const { added, machine, assembly, serial: used, serials, skipped } = result.data;
+      const forSerial = used ? `, serial ${used}` : serials ? `, ${serials}` : "";
+      const already = skipped.length > 0 ? ` Already on the list: ${skipped.join(", ").toLowerCase()}.` : "";
+      setMessage({
+        tone: "success",
+        text: added === 0 ? `Every position of the ${assembly.toLowerCase()} (${machine}${forSerial}) is already on the list.` : `Added ${added} more ${added === 1 ? "part" : "parts"} of the ${assembly.toLowerCase()} (${machine}${forSerial}), one for each position.${already}`,
+      });
     };
     const remove = async (line: ListLine) => {
-      await sendJson("DELETE", `/api/lists/${view.id}/lines/${line.id}`);
+      const result = await sendJson("DELETE", `/api/lists/${view.id}/lines/${line.id}`);
       await mutate();
+      setMessage(result.ok ? { tone: "success", text: `Removed ${line.number}.`, undo: { lineId: line.id, number: line.number } } : { tone: "caution", text: result.error.message });
     };
     return {
+      addAssembly,
       number: (l: ListLine) =>
         l.partId === null ? (
           <span className="text-sm text-ink-soft">none: sized from measurements</span>
@@ -132,7 +200,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
             <Link href={`/parts/${l.partId}`} className="num whitespace-nowrap font-bold">
               {l.number}
             </Link>
-            {l.requestedNumber && <span className="block text-sm text-ink-soft">asked for as {l.requestedNumber}</span>}
+            {l.earlierNumbers.length > 0 && <span className="num block text-sm text-ink-soft">replaces {l.earlierNumbers.join(", ")}</span>}
           </>
         ),
       part: (l: ListLine) => (
@@ -144,7 +212,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
         </div>
       ),
       standard: (l: ListLine) => {
-        if (!l.chosen) return <span className="text-ink-soft">no approved cross</span>;
+        if (!l.chosen) return <span className="text-ink-soft">{l.method ?? "no approved standard part"}</span>;
         return (
           <div className="space-y-1">
             {l.equivalents.length > 1 ? (
@@ -165,11 +233,25 @@ export function ListEditor({ initial }: { initial: ListView }) {
             )}
             <span className="num block text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
             {l.measured ? <span className="block text-sm">Sized from your measurements</span> : <FitBadge fit={l.chosen.fit} />}
+            {l.chosen.viaNumber && <span className="block text-sm text-ink-soft">recorded on {l.chosen.viaNumber}</span>}
           </div>
         );
       },
       quantity: (l: ListLine) => <QuantityCell key={l.quantity} line={l} save={(q) => patch(l, { quantity: q })} />,
-      notes: (l: ListLine) => <NotesCell key={l.notes ?? ""} line={l} save={(n) => patch(l, { notes: n })} />,
+      notes: (l: ListLine) => <TextCell key={l.notes ?? ""} line={l} label="Notes" value={l.notes} maxLength={500} placeholder="e.g. customer supplies" save={(v) => patch(l, { notes: v })} />,
+      supplier: (l: ListLine) => (
+        <div className="space-y-1">
+          <TextCell key={`s${l.supplier ?? ""}`} line={l} label="Supplier" value={l.supplier} maxLength={120} placeholder="Supplier" save={(v) => patch(l, { supplier: v })} />
+          <TextCell key={`n${l.supplierNumber ?? ""}`} line={l} label="Supplier's number" value={l.supplierNumber} maxLength={60} placeholder="Their number" save={(v) => patch(l, { supplierNumber: v })} />
+          <TextCell key={`p${l.unitPrice ?? ""}`} line={l} label="Unit price" value={l.unitPrice} maxLength={14} width="w-28" numeric placeholder="Price each" save={(v) => patch(l, { unitPrice: v })} />
+        </div>
+      ),
+      ordered: (l: ListLine) => (
+        <label className="flex min-h-11 items-center gap-2 text-sm">
+          <input type="checkbox" checked={l.ordered} onChange={(e) => void patch(l, { ordered: e.target.checked })} className="h-5 w-5" aria-label={`${l.number} ordered`} />
+          <span aria-hidden="true">Ordered</span>
+        </label>
+      ),
       warnings: (l: ListLine) =>
         l.warnings.length === 0 ? (
           <span className="text-sm text-ink-soft">—</span>
@@ -200,7 +282,16 @@ export function ListEditor({ initial }: { initial: ListView }) {
   const columns = useMemo<Array<ColumnDef<ListLine>>>(
     () => [
       { accessorKey: "number", header: "Factory number", cell: ({ row }) => cells.number(row.original) },
-      { accessorKey: "description", header: "Part", cell: ({ row }) => cells.part(row.original) },
+      {
+        accessorKey: "description",
+        header: "Part",
+        cell: ({ row }) => (
+          <div className="space-y-2">
+            {cells.part(row.original)}
+            {cells.actions(row.original)}
+          </div>
+        ),
+      },
       {
         id: "standard",
         accessorFn: (l) => l.chosen?.designation ?? "",
@@ -212,9 +303,18 @@ export function ListEditor({ initial }: { initial: ListView }) {
           </div>
         ),
       },
-      { accessorKey: "quantity", header: "Qty", cell: ({ row }) => cells.quantity(row.original) },
+      {
+        accessorKey: "quantity",
+        header: "Qty",
+        cell: ({ row }) => (
+          <div className="space-y-1">
+            {cells.quantity(row.original)}
+            {cells.ordered(row.original)}
+          </div>
+        ),
+      },
+      { id: "supplier", accessorFn: (l) => l.supplier ?? "", header: "Supplier", cell: ({ row }) => cells.supplier(row.original) },
       { accessorKey: "notes", header: "Notes", enableSorting: false, cell: ({ row }) => cells.notes(row.original) },
-      { id: "actions", header: "", enableSorting: false, cell: ({ row }) => cells.actions(row.original) },
     ],
     [cells],
   );
@@ -227,14 +327,9 @@ export function ListEditor({ initial }: { initial: ListView }) {
           e.preventDefault();
           setAdding(true);
           setMessage(null);
-          const result = await sendJson<{ superseded: boolean; merged: boolean }>("POST", `/api/lists/${view.id}/lines`, { number, quantity: Number(quantity) || 1 });
+          const result = await add({ number });
           setAdding(false);
-          if (result.ok) {
-            setNumber("");
-            setQuantity("1");
-            setMessage({ tone: "success", text: result.data.merged ? "Already on the list: its quantity was raised." : result.data.superseded ? "Added under its latest number (the one you typed is superseded)." : "Added." });
-            await mutate();
-          } else setMessage({ tone: "caution", text: result.error.message });
+          if (result) setNumber("");
         }}
       >
         <div className="min-w-56 flex-1 space-y-1">
@@ -255,7 +350,43 @@ export function ListEditor({ initial }: { initial: ListView }) {
       </form>
       {message && (
         <Notice tone={message.tone} role={message.tone === "caution" ? "alert" : "status"}>
-          {message.text}
+          <span className="block">{message.text}</span>
+          {message.numbers && message.numbers.length > 0 && (
+            <span className="mt-2 flex flex-wrap gap-2">
+              {message.numbers.map((c) => (
+                <Button key={c.partId} type="button" variant="secondary" onClick={() => void add({ partId: c.partId }).then((ok) => ok && setNumber(""))}>
+                  <span className="num">{c.number}</span>
+                  <span className="ml-2 text-sm font-normal">
+                    {c.maker}, {c.description.toLowerCase()}
+                  </span>
+                </Button>
+              ))}
+            </span>
+          )}
+          {message.serials && (
+            <span className="mt-2 flex flex-wrap gap-2">
+              {message.serials.choices.map((c) => (
+                <Button key={c.serial} type="button" variant="secondary" onClick={() => void cells.addAssembly(message.serials!.line, c.serial)}>
+                  Serial {c.label}
+                </Button>
+              ))}
+            </span>
+          )}
+          {message.undo && (
+            <Button
+              type="button"
+              variant="secondary"
+              className="mt-2"
+              onClick={async () => {
+                const undo = message.undo!;
+                const result = await sendJson("POST", `/api/lists/${view.id}/lines/${undo.lineId}/restore`, {});
+                await mutate();
+                setMessage(result.ok ? { tone: "success", text: `${undo.number} is back on the list.` } : { tone: "caution", text: result.error.message });
+              }}
+            >
+              Undo
+            </Button>
+          )}
         </Notice>
       )}
 
@@ -280,6 +411,8 @@ export function ListEditor({ initial }: { initial: ListView }) {
                 </div>
                 {cells.standard(l)}
                 {l.warnings.length > 0 && cells.warnings(l)}
+                {cells.supplier(l)}
+                {cells.ordered(l)}
                 {cells.notes(l)}
                 {cells.actions(l)}
               </li>
@@ -302,7 +435,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
           </ul>
           {view.warnings > 0 && (
             <Notice tone="caution">
-              {view.warnings} {view.warnings === 1 ? "line needs" : "lines need"} a check before ordering: see the Check column.
+              {view.warnings} {view.warnings === 1 ? "line needs" : "lines need"} a check before ordering: each is marked ⚠ under “Order as”, with the number it is about.
             </Notice>
           )}
         </section>
@@ -321,7 +454,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
               Printable sheet
             </Link>
           </p>
-          <p className="text-sm text-ink-soft">One line a part: factory number, standard designation, sizes, quantity and notes.</p>
+          <p className="text-sm text-ink-soft">One row a line: the list, machine and serial, factory number, standard designation, sizes, fit, quantity, supplier details and your notes.</p>
         </div>
         <div className="space-y-2 rounded-lg border border-rule bg-ground-raised p-4">
           <h2 className="text-xl">Share</h2>

@@ -3,78 +3,92 @@ import { FIT_NAMES } from "@/lib/catalogue/kinds";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import type { ListView } from "@/lib/lists/lists";
 
-/** The list as a sheet to order from and take to the bench: plain table, sizes to check, cautions for the work. */
+/**
+ * The list as a sheet to order from and take to the bench: what to ask for first, sizes to check it against, the
+ * factory number with the older numbers of its chain (from the catalogue, never what was typed), and the cautions for
+ * the work. Set tight enough that a ten-line list fits one A4 or Letter page.
+ */
 export function ListSheet({ view }: { view: ListView }) {
+  const supplierColumn = view.lines.some((l) => l.supplier || l.supplierNumber || l.unitPrice);
+  const total = view.lines.reduce((s, l) => s + l.quantity, 0);
   return (
-    <article className="sheet space-y-5">
-      <header className="space-y-1">
-        <p className="text-sm uppercase tracking-wide text-ink-soft">Understudy job list</p>
-        <h1 className="text-3xl">{view.title}</h1>
+    <article className="sheet space-y-3">
+      <header className="space-y-0.5">
+        <p className="text-xs uppercase tracking-wide text-ink-soft">Understudy job list · printed {new Date().toUTCString().slice(5, 16)}</p>
+        <h1 className="text-2xl">{view.title}</h1>
         {view.machine && (
-          <p>
+          <p className="font-bold">
             {view.machine.maker} {view.machine.model}
+            {view.machineSerial && <span className="num font-normal"> · serial {view.machineSerial}</span>}
           </p>
         )}
-        {view.notes && <p className="whitespace-pre-line">{view.notes}</p>}
-        <p className="text-sm text-ink-soft">Printed from the catalogue as it stood on {new Date().toUTCString().slice(5, 16)}. Measure the old part before you order.</p>
+        {view.notes && <p className="whitespace-pre-line text-sm">{view.notes}</p>}
       </header>
-      <table className="sheet-table w-full border-collapse text-left text-sm">
+      <table className="sheet-table w-full border-collapse text-left text-[0.8rem] leading-snug">
         <thead>
           <tr className="border-b-2 border-ink">
+            <th scope="col" className="w-6 py-1 pr-1">✓</th>
+            <th scope="col" className="py-1 pr-2 text-right">Qty</th>
+            <th scope="col" className="py-1 pr-2">Order as</th>
             <th scope="col" className="py-1 pr-2">Factory number</th>
             <th scope="col" className="py-1 pr-2">Part</th>
-            <th scope="col" className="py-1 pr-2">Order as</th>
-            <th scope="col" className="py-1 pr-2">Sizes (mm)</th>
-            <th scope="col" className="py-1 pr-2">Fit</th>
-            <th scope="col" className="py-1 pr-2 text-right">Qty</th>
-            <th scope="col" className="py-1">✓</th>
+            {supplierColumn && <th scope="col" className="py-1 pr-2">Supplier</th>}
           </tr>
         </thead>
         <tbody>
           {view.lines.map((l) => (
             <tr key={l.id} className="border-b border-rule align-top" data-testid="sheet-line">
+              <td className="py-1 pr-1">{l.ordered ? "☑" : "☐"}</td>
+              <td className="num py-1 pr-2 text-right text-base font-bold">{l.quantity}</td>
+              <td className="py-1 pr-2">
+                <span className="num block font-bold">{l.chosen?.designation ?? l.method ?? "no approved standard part"}</span>
+                {l.chosen && (
+                  <span className="num block text-xs">
+                    {standardSizes(l.chosen)}
+                    {standardSizes(l.chosen) && " · "}
+                    {l.measured ? "sized from measurements" : FIT_NAMES[l.chosen.fit].word.toLowerCase()}
+                  </span>
+                )}
+              </td>
               <td className="num py-1 pr-2">
                 {l.partId === null ? "—" : l.number}
-                {l.requestedNumber && <span className="block whitespace-nowrap text-xs">was {l.requestedNumber}</span>}
+                {l.earlierNumbers.length > 0 && <span className="block text-xs">was {l.earlierNumbers.join(", ")}</span>}
               </td>
               <td className="py-1 pr-2">
                 {l.description}
-                <span className="block text-xs">{l.maker}</span>
+                {l.partId !== null && <span className="text-xs"> · {l.maker}</span>}
                 {l.notes && <span className="block text-xs italic">{l.notes}</span>}
               </td>
-              <td className="num py-1 pr-2 font-bold">{l.chosen?.designation ?? "— no approved cross"}</td>
-              <td className="num whitespace-nowrap py-1 pr-2">{l.chosen ? standardSizes(l.chosen).replace(" mm", "") : ""}</td>
-              <td className="py-1 pr-2">{l.measured ? "measured" : l.chosen ? FIT_NAMES[l.chosen.fit].word : ""}</td>
-              <td className="num py-1 pr-2 text-right font-bold">{l.quantity}</td>
-              <td className="py-1">☐</td>
+              {supplierColumn && (
+                <td className="py-1 pr-2 text-xs">
+                  {l.supplier}
+                  {l.supplierNumber && <span className="num block">{l.supplierNumber}</span>}
+                  {l.unitPrice && <span className="num block">@ {l.unitPrice}</span>}
+                </td>
+              )}
             </tr>
           ))}
         </tbody>
         <tfoot>
           <tr>
-            <td colSpan={5} className="py-1 pr-2 text-right">
+            <td />
+            <td className="num py-1 pr-2 text-right font-bold">{total}</td>
+            <td colSpan={supplierColumn ? 4 : 3} className="py-1 pr-2 text-xs">
               {view.totals.map((t) => `${t.name} ${t.quantity}`).join(" · ")}
             </td>
-            <td className="num py-1 pr-2 text-right font-bold">{view.lines.reduce((s, l) => s + l.quantity, 0)}</td>
-            <td />
           </tr>
         </tfoot>
       </table>
       {view.lines.some((l) => l.warnings.length > 0) && (
-        <section className="text-sm">
-          <h2 className="text-base font-bold">Check before ordering</h2>
+        <section className="text-xs">
+          <h2 className="text-sm font-bold">Check before ordering</h2>
           <ul className="list-disc pl-5">
-            {view.lines
-              .filter((l) => l.warnings.length > 0)
-              .map((l) => (
-                <li key={l.id}>
-                  <span className="num">{l.number}</span>: {l.warnings.join(" ")}
-                </li>
-              ))}
+            {view.lines.flatMap((l) => l.warnings.map((w) => <li key={`${l.id}-${w}`}>{w}</li>))}
           </ul>
         </section>
       )}
-      {view.cautions.length > 0 && <Cautions kinds={view.cautions} />}
+      <p className="text-xs text-ink-soft">Measure the old part before you order: the catalogue records what members fitted, not a guarantee.</p>
+      {view.cautions.length > 0 && <Cautions kinds={view.cautions} compact />}
     </article>
   );
 }

@@ -7,15 +7,27 @@ import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
 import { useLookup } from "@/lib/hooks/use-lookup";
 
 /**
- * The factory-number search box: suggestions appear as people type (arrow keys to move, Enter to open), and
- * submitting opens the full results page. Without scripts it is still a plain GET form to /lookup.
+ * The search box: suggestions appear as people type (arrow keys to move, Enter to open), and submitting opens the
+ * full results page. Without scripts it is still a plain GET form to /lookup. What the page was opened with is not
+ * asked for again: the server sent its results with the page.
  */
-export function NumberSearch({ defaultValue = "", autoFocus = false }: { defaultValue?: string; autoFocus?: boolean }) {
+export function NumberSearch({
+  defaultValue = "",
+  autoFocus = false,
+  makers = [],
+  makerId = null,
+}: {
+  defaultValue?: string;
+  autoFocus?: boolean;
+  makers?: Array<{ id: number; name: string }>;
+  makerId?: number | null;
+}) {
   const router = useRouter();
   const [query, setQuery] = useState(defaultValue);
+  const [typed, setTyped] = useState(false);
   const [open, setOpen] = useState(false);
   const [active, setActive] = useState(-1);
-  const { results, isLoading, settled } = useLookup(query);
+  const { results, isLoading, settled } = useLookup(typed ? query : "", 8, makerId);
   const listId = useId();
   const showList = open && query.trim() !== "";
 
@@ -35,7 +47,7 @@ export function NumberSearch({ defaultValue = "", autoFocus = false }: { default
       }}
     >
       <label htmlFor="q" className="mb-2 block text-lg font-bold">
-        Factory number from the old part or the parts book
+        Factory number from the old part or the parts book, or words
       </label>
       <div className="flex flex-col gap-2 sm:flex-row">
         <input
@@ -46,6 +58,7 @@ export function NumberSearch({ defaultValue = "", autoFocus = false }: { default
           autoFocus={autoFocus}
           onChange={(e) => {
             setQuery(e.target.value);
+            setTyped(true);
             setOpen(true);
             setActive(-1);
           }}
@@ -64,7 +77,7 @@ export function NumberSearch({ defaultValue = "", autoFocus = false }: { default
             }
           }}
           required
-          maxLength={60}
+          maxLength={120}
           autoComplete="off"
           spellCheck={false}
           placeholder="e.g. CV-3003-A"
@@ -80,8 +93,32 @@ export function NumberSearch({ defaultValue = "", autoFocus = false }: { default
           Find the standard part
         </button>
       </div>
+      {makers.length > 0 && (
+        <p className="mt-2 flex flex-wrap items-center gap-2">
+          <label htmlFor="maker" className="text-sm">
+            Maker
+          </label>
+          <select
+            id="maker"
+            name="maker"
+            defaultValue={makerId ?? ""}
+            onChange={(e) => {
+              const form = e.currentTarget.form;
+              if (form && query.trim()) form.requestSubmit();
+            }}
+            className="min-h-11 rounded-md border-2 border-rule-strong bg-ground-raised px-2"
+          >
+            <option value="">Any maker</option>
+            {makers.map((m) => (
+              <option key={m.id} value={m.id}>
+                {m.name}
+              </option>
+            ))}
+          </select>
+        </p>
+      )}
       <p id="q-hint" className="mt-2 text-sm text-ink-soft">
-        Type it as stamped: spaces, dashes and a worn character or two are fine.
+        Type it as stamped: spaces, dashes and a worn character or two are fine. Part of a number, or words such as “water pump bearing model 22”, work too.
       </p>
       {showList && (
         <div className="absolute left-0 right-0 z-30 mt-1 rounded-lg border-2 border-ink/80 bg-ground-raised shadow-xl">

@@ -17,9 +17,28 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
       </Link>
     ),
   },
-  { accessorKey: "description", header: "Part", cell: ({ row }) => <>{row.original.description}{row.original.serialNote && <span className="block text-sm text-ink-soft">{row.original.serialNote}</span>}</> },
+  {
+    accessorKey: "description",
+    header: "Part",
+    cell: ({ row }) => (
+      <>
+        {row.original.description}
+        {row.original.serialNote && <span className="block text-sm text-ink-soft">{row.original.serialNote}</span>}
+      </>
+    ),
+  },
+  { accessorKey: "serials", header: "Serials", cell: ({ getValue }) => <span className="num whitespace-nowrap text-sm">{getValue<string | null>() ?? "all"}</span> },
   { accessorKey: "category", header: "Kind", cell: ({ getValue }) => CATEGORY_NAMES[getValue<MachinePartRow["category"]>()] },
-  { accessorKey: "standard", header: "Standard equivalent", cell: ({ getValue }) => <span className="num">{getValue<string | null>() ?? "none approved yet"}</span> },
+  {
+    accessorKey: "standard",
+    header: "Standard equivalent",
+    cell: ({ row }) => (
+      <>
+        <span className="num">{row.original.standard ?? "none approved yet"}</span>
+        {row.original.viaNumber && <span className="block text-sm text-ink-soft">recorded on {row.original.viaNumber}</span>}
+      </>
+    ),
+  },
   {
     accessorKey: "fit",
     header: "Fit",

@@ -24,6 +24,11 @@ export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signe
         <span className="text-sm text-ink-soft">{sureness(cross)}</span>
       </div>
       {cross.standard && <p className="num text-2xl font-bold">{cross.standard.designation}</p>}
+      {cross.viaNumber && (
+        <p className="text-sm text-ink-soft" data-testid="via">
+          Recorded on <span className="num font-bold">{cross.viaNumber}</span>, a number of the same chain that fits here.
+        </p>
+      )}
       {cross.standard && sizes(cross.standard).length > 0 && (
         <p className="num text-ink-soft">
           {sizes(cross.standard)

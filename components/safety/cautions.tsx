@@ -31,7 +31,23 @@ const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
 };
 
 /** Short cautions for the work on the page; they defer to the maker's manual and local practice. */
-export function Cautions({ kinds }: { kinds: CautionKind[] }) {
+export function Cautions({ kinds, compact = false }: { kinds: CautionKind[]; compact?: boolean }) {
+  if (compact) {
+    // On a printed sheet: the same words, set small, each kind on one line.
+    return (
+      <aside aria-labelledby="cautions-heading" className="rounded border-l-4 border-caution p-2 text-xs">
+        <h2 id="cautions-heading" className="text-sm font-bold">
+          Before you start
+        </h2>
+        {kinds.map((kind) => (
+          <p key={kind}>
+            <span className="font-bold">{TEXT[kind].title}.</span> {TEXT[kind].points.join(" ")}
+          </p>
+        ))}
+        <p className="text-ink-soft">The maker&apos;s manual and your local rules come first; these notes do not replace them.</p>
+      </aside>
+    );
+  }
   return (
     <aside aria-labelledby="cautions-heading" className="rounded-lg border-l-4 border-caution bg-ground-raised p-4">
       <h2 id="cautions-heading" className="mb-2 text-lg text-caution">

@@ -5,6 +5,7 @@ import * as importsAndLists from "@/db/migrations/0004-imports-and-lists";
 import * as measuredListLines from "@/db/migrations/0005-measured-list-lines";
 import * as oneApprovedCross from "@/db/migrations/0006-one-approved-cross";
 import * as hashedSessions from "@/db/migrations/0007-hashed-sessions";
+import * as serialsWordsAndOrders from "@/db/migrations/0008-serials-words-and-orders";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   { name: "0005-measured-list-lines", ...measuredListLines },
   { name: "0006-one-approved-cross", ...oneApprovedCross },
   { name: "0007-hashed-sessions", ...hashedSessions },
+  { name: "0008-serials-words-and-orders", ...serialsWordsAndOrders },
 ];

@@ -43,11 +43,13 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare yearFrom: number | null;
   declare yearTo: number | null;
   declare serialNote: string | null;
+  /** What the machine's serials start with ("22-" for 22-4100); the running number after it is what ranges compare. */
+  declare serialPrefix: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
 Machine.init(
-  { id: id(), makerId: DataTypes.INTEGER, model: DataTypes.STRING(120), kind: DataTypes.ENUM(...MACHINE_KINDS), yearFrom: DataTypes.INTEGER, yearTo: DataTypes.INTEGER, serialNote: DataTypes.TEXT, ...stamps },
+  { id: id(), makerId: DataTypes.INTEGER, model: DataTypes.STRING(120), kind: DataTypes.ENUM(...MACHINE_KINDS), yearFrom: DataTypes.INTEGER, yearTo: DataTypes.INTEGER, serialNote: DataTypes.TEXT, serialPrefix: DataTypes.STRING(12), ...stamps },
   { sequelize, modelName: "Machine", tableName: "machines" },
 );
 
@@ -102,11 +104,27 @@ export class PartUsage extends Model<InferAttributes<PartUsage>, InferCreationAt
   declare assemblyId: number;
   declare quantity: number;
   declare serialNote: string | null;
+  /** Machine serials (running numbers, inclusive) the part was fitted from and to; null is open-ended. */
+  declare serialFrom: CreationOptional<number | null>;
+  declare serialTo: CreationOptional<number | null>;
+  /** The place in the assembly the part fills; parts of one machine in the same position replace each other. */
+  declare position: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
 PartUsage.init(
-  { id: id(), partId: DataTypes.INTEGER, machineId: DataTypes.INTEGER, assemblyId: DataTypes.INTEGER, quantity: DataTypes.INTEGER, serialNote: DataTypes.STRING(200), ...stamps },
+  {
+    id: id(),
+    partId: DataTypes.INTEGER,
+    machineId: DataTypes.INTEGER,
+    assemblyId: DataTypes.INTEGER,
+    quantity: DataTypes.INTEGER,
+    serialNote: DataTypes.STRING(200),
+    serialFrom: DataTypes.INTEGER,
+    serialTo: DataTypes.INTEGER,
+    position: DataTypes.STRING(200),
+    ...stamps,
+  },
   { sequelize, modelName: "PartUsage", tableName: "part_usages" },
 );
 

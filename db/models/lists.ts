@@ -11,11 +11,13 @@ export class JobList extends Model<InferAttributes<JobList>, InferCreationAttrib
   declare machineId: number | null;
   declare notes: string | null;
   declare shareToken: CreationOptional<string | null>;
+  /** The serial of the list's machine (the running number), when known: assembly adds then pick that serial's parts. */
+  declare machineSerial: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
 JobList.init(
-  { id: id(), userId: DataTypes.STRING(40), title: DataTypes.STRING(120), machineId: DataTypes.INTEGER, notes: DataTypes.TEXT, shareToken: DataTypes.STRING(64), createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE },
+  { id: id(), userId: DataTypes.STRING(40), title: DataTypes.STRING(120), machineId: DataTypes.INTEGER, notes: DataTypes.TEXT, shareToken: DataTypes.STRING(64), machineSerial: DataTypes.INTEGER, createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE },
   { sequelize, modelName: "JobList", tableName: "job_lists" },
 );
 
@@ -29,6 +31,13 @@ export class JobListLine extends Model<InferAttributes<JobListLine>, InferCreati
   declare standardPartId: number | null;
   declare quantity: number;
   declare notes: string | null;
+  declare supplier: CreationOptional<string | null>;
+  declare supplierNumber: CreationOptional<string | null>;
+  /** Decimal as text, as PostgreSQL's numeric comes back. */
+  declare unitPrice: CreationOptional<string | null>;
+  declare ordered: CreationOptional<boolean>;
+  /** Set when the line is removed; it can be put back for a short while. */
+  declare removedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -42,6 +51,11 @@ JobListLine.init(
     standardPartId: DataTypes.INTEGER,
     quantity: DataTypes.INTEGER,
     notes: DataTypes.TEXT,
+    supplier: DataTypes.STRING(120),
+    supplierNumber: DataTypes.STRING(60),
+    unitPrice: DataTypes.DECIMAL(10, 2),
+    ordered: { type: DataTypes.BOOLEAN, defaultValue: false },
+    removedAt: DataTypes.DATE,
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

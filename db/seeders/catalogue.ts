@@ -15,7 +15,7 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
     for (const m of demo.makers) makers.set(m.key, await Maker.create({ name: m.name, prefixes: m.prefixes, country: m.country, note: m.note }, t));
     const machines = new Map<string, number>();
     for (const m of demo.machines) {
-      const row = await Machine.create({ makerId: makers.get(m.makerKey)!.id, model: m.model, kind: m.kind, yearFrom: m.yearFrom, yearTo: m.yearTo, serialNote: m.serialNote }, t);
+      const row = await Machine.create({ makerId: makers.get(m.makerKey)!.id, model: m.model, kind: m.kind, yearFrom: m.yearFrom, yearTo: m.yearTo, serialNote: m.serialNote, serialPrefix: m.serialPrefix }, t);
       machines.set(m.key, row.id);
     }
     const assemblies = new Map<string, number>();
@@ -35,7 +35,7 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
     const partIds = new Map(demo.parts.map((p, i) => [p.key, partRows[i].id]));
 
     await PartUsage.bulkCreate(
-      demo.usages.map((u) => ({ partId: partIds.get(u.partKey)!, machineId: machines.get(u.machineKey)!, assemblyId: assemblies.get(u.assembly)!, quantity: u.quantity, serialNote: u.serialNote })),
+      demo.usages.map((u) => ({ partId: partIds.get(u.partKey)!, machineId: machines.get(u.machineKey)!, assemblyId: assemblies.get(u.assembly)!, quantity: u.quantity, serialNote: u.serialNote, serialFrom: u.serialFrom, serialTo: u.serialTo, position: u.position })),
       t,
     );
     await Supersession.bulkCreate(demo.supersessions.map((s) => ({ oldPartId: partIds.get(s.oldKey)!, newPartId: partIds.get(s.newKey)!, kind: s.kind, note: s.note })), t);

@@ -34,8 +34,8 @@ export async function seedLargeCatalogue(parts: number, log: (message: string) =
       { parts },
     );
     log("inserting where-used and crosses…");
-    await q(`INSERT INTO part_usages (part_id, machine_id, assembly_id, quantity, created_at, updated_at)
-             SELECT p.id, ma.id, (SELECT id FROM assemblies WHERE name = 'Synthetic assembly'), 1, now(), now()
+    await q(`INSERT INTO part_usages (part_id, machine_id, assembly_id, quantity, position, created_at, updated_at)
+             SELECT p.id, ma.id, (SELECT id FROM assemblies WHERE name = 'Synthetic assembly'), 1, p.description, now(), now()
              FROM original_parts p JOIN makers mk ON mk.id = p.maker_id AND mk.name = 'Synthetic Works'
              JOIN machines ma ON ma.maker_id = mk.id AND ma.model = 'Synthetic ' || (1 + p.id % 100)`);
     await q(`INSERT INTO crosses (original_part_id, standard_part_id, fit, status, origin, created_at, updated_at)

@@ -10,6 +10,7 @@ export const AUDIT_ACTIONS = {
   "import.upload": "Uploaded an import",
   "import.commit": "Committed an import",
   "import.rollback": "Rolled back an import",
+  "import.discard": "Discarded an import that was never committed",
   "list.share": "Shared a job list by link",
   "list.unshare": "Stopped sharing a job list",
   "account.notifications": "Changed their e-mail notices",

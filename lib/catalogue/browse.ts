@@ -1,6 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
 import type { Fit, MachineKind, PartCategory } from "@/lib/catalogue/kinds";
+import { bestCrosses, crossLabel } from "@/lib/catalogue/ranking";
+import { serialRangeText } from "@/lib/catalogue/serials";
 import { AppError } from "@/lib/errors";
 
 export interface MakerWithMachines {
@@ -35,9 +37,13 @@ export interface MachinePartRow {
   category: PartCategory;
   assembly: string;
   quantity: number;
+  /** The serials this part was fitted to ("to serial 22-1340"), null for all. */
+  serials: string | null;
   serialNote: string | null;
   standard: string | null;
   fit: Fit | null;
+  /** The chain number the best answer was recorded on, when not this one. */
+  viaNumber: string | null;
 }
 
 export interface MachineDetail {
@@ -47,27 +53,25 @@ export interface MachineDetail {
   kind: MachineKind;
   years: string;
   serialNote: string | null;
+  serialPrefix: string | null;
   assemblies: Array<{ name: string; count: number }>;
   parts: MachinePartRow[];
 }
 
 /** A machine and its parts by assembly, each with its best approved standard equivalent. */
 export async function getMachine(id: number): Promise<MachineDetail> {
-  const [machine] = await sequelize.query<{ id: number; maker: string; model: string; kind: MachineKind; year_from: number | null; year_to: number | null; serial_note: string | null }>(
-    "SELECT ma.id, mk.name AS maker, ma.model, ma.kind, ma.year_from, ma.year_to, ma.serial_note FROM machines ma JOIN makers mk ON mk.id = ma.maker_id WHERE ma.id = :id",
+  const [machine] = await sequelize.query<{ id: number; maker: string; model: string; kind: MachineKind; year_from: number | null; year_to: number | null; serial_note: string | null; serial_prefix: string | null }>(
+    "SELECT ma.id, mk.name AS maker, ma.model, ma.kind, ma.year_from, ma.year_to, ma.serial_note, ma.serial_prefix FROM machines ma JOIN makers mk ON mk.id = ma.maker_id WHERE ma.id = :id",
     { replacements: { id }, type: QueryTypes.SELECT },
   );
   if (!machine) throw new AppError("not_found", "No machine with that id.");
-  const parts = await sequelize.query<{ part_id: number; number: string; description: string; category: PartCategory; assembly: string; quantity: number; serial_note: string | null; standard: string | null; fit: Fit | null }>(
-    `SELECT p.id AS part_id, p.number, p.description, p.category, a.name AS assembly, u.quantity, u.serial_note, best.standard, best.fit
+  const parts = await sequelize.query<{ part_id: number; number: string; description: string; category: PartCategory; assembly: string; quantity: number; serial_from: number | null; serial_to: number | null; serial_note: string | null }>(
+    `SELECT p.id AS part_id, p.number, p.description, p.category, a.name AS assembly, u.quantity, u.serial_from, u.serial_to, u.serial_note
      FROM part_usages u JOIN original_parts p ON p.id = u.part_id JOIN assemblies a ON a.id = u.assembly_id
-     LEFT JOIN LATERAL (
-       SELECT coalesce(s.designation, c.repair_method) AS standard, c.fit FROM crosses c LEFT JOIN standard_parts s ON s.id = c.standard_part_id
-       WHERE c.original_part_id = p.id AND c.status = 'approved' ORDER BY c.fit, c.id LIMIT 1
-     ) best ON true
-     WHERE u.machine_id = :id ORDER BY a.name, p.description, p.number`,
+     WHERE u.machine_id = :id ORDER BY a.name, coalesce(u.position, p.description), u.serial_from NULLS FIRST, p.number`,
     { replacements: { id }, type: QueryTypes.SELECT },
   );
+  const best = await bestCrosses(parts.map((p) => p.part_id));
   const counts = new Map<string, number>();
   for (const p of parts) counts.set(p.assembly, (counts.get(p.assembly) ?? 0) + 1);
   return {
@@ -77,9 +81,30 @@ export async function getMachine(id: number): Promise<MachineDetail> {
     kind: machine.kind,
     years: years(machine.year_from, machine.year_to),
     serialNote: machine.serial_note,
+    serialPrefix: machine.serial_prefix,
     assemblies: [...counts].map(([name, count]) => ({ name, count })),
-    parts: parts.map((p) => ({ partId: p.part_id, number: p.number, description: p.description, category: p.category, assembly: p.assembly, quantity: p.quantity, serialNote: p.serial_note, standard: p.standard, fit: p.fit })),
+    parts: parts.map((p) => {
+      const cross = best.get(p.part_id) ?? null;
+      return {
+        partId: p.part_id,
+        number: p.number,
+        description: p.description,
+        category: p.category,
+        assembly: p.assembly,
+        quantity: p.quantity,
+        serials: serialRangeText({ serialFrom: p.serial_from, serialTo: p.serial_to }, machine.serial_prefix),
+        serialNote: p.serial_note,
+        standard: cross ? crossLabel(cross) : null,
+        fit: cross?.fit ?? null,
+        viaNumber: cross?.viaNumber ?? null,
+      };
+    }),
   };
+}
+
+/** Every maker by name, for a filter. */
+export async function makerChoices(): Promise<Array<{ id: number; name: string }>> {
+  return sequelize.query<{ id: number; name: string }>("SELECT id, name FROM makers ORDER BY name", { type: QueryTypes.SELECT });
 }
 
 /** Every machine as one line ("Corvane Tractor Works Model 30 (1946–1952)"), for choosing one in a form. */

@@ -1,15 +1,17 @@
 import Fuse from "fuse.js";
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
-import type { PartCategory } from "@/lib/catalogue/kinds";
-import { lookAlikeKey, normaliseNumber, stripPrefix } from "@/lib/catalogue/normalise";
-import { latestNumbersAndCrossCounts } from "@/lib/catalogue/supersessions";
+import type { Fit, PartCategory } from "@/lib/catalogue/kinds";
+import { lookAlikeKey, normaliseNumber } from "@/lib/catalogue/normalise";
+import { crossLabel, rankCrosses } from "@/lib/catalogue/ranking";
+import { latestNumbers } from "@/lib/catalogue/supersessions";
 
-export type MatchedBy = "exact" | "normalised" | "misread" | "similar";
+export type MatchedBy = "exact" | "normalised" | "misread" | "prefix" | "similar" | "words";
 
 export interface LookupResult {
   id: number;
   maker: string;
+  makerId: number;
   number: string;
   description: string;
   category: PartCategory;
@@ -17,13 +19,17 @@ export interface LookupResult {
   why: string;
   score: number;
   latestNumber: string;
+  /** How many answers the shared ranking has for the part (its own crosses and those of its chain). */
   crossCount: number;
+  /** The first answer of the shared ranking: what to ask for at the counter, without opening the part. */
+  best: { label: string; standardPartId: number | null; fit: Fit; confirmations: number; viaNumber: string | null } | null;
   /** The part's documented sizes in millimetres, where the catalogue has them. */
   sizes: { innerMm: number | null; outerMm: number | null; widthMm: number | null; lengthMm: number | null };
 }
 
 interface PartRow {
   id: number;
+  maker_id: number;
   maker: string;
   number: string;
   number_normalized: string;
@@ -36,16 +42,16 @@ interface PartRow {
   length_mm: number | null;
 }
 
-const COLUMNS = `p.id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description, p.category,
+const COLUMNS = `p.id, p.maker_id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description, p.category,
   p.inner_mm, p.outer_mm, p.width_mm, p.length_mm`;
 
-let prefixCache: { at: number; prefixes: string[] } | undefined;
+let prefixCache: { at: number; prefixes: Array<{ makerId: number; prefix: string }> } | undefined;
 
 /** Every maker's prefixes; makers change rarely, so the list is kept for a minute. */
-async function makerPrefixes(): Promise<string[]> {
+async function makerPrefixes(): Promise<Array<{ makerId: number; prefix: string }>> {
   if (prefixCache && Date.now() - prefixCache.at < 60_000) return prefixCache.prefixes;
-  const rows = await sequelize.query<{ prefix: string }>("SELECT DISTINCT unnest(prefixes) AS prefix FROM makers", { type: QueryTypes.SELECT });
-  prefixCache = { at: Date.now(), prefixes: rows.map((r) => r.prefix) };
+  const rows = await sequelize.query<{ id: number; prefix: string }>("SELECT id, unnest(prefixes) AS prefix FROM makers", { type: QueryTypes.SELECT });
+  prefixCache = { at: Date.now(), prefixes: rows.map((r) => ({ makerId: r.id, prefix: normaliseNumber(r.prefix) })).filter((r) => r.prefix !== "") };
   return prefixCache.prefixes;
 }
 
@@ -53,64 +59,115 @@ const WHY: Record<MatchedBy, string> = {
   exact: "Exactly as typed",
   normalised: "Same number, written with other spacing, dashes or case",
   misread: "Same number if some look-alike characters were misread (O/0, I/1, S/5, B/8)",
+  prefix: "Starts with what you typed",
   similar: "A similar number: one or two characters differ",
+  words: "Found by the words of its description, assembly, machine or maker",
 };
 
-/**
- * Finds original parts by factory number as typed from a worn stamping: exact and normalised matches first, then
- * look-alike misreadings, then similar numbers (trigram candidates from PostgreSQL, ranked by fuse.js).
- */
-export async function findPartsByNumber(query: string, limit: number): Promise<LookupResult[]> {
-  const typed = normaliseNumber(query);
-  if (typed === "") return [];
-  const prefixes = await makerPrefixes();
-  const stripped = stripPrefix(typed, prefixes);
-  const forms = [...new Set([typed, stripped])];
-  const keys = [...new Set(forms.map(lookAlikeKey))];
+/** The score bands keep the kinds apart: every exact hit above every prefix hit, above every similar number, above words. */
+const BAND: Record<MatchedBy, number> = { exact: 1, normalised: 0.98, misread: 0.9, prefix: 0.8, similar: 0.7, words: 0.5 };
 
-  const found = new Map<number, { row: PartRow; matchedBy: MatchedBy; score: number }>();
-  const exactRows = await sequelize.query<PartRow>(
-    `SELECT ${COLUMNS} FROM original_parts p JOIN makers m ON m.id = p.maker_id
-     WHERE p.number_normalized IN (:forms) OR p.number_key IN (:keys) LIMIT 200`,
-    { replacements: { forms, keys }, type: QueryTypes.SELECT },
-  );
-  const asTyped = query.trim().toUpperCase();
-  for (const row of exactRows) {
-    const matchedBy: MatchedBy = row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalized) ? "normalised" : "misread";
-    found.set(row.id, { row, matchedBy, score: matchedBy === "exact" ? 1 : matchedBy === "normalised" ? 0.98 : 0.9 });
-  }
+/** Words of three letters or more make a query worth a full-text search (a number like "HM 210 007" has none). */
+const WORDY = /[A-Za-z]{3,}/;
 
-  // Similar numbers only when nothing matched outright: a restorer with an exact hit has found the part.
-  if (found.size === 0 && keys[keys.length - 1].length >= 3) {
-    const key = keys[keys.length - 1];
-    // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
-    const nearest = await sequelize.query<PartRow>(
-      `SELECT ${COLUMNS} FROM original_parts p JOIN makers m ON m.id = p.maker_id
-       WHERE p.number_key % :key ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
-      { replacements: { key }, type: QueryTypes.SELECT },
-    );
-    const fuse = new Fuse(nearest, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
-    for (const hit of fuse.search(key)) {
-      found.set(hit.item.id, { row: hit.item, matchedBy: "similar", score: Math.round((1 - (hit.score ?? 1)) * 0.85 * 1000) / 1000 });
-    }
-  }
-
-  const ranked = [...found.values()].sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number)).slice(0, limit);
-  if (ranked.length === 0) return [];
-  const ids = ranked.map((r) => r.row.id);
-  const { latest, counts } = await latestNumbersAndCrossCounts(ids);
-  return ranked.map(({ row, matchedBy, score }) => ({
-    id: row.id,
-    maker: row.maker,
-    number: row.number,
-    description: row.description,
-    category: row.category,
-    matchedBy,
-    why: WHY[matchedBy],
-    score,
-    latestNumber: latest.get(row.id) ?? row.number,
-    crossCount: counts.get(row.id) ?? 0,
-    sizes: { innerMm: row.inner_mm, outerMm: row.outer_mm, widthMm: row.width_mm, lengthMm: row.length_mm },
-  }));
+/** The query as a PostgreSQL tsquery: every word must be there, the last one may be unfinished (`water pu`). */
+function wordsQuery(query: string): string | null {
+  const tokens = query.toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? [];
+  if (tokens.length === 0) return null;
+  return tokens.map((t, i) => (i === tokens.length - 1 && /\p{L}/u.test(t) ? `${t}:*` : t)).join(" & ");
 }
 
+/**
+ * Finds original parts for what a person typed: a factory number from a worn stamping, part of one, or words.
+ *
+ * In order: exact, reformatted and look-alike matches; numbers that start with what was typed; similar numbers
+ * (trigram candidates from PostgreSQL, ranked by fuse.js), which still follow an exact hit because one wrong digit may
+ * match another real number; and parts found by words through PostgreSQL full-text search. When the typed number
+ * starts with a maker's prefix, that maker's numbers come before others'. `makerId` keeps the results to one maker.
+ */
+export async function lookUpParts(query: string, options: { limit: number; makerId?: number | null }): Promise<LookupResult[]> {
+  const typed = normaliseNumber(query);
+  if (typed === "") return [];
+  const makerId = options.makerId ?? null;
+  const prefixes = await makerPrefixes();
+  const prefixHit = prefixes.filter((p) => typed.startsWith(p.prefix) && /\d/.test(typed.slice(p.prefix.length))).sort((a, b) => b.prefix.length - a.prefix.length);
+  const stripped = prefixHit.length > 0 ? typed.slice(prefixHit[0].prefix.length) : typed;
+  const namedMakers = new Set(prefixHit.filter((p) => p.prefix === prefixHit[0].prefix).map((p) => p.makerId));
+  const forms = [...new Set([typed, stripped])];
+  const keys = [...new Set(forms.map(lookAlikeKey))];
+  const key = lookAlikeKey(stripped);
+  const makerFilter = makerId ? "AND p.maker_id = :makerId" : "";
+  const tsquery = WORDY.test(query) ? wordsQuery(query) : null;
+  const from = `FROM original_parts p JOIN makers m ON m.id = p.maker_id`;
+
+  const [sameRows, prefixRows, nearRows, wordRows] = await Promise.all([
+    sequelize.query<PartRow>(`SELECT ${COLUMNS} ${from} WHERE (p.number_normalized IN (:forms) OR p.number_key IN (:keys)) ${makerFilter} LIMIT 200`, {
+      replacements: { forms, keys, makerId },
+      type: QueryTypes.SELECT,
+    }),
+    stripped.length >= 2
+      ? sequelize.query<PartRow>(
+          `SELECT ${COLUMNS} ${from} WHERE (p.number_normalized LIKE :like OR p.number_key LIKE :likeKey) ${makerFilter}
+           ORDER BY length(p.number_normalized), p.number_normalized LIMIT 80`,
+          { replacements: { like: `${stripped}%`, likeKey: `${key}%`, makerId }, type: QueryTypes.SELECT },
+        )
+      : Promise.resolve([]),
+    // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
+    key.length >= 3
+      ? sequelize.query<PartRow>(`SELECT ${COLUMNS} ${from} WHERE p.number_key % :key ${makerFilter} ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`, {
+          replacements: { key, makerId },
+          type: QueryTypes.SELECT,
+        })
+      : Promise.resolve([]),
+    tsquery
+      ? sequelize.query<PartRow & { rank: number }>(
+          `SELECT ${COLUMNS}, ts_rank(p.search_document, q) AS rank ${from}, to_tsquery('english', :tsquery) q
+           WHERE p.search_document @@ q ${makerFilter} ORDER BY rank DESC, p.number LIMIT 60`,
+          { replacements: { tsquery, makerId }, type: QueryTypes.SELECT },
+        )
+      : Promise.resolve([]),
+  ]);
+
+  const found = new Map<number, { row: PartRow; matchedBy: MatchedBy; score: number }>();
+  const add = (row: PartRow, matchedBy: MatchedBy, within: number) => {
+    if (found.has(row.id)) return;
+    // A maker named by the typed prefix goes first within its band.
+    const named = namedMakers.size === 0 || namedMakers.has(row.maker_id) ? 0.01 : 0;
+    found.set(row.id, { row, matchedBy, score: Math.round((BAND[matchedBy] - 0.05 + Math.max(0, Math.min(within, 1)) * 0.04 + named) * 1000) / 1000 });
+  };
+  const asTyped = query.trim().toUpperCase();
+  for (const row of sameRows) {
+    const matchedBy: MatchedBy = row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalized) ? "normalised" : "misread";
+    add(row, matchedBy, 1);
+  }
+  for (const row of prefixRows) add(row, "prefix", stripped.length / Math.max(row.number_normalized.length, 1));
+  if (nearRows.length > 0) {
+    const fuse = new Fuse(nearRows, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
+    for (const hit of fuse.search(key)) add(hit.item, "similar", 1 - (hit.score ?? 1));
+  }
+  const topRank = Math.max(...wordRows.map((r) => r.rank), 0) || 1;
+  for (const row of wordRows) add(row, "words", row.rank / topRank);
+
+  const ranked = [...found.values()].sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number)).slice(0, options.limit);
+  if (ranked.length === 0) return [];
+  const ids = ranked.map((r) => r.row.id);
+  const [latest, crosses] = await Promise.all([latestNumbers(ids), rankCrosses(ids)]);
+  return ranked.map(({ row, matchedBy, score }) => {
+    const cross = crosses.get(row.id)?.[0] ?? null;
+    return {
+      id: row.id,
+      maker: row.maker,
+      makerId: row.maker_id,
+      number: row.number,
+      description: row.description,
+      category: row.category,
+      matchedBy,
+      why: WHY[matchedBy],
+      score,
+      latestNumber: latest.get(row.id) ?? row.number,
+      crossCount: crosses.get(row.id)?.length ?? 0,
+      best: cross ? { label: crossLabel(cross), standardPartId: cross.standardPartId, fit: cross.fit, confirmations: cross.confirmations, viaNumber: cross.viaNumber } : null,
+      sizes: { innerMm: row.inner_mm, outerMm: row.outer_mm, widthMm: row.width_mm, lengthMm: row.length_mm },
+    };
+  });
+}

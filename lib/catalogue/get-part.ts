@@ -1,6 +1,8 @@
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
-import { CATEGORY_NAMES, type CautionKind, type Fit, type PartCategory, type StandardKind, type SupersessionKind } from "@/lib/catalogue/kinds";
+import { CATEGORY_NAMES, type CautionKind, type PartCategory, type SupersessionKind } from "@/lib/catalogue/kinds";
+import { bestCrosses, crossLabel, rankCrosses, type RankedCross } from "@/lib/catalogue/ranking";
+import { serialRangeText } from "@/lib/catalogue/serials";
 import { loadChain } from "@/lib/catalogue/supersessions";
 import { AppError } from "@/lib/errors";
 
@@ -11,17 +13,8 @@ export interface ChainLink {
   note: string | null;
 }
 
-export interface CrossView {
-  id: number;
-  fit: Fit;
-  standard: { kind: StandardKind; designation: string; innerMm: number | null; outerMm: number | null; widthMm: number | null; lengthMm: number | null; attributes: Record<string, unknown> } | null;
-  repairMethod: string | null;
-  notes: string | null;
-  origin: string;
-  confirmations: number;
-  /** Photos from the member's proposal that put this cross in the catalogue. */
-  photos: number[];
-}
+/** A cross as the part page shows it: the shared ranking's entry (its own or a chain number's, `viaNumber`). */
+export type CrossView = RankedCross;
 
 export interface PartDetail {
   id: number;
@@ -33,8 +26,8 @@ export interface PartDetail {
   dimensions: { innerMm: number | null; outerMm: number | null; widthMm: number | null; lengthMm: number | null; note: string | null };
   chain: { before: ChainLink[]; after: ChainLink[]; latest: ChainLink; loop: boolean };
   crosses: CrossView[];
-  whereUsed: Array<{ machineId: number; maker: string; model: string; years: string; assembly: string; quantity: number; serialNote: string | null }>;
-  sameAssembly: Array<{ id: number; number: string; description: string; category: PartCategory; assembly: string; model: string; standard: string | null }>;
+  whereUsed: Array<{ machineId: number; maker: string; model: string; years: string; assembly: string; position: string; quantity: number; serials: string | null; serialNote: string | null }>;
+  sameAssembly: Array<{ id: number; number: string; description: string; category: PartCategory; assembly: string; model: string; serials: string | null; standard: string | null }>;
   cautions: CautionKind[];
 }
 
@@ -62,39 +55,35 @@ export async function getPart(id: number): Promise<PartDetail> {
   const edgeInto = (partId: number) => chain.edges.find((e) => e.newPartId === partId);
   const link = (partId: number): ChainLink => ({ id: partId, number: numbers.get(partId) ?? "?", kind: edgeInto(partId)?.kind ?? null, note: edgeInto(partId)?.note ?? null });
 
-  const [crosses, whereUsed, sameAssembly] = await Promise.all([
-    sequelize.query<{
-      id: number; fit: Fit; repair_method: string | null; notes: string | null; origin: string; confirmations: string; photos: number[];
-      kind: StandardKind | null; designation: string | null; inner_mm: number | null; outer_mm: number | null; width_mm: number | null; length_mm: number | null; attributes: Record<string, unknown> | null;
-    }>(
-      `SELECT c.id, c.fit, c.repair_method, c.notes, c.origin, count(f.id) AS confirmations,
-              (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM submissions sub JOIN submission_photos ph ON ph.submission_id = sub.id
-               WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos,
-              s.kind, s.designation, s.inner_mm, s.outer_mm, s.width_mm, s.length_mm, s.attributes
-       FROM crosses c LEFT JOIN standard_parts s ON s.id = c.standard_part_id LEFT JOIN confirmations f ON f.cross_id = c.id
-       WHERE c.original_part_id = :id AND c.status = 'approved'
-       GROUP BY c.id, s.id
-       ORDER BY c.fit, count(f.id) DESC, c.id`,
-      { replacements: { id }, type: QueryTypes.SELECT },
-    ),
-    sequelize.query<{ machine_id: number; maker: string; model: string; year_from: number | null; year_to: number | null; assembly: string; quantity: number; serial_note: string | null; caution: CautionKind | null }>(
-      `SELECT u.machine_id, mk.name AS maker, ma.model, ma.year_from, ma.year_to, a.name AS assembly, u.quantity, u.serial_note, a.caution
+  const [ranked, whereUsed, sameAssemblyRows] = await Promise.all([
+    rankCrosses([id], { photos: true }),
+    sequelize.query<{ machine_id: number; maker: string; model: string; year_from: number | null; year_to: number | null; assembly: string; position: string; quantity: number; serial_from: number | null; serial_to: number | null; serial_prefix: string | null; serial_note: string | null; caution: CautionKind | null }>(
+      `SELECT u.machine_id, mk.name AS maker, ma.model, ma.year_from, ma.year_to, a.name AS assembly, coalesce(u.position, :description) AS position, u.quantity,
+              u.serial_from, u.serial_to, ma.serial_prefix, u.serial_note, a.caution
        FROM part_usages u JOIN machines ma ON ma.id = u.machine_id JOIN makers mk ON mk.id = ma.maker_id JOIN assemblies a ON a.id = u.assembly_id
-       WHERE u.part_id = :id ORDER BY mk.name, ma.model, a.name`,
-      { replacements: { id }, type: QueryTypes.SELECT },
+       WHERE u.part_id = :id ORDER BY mk.name, ma.model, a.name, u.serial_from NULLS FIRST`,
+      { replacements: { id, description: part.description }, type: QueryTypes.SELECT },
     ),
-    sequelize.query<{ id: number; number: string; description: string; category: PartCategory; assembly: string; model: string; standard: string | null }>(
-      `SELECT DISTINCT ON (p.id) p.id, p.number, p.description, p.category, a.name AS assembly, ma.model,
-              (SELECT s.designation FROM crosses c JOIN standard_parts s ON s.id = c.standard_part_id
-               WHERE c.original_part_id = p.id AND c.status = 'approved' ORDER BY c.fit, c.id LIMIT 1) AS standard
+    // The other positions of the same assemblies, on the serials this part was fitted to.
+    sequelize.query<{ id: number; number: string; description: string; category: PartCategory; assembly: string; model: string; serial_from: number | null; serial_to: number | null; serial_prefix: string | null }>(
+      `SELECT DISTINCT ON (p.id) p.id, p.number, p.description, p.category, a.name AS assembly, ma.model, u.serial_from, u.serial_to, ma.serial_prefix
        FROM part_usages mine
-       JOIN part_usages u ON u.machine_id = mine.machine_id AND u.assembly_id = mine.assembly_id AND u.part_id <> mine.part_id AND u.serial_note IS NULL
+       JOIN part_usages u ON u.machine_id = mine.machine_id AND u.assembly_id = mine.assembly_id AND u.part_id <> mine.part_id
+        AND coalesce(u.position, '') <> coalesce(mine.position, '-')
+        AND (u.serial_to IS NULL OR mine.serial_from IS NULL OR u.serial_to >= mine.serial_from)
+        AND (u.serial_from IS NULL OR mine.serial_to IS NULL OR u.serial_from <= mine.serial_to)
+        AND u.serial_note IS NULL
        JOIN original_parts p ON p.id = u.part_id JOIN assemblies a ON a.id = u.assembly_id JOIN machines ma ON ma.id = u.machine_id
        WHERE mine.part_id = :id
        ORDER BY p.id LIMIT 40`,
       { replacements: { id }, type: QueryTypes.SELECT },
     ),
   ]);
+  const best = await bestCrosses(sameAssemblyRows.map((r) => r.id));
+  const sameAssembly = sameAssemblyRows.map((r) => {
+    const cross = best.get(r.id);
+    return { id: r.id, number: r.number, description: r.description, category: r.category, assembly: r.assembly, model: r.model, serials: serialRangeText({ serialFrom: r.serial_from, serialTo: r.serial_to }, r.serial_prefix), standard: cross ? crossLabel(cross) : null };
+  });
 
   const cautions = new Set<CautionKind>();
   const byCategory = CATEGORY_CAUTIONS[part.category];
@@ -110,23 +99,16 @@ export async function getPart(id: number): Promise<PartDetail> {
     categoryName: CATEGORY_NAMES[part.category],
     dimensions: { innerMm: part.inner_mm, outerMm: part.outer_mm, widthMm: part.width_mm, lengthMm: part.length_mm, note: part.dimensions_note },
     chain: { before: chain.before.map(link), after: chain.after.map(link), latest: link(chain.latestId), loop: chain.loop },
-    crosses: crosses.map((c) => ({
-      id: c.id,
-      fit: c.fit,
-      standard: c.kind && c.designation ? { kind: c.kind, designation: c.designation, innerMm: c.inner_mm, outerMm: c.outer_mm, widthMm: c.width_mm, lengthMm: c.length_mm, attributes: c.attributes ?? {} } : null,
-      repairMethod: c.repair_method,
-      notes: c.notes,
-      origin: c.origin,
-      confirmations: Number(c.confirmations),
-      photos: c.photos,
-    })),
+    crosses: ranked.get(id) ?? [],
     whereUsed: whereUsed.map((u) => ({
       machineId: u.machine_id,
       maker: u.maker,
       model: u.model,
       years: u.year_from ? `${u.year_from}–${u.year_to ?? ""}` : "",
       assembly: u.assembly,
+      position: u.position,
       quantity: u.quantity,
+      serials: serialRangeText({ serialFrom: u.serial_from, serialTo: u.serial_to }, u.serial_prefix),
       serialNote: u.serial_note,
     })),
     sameAssembly: sameAssembly.sort((a, b) => a.assembly.localeCompare(b.assembly) || a.number.localeCompare(b.number)),

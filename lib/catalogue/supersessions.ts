@@ -4,12 +4,12 @@ import { resolveChain, type ChainResult, type SupersessionEdge } from "@/lib/cat
 import type { SupersessionKind } from "@/lib/catalogue/kinds";
 
 /**
- * For many parts in one round trip: the latest number each has been superseded by, and its count of approved
- * crosses. The recursive walk keeps the path it has taken and will not revisit a part, so a loop in the records ends it.
+ * For many parts in one round trip: the latest number each has been superseded by. The recursive walk keeps the
+ * path it has taken and will not revisit a part, so a loop in the records ends it.
  */
-export async function latestNumbersAndCrossCounts(ids: number[]): Promise<{ latest: Map<number, string>; counts: Map<number, number> }> {
-  if (ids.length === 0) return { latest: new Map(), counts: new Map() };
-  const rows = await sequelize.query<{ start_id: number; number: string; crosses: string }>(
+export async function latestNumbers(ids: number[]): Promise<Map<number, string>> {
+  if (ids.length === 0) return new Map();
+  const rows = await sequelize.query<{ start_id: number; number: string }>(
     `WITH RECURSIVE walk(start_id, part_id, depth, path) AS (
        SELECT id, id, 0, ARRAY[id] FROM original_parts WHERE id IN (:ids)
        UNION ALL
@@ -22,15 +22,10 @@ export async function latestNumbersAndCrossCounts(ids: number[]): Promise<{ late
        FROM walk w JOIN original_parts p ON p.id = w.part_id
        ORDER BY w.start_id, w.depth DESC, w.part_id
      )
-     SELECT l.start_id, l.number,
-            (SELECT count(*) FROM crosses c WHERE c.original_part_id = l.start_id AND c.status = 'approved') AS crosses
-     FROM latest l`,
+     SELECT l.start_id, l.number FROM latest l`,
     { replacements: { ids }, type: QueryTypes.SELECT },
   );
-  return {
-    latest: new Map(rows.map((r) => [r.start_id, r.number])),
-    counts: new Map(rows.map((r) => [r.start_id, Number(r.crosses)])),
-  };
+  return new Map(rows.map((r) => [r.start_id, r.number]));
 }
 
 /** Every supersession record connected to a part, either way, as far as the chain goes (loop-safe). */
@@ -50,4 +45,47 @@ export async function loadChain(partId: number): Promise<ChainResult> {
   );
   const edges: SupersessionEdge[] = rows.map((r) => ({ oldPartId: r.old_part_id, newPartId: r.new_part_id, kind: r.kind, note: r.note }));
   return resolveChain(partId, edges);
+}
+
+/**
+ * For many parts in one round trip: the older numbers each replaces, along its chain, oldest first. A job list and
+ * its print sheet show these beside the number to order, so a counter can match an old box or parts book.
+ */
+export async function earlierNumbers(ids: number[]): Promise<Map<number, string[]>> {
+  const earlier = new Map<number, string[]>(ids.map((id) => [id, []]));
+  if (ids.length === 0) return earlier;
+  const rows = await sequelize.query<{ start_id: number; number: string; depth: number }>(
+    `WITH RECURSIVE walk(start_id, part_id, depth, path) AS (
+       SELECT id, id, 0, ARRAY[id] FROM original_parts WHERE id IN (:ids)
+       UNION ALL
+       SELECT w.start_id, s.old_part_id, w.depth + 1, w.path || s.old_part_id
+       FROM walk w JOIN supersessions s ON s.new_part_id = w.part_id
+       WHERE NOT s.old_part_id = ANY(w.path) AND w.depth < 25
+     )
+     SELECT w.start_id, p.number, max(w.depth) AS depth FROM walk w JOIN original_parts p ON p.id = w.part_id
+     WHERE w.depth > 0 GROUP BY w.start_id, p.number ORDER BY w.start_id, max(w.depth) DESC, p.number`,
+    { replacements: { ids }, type: QueryTypes.SELECT },
+  );
+  for (const r of rows) earlier.get(r.start_id)?.push(r.number);
+  return earlier;
+}
+
+/** Every part connected to each given part by supersession records, either way and of any kind, itself included. */
+export async function chainMembers(ids: number[]): Promise<Map<number, number[]>> {
+  const members = new Map<number, number[]>(ids.map((id) => [id, [id]]));
+  if (ids.length === 0) return members;
+  const rows = await sequelize.query<{ start_id: number; part_id: number }>(
+    `WITH RECURSIVE linked(start_id, part_id, path) AS (
+       SELECT id, id, ARRAY[id] FROM original_parts WHERE id IN (:ids)
+       UNION ALL
+       SELECT l.start_id, CASE WHEN s.old_part_id = l.part_id THEN s.new_part_id ELSE s.old_part_id END,
+              l.path || CASE WHEN s.old_part_id = l.part_id THEN s.new_part_id ELSE s.old_part_id END
+       FROM linked l JOIN supersessions s ON s.old_part_id = l.part_id OR s.new_part_id = l.part_id
+       WHERE NOT (CASE WHEN s.old_part_id = l.part_id THEN s.new_part_id ELSE s.old_part_id END) = ANY(l.path) AND cardinality(l.path) < 25
+     )
+     SELECT DISTINCT start_id, part_id FROM linked WHERE part_id <> start_id`,
+    { replacements: { ids }, type: QueryTypes.SELECT },
+  );
+  for (const r of rows) members.get(r.start_id)?.push(r.part_id);
+  return members;
 }

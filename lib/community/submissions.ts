@@ -376,13 +376,13 @@ export async function decide(moderator: Actor, id: number, decision: { action: D
   let mailSent = false;
   if (submitter?.notifyByEmail) {
     const names = await numberAndStandard(result.submission);
-    // Approved: straight to the part page, where the cross now shows. Sent back: to the form. Rejected: their list.
+    // Approved: straight to the part page, where the cross now shows. Sent back: to the form. Rejected: the proposal itself.
     const url =
       decision.action === "request_changes"
         ? `${env.APP_URL}/proposals/${id}/edit`
         : result.landed
           ? `${env.APP_URL}/parts/${result.landed.partId}`
-          : `${env.APP_URL}/proposals`;
+          : `${env.APP_URL}/proposals/${id}`;
     mailSent = await trySend(() => sendMail(decisionMail(submitter.email, { outcome: STATUS_FOR[decision.action] as "approved", ...names, message: decision.message, url })));
   }
   return {

@@ -1,9 +1,9 @@
 import { QueryTypes, type CreationAttributes, type Transaction } from "sequelize";
 import { Cross, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission } from "@/db";
-import type { PartCategory } from "@/lib/catalogue/kinds";
+import { STANDARD_KIND_NAMES, type PartCategory } from "@/lib/catalogue/kinds";
 import { searchForms } from "@/lib/catalogue/normalise";
 import type { Measurement } from "@/lib/community/kinds";
-import type { ImportCounts, ImportMappingValue, ImportTarget } from "@/lib/imports/kinds";
+import { NAMES_KEPT, type ImportCounts, type ImportMappingValue, type ImportTarget } from "@/lib/imports/kinds";
 import { streamRows, type FileShape } from "@/lib/imports/read";
 import { parseImportRow, type ParsedRow, type RowProblem } from "@/lib/imports/rows";
 
@@ -72,7 +72,10 @@ interface Change {
   before: Record<string, unknown> | null;
 }
 
-const emptyCounts = (): ImportCounts => ({ rows: 0, newParts: 0, newCrosses: 0, updates: 0, unchanged: 0, rejected: 0, newMakers: 0, newStandardParts: 0 });
+const emptyCounts = (): ImportCounts => ({ rows: 0, newParts: 0, newCrosses: 0, updates: 0, unchanged: 0, rejected: 0, newMakers: 0, newStandardParts: 0, newMakerNames: [], newStandardPartNames: [] });
+const keepName = (names: string[] | undefined, name: string) => {
+  if (names && names.length < NAMES_KEPT && !names.includes(name)) names.push(name);
+};
 
 export async function runPass(options: PassOptions): Promise<ImportCounts> {
   const { transaction, target } = options;
@@ -140,9 +143,11 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
         makers.set(makerKey, maker);
         changes.push({ importId: options.importId, line, tableName: "makers", recordId: created.id, action: "insert", before: null });
         counts.newMakers += 1;
+        keepName(counts.newMakerNames, row.maker);
       } else if (!maker && !plannedMakers.has(makerKey)) {
         plannedMakers.add(makerKey);
         counts.newMakers += 1;
+        keepName(counts.newMakerNames, row.maker);
       }
       const forms = searchForms(row.number, maker?.prefixes ?? []);
       if (!forms.normalised) {
@@ -268,6 +273,7 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
       let standardId = standardByKey.get(standardKey) ?? plannedStandards.get(standardKey);
       if (standardId === undefined && target === "catalogue") {
         counts.newStandardParts += 1;
+        keepName(counts.newStandardPartNames, `${STANDARD_KIND_NAMES[row.standard.kind]} ${row.standard.designation}`);
         if (commit) {
           const s = row.standard;
           const created = await StandardPart.create({ kind: s.kind, designation: s.designation, innerMm: s.innerMm, outerMm: s.outerMm, widthMm: s.widthMm, lengthMm: s.lengthMm, attributes: s.attributes }, t);

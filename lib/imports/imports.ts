@@ -9,7 +9,7 @@ import { runPass, type Rejection } from "@/lib/imports/engine";
 import { IMPORT_MAX_BYTES, type ImportCounts, type ImportMappingValue, type ImportStatus, type ImportTarget } from "@/lib/imports/kinds";
 import { cleanMapping, missingRequired, proposeMapping } from "@/lib/imports/mapping";
 import { detectShape, readSample, type FileShape } from "@/lib/imports/read";
-import { putObject } from "@/lib/storage/s3";
+import { deleteObject, putObject } from "@/lib/storage/s3";
 
 interface Actor {
   id: string;
@@ -76,7 +76,7 @@ export async function createImport(actor: Actor, file: { name: string; bytes: Ui
     await record.update({ status: "failed", errorMessage: error instanceof Error ? error.message : String(error) });
     throw error;
   }
-  await recordAudit({ actorId: actor.id, action: "import.upload", subjectType: "import", subjectId: record.id, after: { fileName: record.fileName, target, objectKey: key, sha256: record.sha256 } });
+  await recordAudit({ actorId: actor.id, action: "import.upload", subjectType: "import", subjectId: record.id, after: { fileName: record.fileName, target, sha256: record.sha256 } });
   return record;
 }
 
@@ -237,6 +237,27 @@ export async function rollbackImport(actor: Actor, id: number): Promise<{ remove
   return result;
 }
 
+/**
+ * Throws away an import that was never committed: its dry run, its rejected rows and the stored file. A committed
+ * import stays on record (roll it back instead); one being read or committed must finish first.
+ */
+export async function discardImport(actor: Actor, id: number): Promise<void> {
+  const row = await loadFor(actor, id);
+  assertMayImport(actor, row.target);
+  await recoverStalled(row);
+  const [gone] = (await sequelize.query("DELETE FROM imports WHERE id = :id AND status IN ('uploaded', 'parsed', 'failed') AND committed_at IS NULL RETURNING object_key", {
+    replacements: { id },
+  })) as [Array<{ object_key: string }>, unknown];
+  if (gone.length === 0) {
+    throw new AppError(
+      "conflict",
+      row.status === "committed" || row.status === "rolled_back" ? "A committed import stays on record; roll it back to undo what it did." : "The file is being read or committed; wait for it to finish, then discard it.",
+    );
+  }
+  await deleteObject(gone[0].object_key).catch(() => undefined);
+  await recordAudit({ actorId: actor.id, action: "import.discard", subjectType: "import", subjectId: id, before: { fileName: row.fileName, status: row.status } });
+}
+
 export interface ImportView {
   id: number;
   target: ImportTarget;
@@ -256,7 +277,6 @@ export interface ImportView {
   createdAt: string;
   committedAt: string | null;
   rolledBackAt: string | null;
-  objectKey: string;
   rejections: Array<{ line: number; column: string | null; reason: string }>;
   rejectionsTotal: number;
 }
@@ -325,7 +345,6 @@ export async function getImport(actor: Actor, id: number, rejectionLimit = 200):
     createdAt: row.createdAt.toISOString(),
     committedAt: row.committedAt?.toISOString() ?? null,
     rolledBackAt: row.rolledBackAt?.toISOString() ?? null,
-    objectKey: row.objectKey,
     rejections: rejections.map((r) => ({ line: r.line, column: r.column_name, reason: r.reason })),
     rejectionsTotal: Number(total),
   };

@@ -52,7 +52,13 @@ export interface ImportCounts {
   rejected: number;
   newMakers: number;
   newStandardParts: number;
+  /** The names of the makers and standard parts a commit adds (the first 200 of each), so they can be checked by eye. */
+  newMakerNames?: string[];
+  newStandardPartNames?: string[];
 }
+
+/** How many new names a summary keeps; the counts above are always whole. */
+export const NAMES_KEPT = 200;
 
 export interface ImportProgress {
   phase: "parsing" | "committing";

@@ -7,6 +7,8 @@ const quantity = z.number({ error: "The quantity is a whole number." }).int("The
 export const listInput = z.object({
   title: z.string({ error: "Give the list a title." }).trim().min(2, "Give the list a title, e.g. water pump rebuild.").max(120, "A title is at most 120 characters."),
   machineId: positiveId("the machine").nullable().optional(),
+  /** As on the machine's plate ("22-4100"); checked against the machine's serials by lib/lists. Empty clears it. */
+  machineSerial: z.string({ error: "The serial is text, as on the plate." }).trim().max(20, "A serial is at most 20 characters.").nullable().optional(),
   notes: z.string().trim().max(2000, "Notes are at most 2000 characters.").optional(),
 });
 
@@ -36,6 +38,32 @@ export const linePatch = z.object({
   quantity: quantity.optional(),
   notes: z.string().trim().max(500, "Notes are at most 500 characters.").optional(),
   standardPartId: positiveId("the standard part").nullable().optional(),
+  supplier: z.string({ error: "The supplier is text." }).trim().max(120, "A supplier's name is at most 120 characters.").optional(),
+  supplierNumber: z.string({ error: "The supplier's number is text." }).trim().max(60, "A supplier's number is at most 60 characters.").optional(),
+  /** In the shop's own currency, to the cent: "12.50", or empty to clear. */
+  unitPrice: z
+    .union([z.number({ error: "The unit price is a number." }), z.string({ error: "The unit price is a number." }).trim()])
+    .transform((v, ctx) => {
+      if (v === "") return null;
+      const n = typeof v === "number" ? v : Number(v.replace(",", "."));
+      if (!Number.isFinite(n) || n < 0 || n >= 100_000_000) {
+        ctx.addIssue({ code: "custom", message: "The unit price is a number from 0 up to 99,999,999.99." });
+        return z.NEVER;
+      }
+      if (Math.round(n * 100) !== Number((n * 100).toFixed(6))) {
+        ctx.addIssue({ code: "custom", message: "The unit price has at most two decimal places." });
+        return z.NEVER;
+      }
+      return n.toFixed(2);
+    })
+    .nullable()
+    .optional(),
+  ordered: z.boolean({ error: "ordered is true or false." }).optional(),
+});
+
+/** "Add the rest of the assembly" for one serial, when the list has none: the serial or a range's end, as on the plate. */
+export const assemblyInput = z.object({
+  serial: z.string({ error: "The serial is text, as on the plate." }).trim().min(1, "Type the serial.").max(20, "A serial is at most 20 characters.").optional(),
 });
 
 export const shareInput = z.object({ enabled: z.boolean({ error: "enabled is true or false." }) });

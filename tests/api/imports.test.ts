@@ -3,7 +3,7 @@ import iconv from "iconv-lite";
 import Papa from "papaparse";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Cross, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, User } from "@/db";
+import { Cross, Import, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, User } from "@/db";
 import { runCommit, startCommit } from "@/lib/imports/imports";
 import { getObject } from "@/lib/storage/s3";
 import { APP_URL, send, signIn } from "../helpers/api";
@@ -67,13 +67,18 @@ describe("importing the sample club spreadsheet", () => {
     const response = await upload(admin, SAMPLE, "club-interchange-sample.csv");
     expect(response.status).toBe(202);
     firstId = response.body.id;
-    const stored = await getObject(response.body.objectKey);
+    // People are never shown where the file is stored; the record knows.
+    expect(response.body).not.toHaveProperty("objectKey");
+    const stored = await getObject((await Import.findByPk(firstId))!.objectKey);
     expect(Buffer.from(stored.body).equals(SAMPLE)).toBe(true);
 
     const body = await settled(admin, firstId);
     expect(body).toMatchObject({ status: "parsed", encoding: "utf-8", delimiter: ",", missing: [] });
     expect(body.mapping).toMatchObject({ maker: "Maker", number: "Part No.", category: "Kind", innerMm: "Bore (mm)", outerMm: "OD (mm)", designation: "Standard designation", assembly: "Place on the machine" });
-    expect(body.counts).toEqual({ rows: 14, newParts: 3, newCrosses: 3, updates: 1, unchanged: 3, rejected: 7, newMakers: 1, newStandardParts: 1 });
+    expect(body.counts).toMatchObject({ rows: 14, newParts: 3, newCrosses: 3, updates: 1, unchanged: 3, rejected: 7, newMakers: 1, newStandardParts: 1 });
+    // The summary names what a commit would create, so a misspelt maker is seen before it becomes a second maker.
+    expect(body.counts.newMakerNames).toEqual(["Brandholm Motorverk"]);
+    expect(body.counts.newStandardPartNames).toEqual(["Ball bearing 6006"]);
     expect(body.rejections.map((r: { line: number; column: string }) => [r.line, r.column])).toEqual([
       [9, "Kind"],
       [10, "OD (mm)"],
@@ -113,8 +118,8 @@ describe("importing the sample club spreadsheet", () => {
     const after = await catalogueSnapshot();
     expect(after).toMatchObject({ parts: before.parts + 3, crosses: before.crosses + 3, standards: before.standards + 1, makers: before.makers + 1, usages: before.usages + 1 });
     expect(await hm210Fit()).toBe("direct");
-    const found = (await send("get", "/api/parts/lookup?q=PW-7701")).body.results[0];
-    expect(found).toMatchObject({ number: "PW-7701", crossCount: 1 });
+    const found = (await send("get", "/api/parts/lookup?q=7701.G4")).body.results[0];
+    expect(found).toMatchObject({ number: "7701.G4", crossCount: 1 });
     const crawler = await send("get", `/api/parts/${(await OriginalPart.findOne({ where: { number: "CV-9902-X" } }))!.id}`);
     expect(crawler.body.whereUsed).toEqual([expect.objectContaining({ model: "K-40 Crawler", assembly: "Track roller" })]);
 
@@ -126,7 +131,7 @@ describe("importing the sample club spreadsheet", () => {
     const committed = await catalogueSnapshot();
     const again = await upload(admin, SAMPLE, "club-interchange-sample.csv");
     const parsed = await settled(admin, again.body.id);
-    expect(parsed.counts).toEqual({ rows: 14, newParts: 0, newCrosses: 0, updates: 0, unchanged: 7, rejected: 7, newMakers: 0, newStandardParts: 0 });
+    expect(parsed.counts).toMatchObject({ rows: 14, newParts: 0, newCrosses: 0, updates: 0, unchanged: 7, rejected: 7, newMakers: 0, newStandardParts: 0 });
     await send("post", `/api/imports/${again.body.id}/commit`, {}, { cookie: admin });
     expect((await settled(admin, again.body.id)).status).toBe("committed");
     expect(await catalogueSnapshot()).toEqual(committed);
@@ -141,6 +146,18 @@ describe("importing the sample club spreadsheet", () => {
     expect(await catalogueSnapshot()).toEqual(before);
     expect(await hm210Fit()).toBe("with_modification");
     expect((await send("post", `/api/imports/${firstId}/rollback`, {}, { cookie: admin })).status).toBe(409);
+  });
+
+  it("discards an import never committed, its file too, and keeps a committed one on record", async () => {
+    const response = await upload(admin, SAMPLE, "to-discard.csv");
+    const id = response.body.id as number;
+    await settled(admin, id);
+    const key = (await Import.findByPk(id))!.objectKey;
+    expect((await send("delete", `/api/imports/${id}`, undefined, { cookie: member })).status).toBe(403);
+    expect((await send("delete", `/api/imports/${id}`, undefined, { cookie: admin })).status).toBe(204);
+    expect((await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).status).toBe(404);
+    await expect(getObject(key)).rejects.toThrow();
+    expect((await send("delete", `/api/imports/${firstId}`, undefined, { cookie: admin })).status).toBe(409);
   });
 
   it("leaves the catalogue as it was when a commit fails part-way", async () => {
@@ -177,7 +194,7 @@ describe("other files", () => {
   });
 
   it("asks for a column it cannot match, takes a corrected mapping, and reuses a saved one", async () => {
-    const text = "Maker,Stamped as,Description,Kind,Replacement\r\nPellworth & Sons,PW-8801,Magneto drive bearing,bearing,6201-2RS\r\n";
+    const text = "Maker,Stamped as,Description,Kind,Replacement\r\nPellworth & Sons,8801.K1,Magneto drive bearing,bearing,6201-2RS\r\n";
     const first = await upload(admin, Buffer.from(text), "unusual.csv");
     const parsed = await settled(admin, first.body.id);
     expect(parsed.counts).toBeNull();
@@ -279,7 +296,7 @@ describe("large bodies", () => {
   it("takes a large CSV on the import upload, which makes the origin check itself", async () => {
     // About 600 KB: the sample's rows repeated, well above what any other route takes.
     const header = SAMPLE.toString("utf8").split(/\r?\n/)[0];
-    const rows = Array.from({ length: 6000 }, (_, i) => `Pellworth & Sons,PW-BIG-${i},Test row ${i},bearing,6201-2RS,direct`);
+    const rows = Array.from({ length: 6000 }, (_, i) => `Pellworth & Sons,${9000 + i}.M1,Test row ${i},bearing,6201-2RS,direct`);
     const bytes = Buffer.from([header, ...rows].join("\r\n"));
     expect(bytes.length).toBeGreaterThan(200 * 1024);
     const response = await upload(admin, bytes, "big.csv");

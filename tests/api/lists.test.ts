@@ -41,12 +41,14 @@ describe("job lists belong to their owner", () => {
     // CV-3003-A is superseded by CV-3003-B in the demo catalogue.
     const added = await send("post", `/api/lists/${id}/lines`, { number: "cv 3003a", quantity: 2 }, { cookie: owner });
     expect(added.status).toBe(201);
-    expect(added.body.superseded).toBe(true);
+    expect(added.body).toMatchObject({ superseded: true, read: "CV-3003-A", latestNumber: "CV-3003-B" });
     const again = await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: owner });
     expect(again.status).toBe(200);
     const { body } = await send("get", `/api/lists/${id}`, undefined, { cookie: owner });
     expect(body.lines).toHaveLength(1);
-    expect(body.lines[0]).toMatchObject({ number: "CV-3003-B", requestedNumber: "cv 3003a", quantity: 3, chosen: expect.objectContaining({ designation: "6203-2RS", fit: "direct" }) });
+    // The shared ranking counts CV-3003-A's crosses for CV-3003-B (interchangeable): 6203-2RS C3, five members.
+    expect(body.lines[0]).toMatchObject({ number: "CV-3003-B", earlierNumbers: ["CV-3003-A"], quantity: 3, chosen: expect.objectContaining({ designation: "6203-2RS C3", fit: "direct", viaNumber: "CV-3003-A" }) });
+    expect(body.lines[0]).not.toHaveProperty("requestedNumber");
     expect(body.totals).toEqual([{ category: "bearing", name: "Ball bearing", lines: 1, quantity: 3 }]);
 
     const unknown = await send("post", `/api/lists/${id}/lines`, { number: "ZZ-0000-Q" }, { cookie: owner });
@@ -65,20 +67,61 @@ describe("job lists belong to their owner", () => {
     expect((await send("patch", url, { quantity: 4, standardPartId: shielded.standardPartId, notes: "customer supplies the slinger" }, { cookie: owner })).status).toBe(200);
     const after = (await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body;
     expect(after.lines[0]).toMatchObject({ quantity: 4, notes: "customer supplies the slinger", chosen: { designation: "6203-2Z", fit: "with_modification" } });
-    expect(after.lines[0].warnings[0]).toContain("With modification");
-    expect((await send("delete", url, undefined, { cookie: owner })).status).toBe(204);
+    expect(after.lines[0].warnings[0]).toBe("HM 210 007 → 6203-2Z: fits with modification. Read the notes on the part's page before ordering.");
+    const removed = await send("delete", url, undefined, { cookie: owner });
+    expect(removed.status).toBe(200);
+    expect(removed.body.undoSeconds).toBeGreaterThan(5);
     expect((await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body.lines).toEqual([]);
+    // Undo puts the line back as it was; a second undo has nothing to do.
+    expect((await send("post", `${url}/restore`, {}, { cookie: other })).status).toBe(404);
+    expect((await send("post", `${url}/restore`, {}, { cookie: owner })).status).toBe(200);
+    expect((await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body.lines[0]).toMatchObject({ id: added.lineId, quantity: 4, notes: "customer supplies the slinger" });
+    expect((await send("post", `${url}/restore`, {}, { cookie: owner })).status).toBe(404);
   });
 
-  it("adds the rest of a part's assembly in one step", async () => {
+  it("keeps a shop's supplier, supplier's number, unit price and ordered mark on a line", async () => {
     const id = await newList();
-    const { body: added } = await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-B" }, { cookie: owner });
-    const rest = await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, {}, { cookie: owner });
+    const { body: added } = await send("post", `/api/lists/${id}/lines`, { number: "HM 210 007" }, { cookie: owner });
+    const url = `/api/lists/${id}/lines/${added.lineId}`;
+    expect((await send("patch", url, { unitPrice: "-1" }, { cookie: owner })).body.field).toBe("unitPrice");
+    expect((await send("patch", url, { unitPrice: "4.555" }, { cookie: owner })).body.field).toBe("unitPrice");
+    expect((await send("patch", url, { ordered: "yes" }, { cookie: owner })).body.field).toBe("ordered");
+    expect((await send("patch", url, { supplier: "x".repeat(121) }, { cookie: owner })).body.field).toBe("supplier");
+    expect((await send("patch", url, { supplier: "County Bearings", supplierNumber: "CB-17-40", unitPrice: "6,40", ordered: true }, { cookie: owner })).status).toBe(200);
+    const { body } = await send("get", `/api/lists/${id}`, undefined, { cookie: owner });
+    expect(body.lines[0]).toMatchObject({ supplier: "County Bearings", supplierNumber: "CB-17-40", unitPrice: "6.40", ordered: true });
+    expect((await send("patch", url, { unitPrice: "", supplier: "" }, { cookie: owner })).status).toBe(200);
+    expect((await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body.lines[0]).toMatchObject({ supplier: null, unitPrice: null, ordered: true });
+  });
+
+  it("adds a number with one misread character, saying what it read, and offers several matches as choices", async () => {
+    const id = await newList();
+    // O for 0 on a worn stamping: one part has that number once the look-alikes are folded.
+    const misread = await send("post", `/api/lists/${id}/lines`, { number: "HM 21O OO7" }, { cookie: owner });
+    expect(misread.status).toBe(201);
+    expect(misread.body.read).toBe("HM 210 007");
+    // A number that is only similar to real ones is not guessed: the nearest come back as choices.
+    const near = await send("post", `/api/lists/${id}/lines`, { number: "CV-3003-Q" }, { cookie: owner });
+    expect(near.status).toBe(400);
+    expect(near.body.field).toBe("number");
+    expect(near.body.choices.map((c: { number: string }) => c.number)).toContain("CV-3003-A");
+    expect(near.body.choices[0]).toEqual({ partId: expect.any(Number), number: expect.any(String), maker: expect.any(String), description: expect.any(String) });
+  });
+
+  it("adds the rest of a part's assembly in one step, one part for each position", async () => {
+    const id = await newList();
+    const { body: added } = await send("post", `/api/lists/${id}/lines`, { number: "HM 210 007" }, { cookie: owner });
+    // The list names no machine serial; where the pump's parts changed with the serial, it asks which range.
+    const asked = await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, {}, { cookie: owner });
+    expect(asked.status).toBe(400);
+    expect(asked.body.field).toBe("serial");
+    const rest = await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, { serial: asked.body.choices[0].serial }, { cookie: owner });
     expect(rest.status).toBe(200);
     expect(rest.body.added).toBeGreaterThan(0);
     expect(rest.body.assembly).toBe("Water pump");
     const list = (await send("get", `/api/lists/${id}`, undefined, { cookie: owner })).body;
     expect(list.lines).toHaveLength(1 + rest.body.added);
+    expect(new Set(list.lines.map((l: { description: string }) => l.description)).size).toBe(list.lines.length);
     expect((await send("post", `/api/lists/${id}/lines/${added.lineId}/assembly`, {}, { cookie: owner })).body.added).toBe(0);
   });
 
@@ -101,9 +144,14 @@ describe("export and sharing", () => {
     expect(response.headers["content-disposition"]).toContain("export-check.csv");
     const parsed = Papa.parse<Record<string, string>>(response.text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
+    expect(parsed.meta.fields).toEqual([
+      "List", "Machine", "Serial", "Factory number", "Earlier numbers", "Maker", "Description", "Standard designation", "Kind of part", "Sizes", "Fit", "Quantity",
+      "Supplier", "Supplier's number", "Unit price", "Ordered", "Notes",
+    ]);
+    // ISO 15:2017, deep groove ball bearings, series 62: 6203 is 17 × 40 × 12 mm.
     expect(parsed.data).toEqual([
-      expect.objectContaining({ "Factory number": "CV-3003-B", "Standard designation": "6203-2RS", "Bore mm": "17", "Outside mm": "40", "Width mm": "12", Quantity: "2", Notes: 'front, "sealed" please' }),
-      expect.objectContaining({ "Factory number": "CV-3008-A", "Standard designation": "32 × 47 × 8 mm, spring-loaded lip, rubber OD", Quantity: "1" }),
+      expect.objectContaining({ List: "Export check", "Factory number": "CV-3003-B", "Earlier numbers": "CV-3003-A", "Standard designation": "6203-2RS C3", "Kind of part": "Ball bearing", Sizes: "17 × 40 × 12 mm", Fit: "Direct", Quantity: "2", Notes: 'front, "sealed" please' }),
+      expect.objectContaining({ "Factory number": "CV-3008-A", "Earlier numbers": "", "Standard designation": "32 × 47 × 8 mm, spring-loaded lip, rubber OD", Sizes: "32 × 47 × 8 mm", Quantity: "1", Notes: "" }),
     ]);
     expect((await send("get", `/api/lists/${id}/export.csv`, undefined, { cookie: other })).status).toBe(404);
   });
@@ -159,10 +207,8 @@ describe("POST /api/lists/{id}/lines with a standard part from a calculator", ()
     expect(body.lines[0].chosen.outerMm).toBeCloseTo(60.2996, 3);
 
     const csv = await send("get", `/api/lists/${id}/export.csv`, undefined, { cookie: owner });
-    const rows = Papa.parse<string[]>(csv.text.trim()).data;
-    expect(rows[1][0]).toBe("");
-    expect(rows[1][4]).toBe("1-1/2 × 2.374 × 1/2 in");
-    expect(rows[1]).toContain("sized from measurements");
+    const [row] = Papa.parse<Record<string, string>>(csv.text.replace(/^\uFEFF/, "").trim(), { header: true }).data;
+    expect(row).toMatchObject({ "Factory number": "", Maker: "", "Standard designation": "1-1/2 × 2.374 × 1/2 in", Fit: "sized from measurements" });
   });
 
   it("refuses a line that names no part, or two at once, with the field", async () => {

@@ -122,6 +122,13 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     expect(rejected.status).toBe(200);
     const mail = await waitForMail(MEMBER, "was not accepted");
     expect(mail.text).toContain("6205 is too narrow for this housing.");
+    expect(mail.text).toContain(`/proposals/${id}`);
+    // The member opens their own proposal, with the moderator's message; another member cannot.
+    const page = await send("get", `/proposals/${id}`, undefined, { cookie: member });
+    expect(page.status).toBe(200);
+    expect(page.text).toContain("6205 is too narrow for this housing.");
+    expect(page.text).toContain("The moderator&#x27;s message");
+    expect((await send("get", `/proposals/${id}`, undefined, { cookie: other })).status).toBe(404);
     expect((await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator })).status).toBe(409);
   });
 

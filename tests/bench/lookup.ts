@@ -19,6 +19,9 @@ const scenarios: Array<{ name: string; path: () => string }> = [
   { name: "look-up, exact", path: () => { const g = pick(); return `/api/parts/lookup?q=SY-${digits(g)}-${letter(g)}`; } },
   { name: "look-up, normalised", path: () => { const g = pick(); return `/api/parts/lookup?q=${encodeURIComponent(`sy ${digits(g)} ${letter(g).toLowerCase()}`)}`; } },
   { name: "look-up, fuzzy (a digit missing)", path: () => { const g = pick(); const d = digits(g); return `/api/parts/lookup?q=SY-${d.slice(0, 2)}${d.slice(3)}-${letter(g)}`; } },
+  { name: "look-up, partial number (first four digits)", path: () => { const g = pick(); return `/api/parts/lookup?q=SY-${digits(g).slice(0, 4)}`; } },
+  { name: "look-up, words", path: () => `/api/parts/lookup?q=${encodeURIComponent(`synthetic part ${pick()}`)}` },
+  { name: "part with its ranked crosses", path: () => `/api/parts/${1000 + Math.floor(Math.random() * (PARTS - 1000))}` },
   { name: "floor: a route with no database work", path: () => `/api/units/nominal?value=${(25 + Math.random()).toFixed(3)}&unit=mm` },
   { name: "measured-size search", path: () => { const [d, D, B] = SIZES[Math.floor(Math.random() * SIZES.length)]; return `/api/bearings/match?bore=${d + 0.02}&od=${D - 0.02}&width=${B}&unit=mm`; } },
 ];

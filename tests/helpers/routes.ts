@@ -40,10 +40,12 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "imports/[id]": [
     { method: "get", path: () => "/api/imports/999999", door: "imports:review-queue" },
     { method: "patch", path: () => "/api/imports/999999", door: "imports:review-queue", body: {} },
+    { method: "delete", path: () => "/api/imports/999999", door: "imports:review-queue" },
   ],
   "imports/[id]/rows": [{ method: "get", path: () => "/api/imports/999999/rows", door: "imports:review-queue" }],
   "imports": [{ method: "get", path: () => "/api/imports", door: "imports:review-queue" }],
   "lists/[id]/export.csv": [{ method: "get", path: (listId) => `/api/lists/${listId}/export.csv`, door: "lists:manage" }],
+  "lists/[id]/lines/[lineId]/restore": [{ method: "post", path: (listId) => `/api/lists/${listId}/lines/999999/restore`, door: "lists:manage", body: {} }],
   "lists/[id]/lines/[lineId]/assembly": [{ method: "post", path: (listId) => `/api/lists/${listId}/lines/999999/assembly`, door: "lists:manage", body: {} }],
   "lists/[id]/lines/[lineId]": [
     { method: "patch", path: (listId) => `/api/lists/${listId}/lines/999999`, door: "lists:manage", body: { quantity: 0 } },

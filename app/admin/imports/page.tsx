@@ -9,7 +9,8 @@ import { STATUS_WORDS, TARGET_WORDS } from "@/lib/imports/kinds";
 
 export const metadata: Metadata = { title: "Imports" };
 
-export default async function ImportsPage() {
+export default async function ImportsPage({ searchParams }: { searchParams: Promise<{ discarded?: string }> }) {
+  const { discarded } = await searchParams;
   const user = await requirePagePermission("imports:review-queue", "/admin/imports");
   const [imports, mappings] = await Promise.all([listImports(user), listMappings()]);
   const isAdmin = hasPermission(user.role, "imports:commit");
@@ -22,6 +23,7 @@ export default async function ImportsPage() {
           would do. {isAdmin ? "A committed import can be rolled back as a whole." : "As a moderator you import into the review queue, where another moderator decides each row."}
         </p>
       </header>
+      {discarded && <Notice tone="success">The import was discarded. Nothing in the catalogue changed.</Notice>}
       <ImportUpload canCommitToCatalogue={isAdmin} mappings={mappings.map((m) => ({ id: m.id, name: m.name }))} />
       <section aria-labelledby="past-heading" className="space-y-3">
         <h2 id="past-heading" className="text-2xl">

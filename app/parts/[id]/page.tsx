@@ -77,7 +77,9 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
             ))}
           </div>
         )}
-        <p className="text-sm text-ink-soft">Ranked by fit, then by how many members fitted each. None is guaranteed: measure before you order.</p>
+        <p className="text-sm text-ink-soft">
+          Ranked by fit, then by how many members fitted each, counting the numbers this one is interchangeable with and any newer number that replaces it. None is guaranteed: measure before you order.
+        </p>
         <p>
           <Link href={`/propose?part=${part.id}`}>Fitted something else that works? Propose a cross for this part</Link>
         </p>
@@ -135,23 +137,29 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
             <thead className="bg-ground-sunk text-sm">
               <tr>
                 <th scope="col" className="p-3">Machine</th>
-                <th scope="col" className="p-3">Assembly</th>
+                <th scope="col" className="p-3">Where on it</th>
                 <th scope="col" className="p-3">Qty</th>
                 <th scope="col" className="p-3">Serial numbers</th>
               </tr>
             </thead>
             <tbody>
               {part.whereUsed.map((u) => (
-                <tr key={`${u.machineId}-${u.assembly}`} className="border-t border-rule">
+                <tr key={`${u.machineId}-${u.assembly}-${u.serials}`} className="border-t border-rule">
                   <td className="p-3">
                     <Link href={`/machines/${u.machineId}`}>
                       {u.maker} {u.model}
                     </Link>{" "}
                     <span className="text-sm text-ink-soft">{u.years}</span>
                   </td>
-                  <td className="p-3">{u.assembly}</td>
+                  <td className="p-3">
+                    {u.assembly}
+                    {u.position !== part.description && <span className="block text-sm text-ink-soft">{u.position}</span>}
+                  </td>
                   <td className="num p-3">{u.quantity}</td>
-                  <td className="p-3 text-sm">{u.serialNote ?? "all"}</td>
+                  <td className="p-3 text-sm">
+                    <span className="num">{u.serials ?? "all"}</span>
+                    {u.serialNote && <span className="block text-ink-soft">{u.serialNote}</span>}
+                  </td>
                 </tr>
               ))}
             </tbody>
@@ -173,6 +181,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
                 </Link>
                 <span className="block text-sm text-ink-soft">
                   {p.description} · {p.model}, {p.assembly.toLowerCase()}
+                  {p.serials && `, ${p.serials}`}
                 </span>
                 {p.standard && <span className="num block text-sm">→ {p.standard}</span>}
               </li>

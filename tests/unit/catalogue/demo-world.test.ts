@@ -50,4 +50,26 @@ describe("the invented demo catalogue", () => {
       expect(p.outerMm).toBeGreaterThan(p.innerMm!);
     }
   });
+
+  it("lays the parts of one position on one machine end to end over the serials: one part for any serial", () => {
+    const groups = new Map<string, typeof demo.usages>();
+    for (const u of demo.usages.filter((x) => !x.serialNote?.startsWith("Service replacement"))) {
+      const key = `${u.machineKey}|${u.assembly}|${u.position}`;
+      groups.set(key, [...(groups.get(key) ?? []), u]);
+    }
+    for (const group of groups.values()) {
+      const sorted = [...group].sort((a, b) => (a.serialFrom ?? -1) - (b.serialFrom ?? -1));
+      expect(sorted[0].serialFrom).toBeNull();
+      expect(sorted.at(-1)!.serialTo).toBeNull();
+      for (let i = 1; i < sorted.length; i += 1) expect(sorted[i].serialFrom).toBe(sorted[i - 1].serialTo! + 1);
+    }
+  });
+
+  it("gives each maker a numbering shape of its own, and machines names of their own", () => {
+    const shapes: Record<string, RegExp> = { corvane: /^CV-\d{4}-[A-E]$/, halvard: /^HM \d{3} \d{3}( [A-D])?$/, pellworth: /^\d{4}\.[FGHKM][1-9]( R\d)?$/ };
+    for (const p of demo.parts) expect(p.number).toMatch(shapes[p.makerKey]);
+    // A digit, a letter, a dash and four digits is a real maker's numbering shape; the demo uses none like it.
+    expect(demo.parts.some((p) => /^\d[A-Z]-\d{4}/.test(p.number))).toBe(false);
+    expect(buildDemoCatalogue()).toEqual(demo);
+  });
 });

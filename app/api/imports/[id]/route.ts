@@ -1,7 +1,7 @@
 import { after } from "next/server";
 import { requirePermission } from "@/lib/auth/session";
 import { handle, readJson } from "@/lib/http/handle";
-import { dryRun, getImport, setMapping } from "@/lib/imports/imports";
+import { discardImport, dryRun, getImport, setMapping } from "@/lib/imports/imports";
 import { mappingBody } from "@/lib/validation/imports";
 import { parseWith } from "@/lib/validation/parse";
 import { idParam } from "@/lib/validation/ids";
@@ -25,4 +25,12 @@ export const PATCH = handle<Context>(async (request, { params }) => {
   await setMapping(user, id, mapping);
   after(() => dryRun(id));
   return Response.json(await getImport(user, id), { status: 202 });
+});
+
+/** Throws away an import that was never committed (its dry run, rejected rows and file). */
+export const DELETE = handle<Context>(async (_request, { params }) => {
+  const user = await requirePermission("imports:review-queue");
+  const { id } = parseWith(idParam, await params);
+  await discardImport(user, id);
+  return new Response(null, { status: 204 });
 });

@@ -1,4 +1,4 @@
-import { findPartsByNumber } from "@/lib/catalogue/find-parts";
+import { lookUpParts } from "@/lib/catalogue/find-parts";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { lookupQuery } from "@/lib/validation/catalogue";
@@ -6,7 +6,8 @@ import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";
 
+/** `?q=` a factory number, part of one, or words; `&maker=` an id keeps the results to one maker; `&limit=`. */
 export const GET = handle(async (request) => {
-  const { q, limit } = parseWith(lookupQuery, queryOf(request));
-  return Response.json({ results: await findPartsByNumber(q, limit) });
+  const { q, limit, maker } = parseWith(lookupQuery, queryOf(request));
+  return Response.json({ results: await lookUpParts(q, { limit, makerId: maker ?? null }) });
 });

@@ -18,6 +18,6 @@ export const PATCH = handle<Context>(async (request, { params }) => {
 export const DELETE = handle<Context>(async (_request, { params }) => {
   const user = await requirePermission("lists:manage");
   const { id, lineId } = parseWith(listLineParams, await params);
-  await removeLine(user.id, id, lineId);
-  return new Response(null, { status: 204 });
+  // The answer says how long the removal can be undone (POST …/restore).
+  return Response.json(await removeLine(user.id, id, lineId));
 });
