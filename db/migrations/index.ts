@@ -6,6 +6,7 @@ import * as measuredListLines from "@/db/migrations/0005-measured-list-lines";
 import * as oneApprovedCross from "@/db/migrations/0006-one-approved-cross";
 import * as hashedSessions from "@/db/migrations/0007-hashed-sessions";
 import * as serialsWordsAndOrders from "@/db/migrations/0008-serials-words-and-orders";
+import * as nearNumberIndex from "@/db/migrations/0009-near-number-index";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   { name: "0006-one-approved-cross", ...oneApprovedCross },
   { name: "0007-hashed-sessions", ...hashedSessions },
   { name: "0008-serials-words-and-orders", ...serialsWordsAndOrders },
+  { name: "0009-near-number-index", ...nearNumberIndex },
 ];

@@ -44,7 +44,8 @@ export async function seedLargeCatalogue(parts: number, log: (message: string) =
                     CASE WHEN (p.id + k) % 10 = 0 THEN 'pending' ELSE 'approved' END::enum_crosses_status, 'import', now(), now()
              FROM original_parts p JOIN makers mk ON mk.id = p.maker_id AND mk.name = 'Synthetic Works'
              CROSS JOIN generate_series(1, 4) k
-             JOIN targets t ON t.i = (p.id * k) % (SELECT count(*) FROM targets)`);
+             JOIN targets t ON t.i = (p.id * k) % (SELECT count(*) FROM targets)
+             ON CONFLICT DO NOTHING`); // a part may draw one standard part twice; one approved cross of each is kept
   });
   await sequelize.query("ANALYZE");
   log(`synthetic catalogue loaded in ${Math.round((Date.now() - started) / 1000)} s`);

@@ -80,9 +80,9 @@ function wordsQuery(query: string): string | null {
 /**
  * Finds original parts for what a person typed: a factory number from a worn stamping, part of one, or words.
  *
- * In order: exact, reformatted and look-alike matches; numbers that start with what was typed; similar numbers
- * (trigram candidates from PostgreSQL, ranked by fuse.js), which still follow an exact hit because one wrong digit may
- * match another real number; and parts found by words through PostgreSQL full-text search. When the typed number
+ * In order: exact, reformatted and look-alike matches; numbers that start with what was typed; similar numbers, which
+ * still follow an exact hit because one wrong digit may match another real number; and parts found by words through
+ * PostgreSQL full-text search. When the typed number
  * starts with a maker's prefix, that maker's numbers come before others'. `makerId` keeps the results to one maker.
  */
 export async function lookUpParts(query: string, options: { limit: number; makerId?: number | null }): Promise<LookupResult[]> {
@@ -100,25 +100,16 @@ export async function lookUpParts(query: string, options: { limit: number; maker
   const tsquery = WORDY.test(query) ? wordsQuery(query) : null;
   const from = `FROM original_parts p JOIN makers m ON m.id = p.maker_id`;
 
-  const [sameRows, prefixRows, nearRows, wordRows] = await Promise.all([
-    sequelize.query<PartRow>(`SELECT ${COLUMNS} ${from} WHERE (p.number_normalized IN (:forms) OR p.number_key IN (:keys)) ${makerFilter} LIMIT 200`, {
-      replacements: { forms, keys, makerId },
-      type: QueryTypes.SELECT,
-    }),
-    stripped.length >= 2
-      ? sequelize.query<PartRow>(
-          `SELECT ${COLUMNS} ${from} WHERE (p.number_normalized LIKE :like OR p.number_key LIKE :likeKey) ${makerFilter}
-           ORDER BY length(p.number_normalized), p.number_normalized LIMIT 80`,
-          { replacements: { like: `${stripped}%`, likeKey: `${key}%`, makerId }, type: QueryTypes.SELECT },
-        )
-      : Promise.resolve([]),
-    // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
-    key.length >= 3
-      ? sequelize.query<PartRow>(`SELECT ${COLUMNS} ${from} WHERE p.number_key % :key ${makerFilter} ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`, {
-          replacements: { key, makerId },
-          type: QueryTypes.SELECT,
-        })
-      : Promise.resolve([]),
+  // First round: the number itself (exact, reformatted, look-alike) and numbers that start with it, in one query;
+  // words beside it.
+  const [numberRows, wordRows] = await Promise.all([
+    sequelize.query<PartRow>(
+      `SELECT ${COLUMNS} ${from}
+       WHERE (p.number_normalized IN (:forms) OR p.number_key IN (:keys)
+              OR (:prefixes AND (p.number_normalized LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter}
+       ORDER BY length(p.number_normalized), p.number_normalized LIMIT 200`,
+      { replacements: { forms, keys, prefixes: stripped.length >= 2, like: `${stripped}%`, likeKey: `${key}%`, makerId }, type: QueryTypes.SELECT },
+    ),
     tsquery
       ? sequelize.query<PartRow & { rank: number }>(
           `SELECT ${COLUMNS}, ts_rank(p.search_document, q) AS rank ${from}, to_tsquery('english', :tsquery) q
@@ -136,12 +127,35 @@ export async function lookUpParts(query: string, options: { limit: number; maker
     found.set(row.id, { row, matchedBy, score: Math.round((BAND[matchedBy] - 0.05 + Math.max(0, Math.min(within, 1)) * 0.04 + named) * 1000) / 1000 });
   };
   const asTyped = query.trim().toUpperCase();
-  for (const row of sameRows) {
+  const isSame = (row: PartRow) => forms.includes(row.number_normalized) || keys.includes(row.number_key);
+  for (const row of numberRows.filter(isSame)) {
     const matchedBy: MatchedBy = row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalized) ? "normalised" : "misread";
     add(row, matchedBy, 1);
   }
-  for (const row of prefixRows) add(row, "prefix", stripped.length / Math.max(row.number_normalized.length, 1));
-  if (nearRows.length > 0) {
+  const hit = found.size > 0;
+  for (const row of numberRows) add(row, "prefix", stripped.length / Math.max(row.number_normalized.length, 1));
+
+  // Second round: similar numbers. After a hit, those one character away (they share the first or the last half
+  // of the number exactly, which the prefix and reversed-number indexes find quickly); otherwise, when there is
+  // room, trigram candidates from PostgreSQL ranked by fuse.js.
+  if (hit && key.length >= 4) {
+    const half = Math.floor(key.length / 2);
+    const near = await sequelize.query<PartRow & { distance: number }>(
+      `SELECT ${COLUMNS}, levenshtein(p.number_key, :key) AS distance ${from}
+       WHERE (p.number_key LIKE :head OR reverse(p.number_key) LIKE :tail) AND levenshtein(p.number_key, :key) BETWEEN 1 AND :allowed ${makerFilter}
+       ORDER BY levenshtein(p.number_key, :key), p.number_key LIMIT 60`,
+      {
+        replacements: { key, head: `${key.slice(0, half)}%`, tail: `${[...key.slice(half)].reverse().join("")}%`, allowed: key.length >= 8 ? 2 : 1, makerId },
+        type: QueryTypes.SELECT,
+      },
+    );
+    for (const row of near) add(row, "similar", 1 - row.distance / key.length);
+  } else if (!hit && found.size < options.limit && key.length >= 3) {
+    // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
+    const nearRows = await sequelize.query<PartRow>(`SELECT ${COLUMNS} ${from} WHERE p.number_key % :key ${makerFilter} ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`, {
+      replacements: { key, makerId },
+      type: QueryTypes.SELECT,
+    });
     const fuse = new Fuse(nearRows, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
     for (const hit of fuse.search(key)) add(hit.item, "similar", 1 - (hit.score ?? 1));
   }

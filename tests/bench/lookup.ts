@@ -10,6 +10,13 @@ const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
 if (!/^http:\/\/(127\.0\.0\.1|localhost)(:\d+)?$/.test(APP_URL)) throw new Error("The benchmark only targets a server on this machine.");
 
 const PARTS = 250_000;
+// Ids of 200 synthetic parts drawn at random, found by their numbers, for the part page's scenario.
+const partIds: number[] = [];
+for (let i = 0; i < 200; i += 1) {
+  const g = 1 + Math.floor(Math.random() * PARTS);
+  const found = await fetch(`${APP_URL}/api/parts/lookup?q=SY-${String(g).padStart(6, "0")}-${String.fromCharCode(65 + (g % 5))}&limit=1`);
+  partIds.push(((await found.json()) as { results: Array<{ id: number }> }).results[0].id);
+}
 const pick = () => 1 + Math.floor(Math.random() * PARTS);
 const digits = (g: number) => String(g).padStart(6, "0");
 const letter = (g: number) => String.fromCharCode(65 + (g % 5));
@@ -21,7 +28,7 @@ const scenarios: Array<{ name: string; path: () => string }> = [
   { name: "look-up, fuzzy (a digit missing)", path: () => { const g = pick(); const d = digits(g); return `/api/parts/lookup?q=SY-${d.slice(0, 2)}${d.slice(3)}-${letter(g)}`; } },
   { name: "look-up, partial number (first four digits)", path: () => { const g = pick(); return `/api/parts/lookup?q=SY-${digits(g).slice(0, 4)}`; } },
   { name: "look-up, words", path: () => `/api/parts/lookup?q=${encodeURIComponent(`synthetic part ${pick()}`)}` },
-  { name: "part with its ranked crosses", path: () => `/api/parts/${1000 + Math.floor(Math.random() * (PARTS - 1000))}` },
+  { name: "part with its ranked crosses", path: () => `/api/parts/${partIds[Math.floor(Math.random() * partIds.length)]}` },
   { name: "floor: a route with no database work", path: () => `/api/units/nominal?value=${(25 + Math.random()).toFixed(3)}&unit=mm` },
   { name: "measured-size search", path: () => { const [d, D, B] = SIZES[Math.floor(Math.random() * SIZES.length)]; return `/api/bearings/match?bore=${d + 0.02}&od=${D - 0.02}&width=${B}&unit=mm`; } },
 ];
