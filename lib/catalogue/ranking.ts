@@ -1,6 +1,7 @@
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
 import { FITS, type Fit, type StandardKind } from "@/lib/catalogue/kinds";
+import { walk } from "@/lib/catalogue/supersessions";
 
 /**
  * The one place that decides which standard parts take a factory part's place, and in what order. The part page,
@@ -92,20 +93,6 @@ export function rankCrossRows(startId: number, rows: CrossRow[]): RankedCross[] 
   );
 }
 
-/** The numbers whose crosses count for each part: itself, its interchangeable chain, and newer numbers across one-way links. */
-const REACH = `
-  WITH RECURSIVE reach(start_id, part_id, path) AS (
-    SELECT id, id, ARRAY[id] FROM original_parts WHERE id IN (:ids)
-    UNION ALL
-    SELECT r.start_id, CASE WHEN s.old_part_id = r.part_id THEN s.new_part_id ELSE s.old_part_id END,
-           r.path || CASE WHEN s.old_part_id = r.part_id THEN s.new_part_id ELSE s.old_part_id END
-    FROM reach r JOIN supersessions s
-      ON (s.old_part_id = r.part_id AND s.kind IN ('interchangeable', 'one_way'))
-      OR (s.new_part_id = r.part_id AND s.kind = 'interchangeable')
-    WHERE NOT (CASE WHEN s.old_part_id = r.part_id THEN s.new_part_id ELSE s.old_part_id END) = ANY(r.path) AND cardinality(r.path) < 25
-  ),
-  sources AS (SELECT DISTINCT start_id, part_id FROM reach)`;
-
 /** Every part's ranked crosses, for many parts in one query. Parts with none get an empty list. */
 export async function rankCrosses(partIds: readonly number[], options: { photos?: boolean } = {}): Promise<Map<number, RankedCross[]>> {
   const ids = [...new Set(partIds)];
@@ -116,7 +103,8 @@ export async function rankCrosses(partIds: readonly number[], options: { photos?
           WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos`
     : "";
   const rows = await sequelize.query<CrossRow>(
-    `${REACH}
+    `${walk("fits")},
+     sources AS (SELECT DISTINCT start_id, part_id FROM walk)
      SELECT src.start_id, c.id, c.original_part_id AS part_id, p.number, c.fit, c.standard_part_id, c.repair_method, c.notes, c.origin,
             (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations${photos},
             s.kind, s.designation, s.inner_mm, s.outer_mm, s.width_mm, s.length_mm, s.attributes

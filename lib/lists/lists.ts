@@ -483,7 +483,7 @@ export interface SerialChoice {
   label: string;
 }
 
-interface PlaceUsage {
+export interface PlaceUsage {
   part_id: number;
   position: string;
   quantity: number;
@@ -491,8 +491,35 @@ interface PlaceUsage {
   serial_to: number | null;
 }
 
+type SerialRange = { serialFrom: number | null; serialTo: number | null };
+
+/**
+ * One part for each open position of an assembly, under its latest number: the one for `serial`, or, with no serial,
+ * the one the line's own serials (`own`) allow, since an early-only bearing means an early machine. Positions where
+ * several parts remain and their records say which serials each was for come back `undecided`, to ask about.
+ */
+export function planPositions(positions: Map<string, PlaceUsage[]>, latestOf: Map<number, number>, serial: number | null, own: SerialRange) {
+  const overlapsOwn = (u: PlaceUsage) =>
+    (u.serial_to === null || own.serialFrom === null || u.serial_to >= own.serialFrom) && (u.serial_from === null || own.serialTo === null || u.serial_from <= own.serialTo);
+  const planned: Array<{ partId: number; quantity: number }> = [];
+  const undecided: PlaceUsage[][] = [];
+  for (const candidates of positions.values()) {
+    const fitting = serial === null ? candidates.filter(overlapsOwn) : candidates.filter((u) => coversSerial({ serialFrom: u.serial_from, serialTo: u.serial_to }, serial));
+    const distinct = [...new Map(fitting.map((u) => [latestOf.get(u.part_id)!, u])).entries()];
+    if (distinct.length === 0) continue;
+    if (distinct.length > 1 && serial === null && fitting.some((u) => u.serial_from !== null || u.serial_to !== null)) {
+      undecided.push(fitting);
+      continue;
+    }
+    // One part per position: with a serial there is one; records that still overlap give the earliest-listed.
+    const [partId, u] = distinct[0];
+    if (!planned.some((p) => p.partId === partId)) planned.push({ partId, quantity: u.quantity });
+  }
+  return { planned, undecided };
+}
+
 /** The ranges the breaks of an assembly's serial-bound parts cut the serials into, each with a serial inside it. */
-function serialChoices(usages: PlaceUsage[], prefix: string | null, within: { serialFrom: number | null; serialTo: number | null }): SerialChoice[] {
+function serialChoices(usages: PlaceUsage[], prefix: string | null, within: SerialRange): SerialChoice[] {
   const inside = (v: number) => (within.serialFrom === null || v > within.serialFrom) && (within.serialTo === null || v <= within.serialTo);
   const breaks = [...new Set(usages.flatMap((u) => [u.serial_from, u.serial_to === null ? null : u.serial_to + 1]).filter((v): v is number => v !== null && inside(v)))].sort((a, b) => a - b);
   const choices: SerialChoice[] = [];
@@ -548,29 +575,18 @@ export async function addRestOfAssembly(userId: string, listId: number, lineId: 
   const latest = await Promise.all([...new Set(place.map((u) => u.part_id))].map(async (id) => [id, (await loadChain(id)).latestId] as const));
   const latestOf = new Map(latest);
 
-  // Without a serial, the line's own part narrows it: an early-only bearing means an early machine.
   const own = { serialFrom: usage.serial_from, serialTo: usage.serial_to };
-  const overlapsOwn = (u: PlaceUsage) => (u.serial_to === null || own.serialFrom === null || u.serial_to >= own.serialFrom) && (u.serial_from === null || own.serialTo === null || u.serial_from <= own.serialTo);
-  const planned: Array<{ partId: number; quantity: number }> = [];
-  const undecided: PlaceUsage[] = [];
-  for (const [, candidates] of positions) {
-    const fitting = serial === null ? candidates.filter(overlapsOwn) : candidates.filter((u) => coversSerial({ serialFrom: u.serial_from, serialTo: u.serial_to }, serial));
-    const distinct = [...new Map(fitting.map((u) => [latestOf.get(u.part_id)!, u])).entries()];
-    if (distinct.length === 0) continue;
-    // Several parts for one position and no serial: ask, if their records say which serials each was for.
-    if (distinct.length > 1 && serial === null && fitting.some((u) => u.serial_from !== null || u.serial_to !== null)) {
-      undecided.push(...fitting);
-      continue;
-    }
-    // One part per position: with a serial there is one; records that still overlap give the earliest-listed.
-    const [partId, u] = distinct[0];
-    if (!planned.some((p) => p.partId === partId)) planned.push({ partId, quantity: u.quantity });
-  }
+  const { planned, undecided } = planPositions(positions, latestOf, serial, own);
   if (undecided.length > 0) {
-    throw new AppError("validation_failed", `Parts of the ${usage.model} ${usage.assembly.toLowerCase()} changed with the serial number. Which serial is the machine?`, {
-      field: "serial",
-      choices: serialChoices(undecided, usage.serial_prefix, own),
-    });
+    const choices = serialChoices(undecided.flat(), usage.serial_prefix, own);
+    if (choices.length > 1) {
+      throw new AppError("validation_failed", `Parts of the ${usage.model} ${usage.assembly.toLowerCase()} changed with the serial number. Which serial is the machine?`, {
+        field: "serial",
+        choices,
+      });
+    }
+    // Records that overlap with no serial between them to tell them apart: the earliest-listed part of each.
+    for (const fitting of undecided) planned.push({ partId: latestOf.get(fitting[0].part_id)!, quantity: fitting[0].quantity });
   }
 
   const best = await equivalentsFor(planned.map((p) => p.partId));

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { rankCrossRows, type CrossRow } from "@/lib/catalogue/ranking";
 import { coversSerial, parseSerial, serialRangeText } from "@/lib/catalogue/serials";
+import { planPositions } from "@/lib/lists/lists";
 
 const row = (over: Partial<CrossRow>): CrossRow => ({
   start_id: 1, id: 100, part_id: 1, number: "A-1", fit: "direct", standard_part_id: 10, repair_method: null, notes: null, origin: "editor", confirmations: 0,
@@ -64,5 +65,27 @@ describe("machine serials", () => {
     expect(coversSerial({ serialFrom: 1341, serialTo: 2890 }, 2890)).toBe(true);
     expect(coversSerial({ serialFrom: 1341, serialTo: 2890 }, 2891)).toBe(false);
     expect(coversSerial({ serialFrom: null, serialTo: null }, 1)).toBe(true);
+  });
+});
+
+describe("planPositions: one part for each position of an assembly", () => {
+  const usage = (part_id: number, position: string, serial_from: number | null, serial_to: number | null) => ({ part_id, position, quantity: 1, serial_from, serial_to });
+  const positions = new Map([
+    ["front", [usage(1, "front", null, 1340), usage(2, "front", 1341, null)]],
+    ["rear", [usage(3, "rear", null, null)]],
+  ]);
+  const latestOf = new Map([[1, 11], [2, 2], [3, 3]]);
+  const open = { serialFrom: null, serialTo: null };
+
+  it("takes the part for the serial, under its latest number", () => {
+    expect(planPositions(positions, latestOf, 1000, open)).toEqual({ planned: [{ partId: 11, quantity: 1 }, { partId: 3, quantity: 1 }], undecided: [] });
+    expect(planPositions(positions, latestOf, 1341, open).planned).toContainEqual({ partId: 2, quantity: 1 });
+  });
+
+  it("with no serial, lets the line's own serials decide, and leaves the rest to ask about", () => {
+    expect(planPositions(positions, latestOf, null, { serialFrom: null, serialTo: 900 }).planned).toEqual([{ partId: 11, quantity: 1 }, { partId: 3, quantity: 1 }]);
+    const asked = planPositions(positions, latestOf, null, open);
+    expect(asked.planned).toEqual([{ partId: 3, quantity: 1 }]);
+    expect(asked.undecided).toHaveLength(1);
   });
 });
