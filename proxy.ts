@@ -31,7 +31,11 @@ export function proxy(request: NextRequest) {
     // Only the import upload takes a large body, and it does not pass through here (see config.matcher).
     if (Number(request.headers.get("content-length") ?? 0) > MAX_BODY_BYTES) {
       return NextResponse.json(
-        { error: "validation_failed", message: `The request body is larger than ${MAX_BODY_BYTES / 1024} KB.`, field: "body" },
+        {
+          error: "validation_failed",
+          message: `The request body is larger than ${MAX_BODY_BYTES / 1024} KB.`,
+          field: "body",
+        },
         { status: 413 },
       );
     }
@@ -49,7 +53,10 @@ export function proxy(request: NextRequest) {
 
   // A fresh nonce for every page: Next reads it from the request's policy and puts it on its own scripts.
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
-  const policy = contentSecurityPolicy(nonce, { development: process.env.NODE_ENV === "development", photoStore: photoStoreOrigin(process.env.S3_ENDPOINT) });
+  const policy = contentSecurityPolicy(nonce, {
+    development: process.env.NODE_ENV === "development",
+    photoStore: photoStoreOrigin(process.env.S3_ENDPOINT),
+  });
   const requestHeaders = new Headers(request.headers);
   requestHeaders.set("content-security-policy", policy);
   const response = NextResponse.next({ request: { headers: requestHeaders } });

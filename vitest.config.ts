@@ -11,7 +11,13 @@ export default defineConfig({
       { resolve: { alias }, test: { name: "unit", include: ["tests/unit/**/*.test.ts"], environment: "node" } },
       {
         resolve: { alias },
-        test: { name: "api", include: ["tests/api/**/*.test.ts", "tests/integration/**/*.test.ts"], environment: "node", testTimeout: 20_000, fileParallelism: false },
+        test: {
+          name: "api",
+          include: ["tests/api/**/*.test.ts", "tests/integration/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 20_000,
+          fileParallelism: false,
+        },
       },
       {
         resolve: { alias },

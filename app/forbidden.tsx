@@ -6,8 +6,8 @@ export default function Forbidden() {
       <p className="num text-brass-deep">403</p>
       <h1 className="text-3xl">This area is not open to your account</h1>
       <p className="text-ink-soft">
-        It belongs to another role (moderators review proposals; admins import data). If you think you should have access, ask
-        your club&apos;s admin.
+        It belongs to another role (moderators review proposals; admins import data). If you think you should have
+        access, ask your club&apos;s admin.
       </p>
       <Link href="/">Back to finding a part</Link>
     </div>

@@ -10,7 +10,9 @@ import { SiteHeader } from "@/components/layout/site-header";
 export const metadata: Metadata = {
   title: { default: "Understudy: standard parts for old machines", template: "%s · Understudy" },
   description:
-    "Find the modern standard bearing, lip seal or V-belt that takes the place of an obsolete factory number on an old tractor, crawler or stationary engine.",
+    "Find the modern standard bearing, lip seal or V-belt that takes the " +
+    "place of an obsolete factory number on an old tractor, crawler or " +
+    "stationary engine.",
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#23262b" };
@@ -19,7 +21,10 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
   return (
     <html lang="en">
       <body className="flex min-h-screen flex-col">
-        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-ground-raised focus:p-2">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:bg-ground-raised focus:p-2"
+        >
           Skip to content
         </a>
         <SiteHeader />

@@ -47,13 +47,18 @@ async function main(command: string | undefined, flags: string[]): Promise<void>
     case "seed:large": {
       const at = flags.indexOf("--parts");
       const parts = at >= 0 ? Number(flags[at + 1]) : 250_000;
-      if (!Number.isInteger(parts) || parts < 1 || parts > 5_000_000) throw new Error("--parts takes a whole number from 1 to 5000000.");
+      if (!Number.isInteger(parts) || parts < 1 || parts > 5_000_000)
+        throw new Error("--parts takes a whole number from 1 to 5000000.");
       await seedLargeCatalogue(parts, log);
       break;
     }
     case "digest": {
       const result = await sendProposalDigest();
-      log(result.proposals === 0 ? "no new proposals; nothing sent" : `${result.proposals} new proposals; summary sent to ${result.sent} of ${result.recipients} reviewers`);
+      log(
+        result.proposals === 0
+          ? "no new proposals; nothing sent"
+          : `${result.proposals} new proposals; summary sent to ${result.sent} of ${result.recipients} reviewers`,
+      );
       if (result.recipients > 0 && result.sent === 0) process.exitCode = 1;
       break;
     }

@@ -6,7 +6,17 @@ import { User } from "@/db/models/user";
 import { AuditEvent, Submission, SubmissionPhoto } from "@/db/models/community";
 import { Import, ImportMapping } from "@/db/models/imports";
 import { JobList, JobListLine } from "@/db/models/lists";
-import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, StandardPart, Supersession } from "@/db/models/catalogue";
+import {
+  Assembly,
+  Confirmation,
+  Cross,
+  Machine,
+  Maker,
+  OriginalPart,
+  PartUsage,
+  StandardPart,
+  Supersession,
+} from "@/db/models/catalogue";
 
 // Associations live here only, once, after every model is defined. Aliases are spelled out (and every model
 // names itself in init) because the production build minifies class names, which Sequelize would otherwise use.

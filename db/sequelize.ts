@@ -2,7 +2,10 @@ import pg from "pg";
 import { Sequelize } from "sequelize";
 import { env } from "@/lib/env";
 
-export function createSequelize(databaseUrl: string, pool = { max: env.DB_POOL_MAX, acquire: env.DB_POOL_ACQUIRE_MS }): Sequelize {
+export function createSequelize(
+  databaseUrl: string,
+  pool = { max: env.DB_POOL_MAX, acquire: env.DB_POOL_ACQUIRE_MS },
+): Sequelize {
   return new Sequelize(databaseUrl, {
     dialect: "postgres",
     // Handing pg over explicitly keeps bundlers from having to resolve Sequelize's dynamic require.

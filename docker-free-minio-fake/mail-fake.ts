@@ -14,7 +14,11 @@ export interface MailFakeOptions {
 
 const MAX_KEPT = 500;
 
-function listen(server: Pick<http.Server, "once" | "removeListener" | "listen">, port: number, name: string): Promise<void> {
+function listen(
+  server: Pick<http.Server, "once" | "removeListener" | "listen">,
+  port: number,
+  name: string,
+): Promise<void> {
   return new Promise((resolve, reject) => {
     const fail = (error: NodeJS.ErrnoException) =>
       reject(
@@ -38,7 +42,11 @@ export async function startMailFake({ smtpPort, apiPort, directory }: MailFakeOp
   const dir = path.resolve(directory);
   mkdirSync(dir, { recursive: true });
 
-  const files = () => readdirSync(dir).filter((name) => name.endsWith(".json")).sort().reverse();
+  const files = () =>
+    readdirSync(dir)
+      .filter((name) => name.endsWith(".json"))
+      .sort()
+      .reverse();
   const read = (file: string) => JSON.parse(readFileSync(path.join(dir, file), "utf8")) as CapturedMail;
 
   const smtp = new SMTPServer({

@@ -1,5 +1,15 @@
 import { execFileSync, spawnSync, type SpawnSyncOptions } from "node:child_process";
-import { chmodSync, chownSync, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
+import {
+  chmodSync,
+  chownSync,
+  existsSync,
+  mkdirSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  writeFileSync,
+} from "node:fs";
 import net from "node:net";
 import os from "node:os";
 import path from "node:path";
@@ -23,7 +33,6 @@ interface Connection {
   port: number;
   database: string;
 }
-
 
 export class ClusterError extends Error {}
 
@@ -97,7 +106,9 @@ function assertTraversable(dir: string): void {
     const mode = statSync(current).mode;
     if ((mode & 0o001) === 0) {
       throw new ClusterError(
-        `The postgres user cannot enter ${current} (mode ${(mode & 0o777).toString(8)}). Run \`chmod o+x ${current}\` or move the checkout.`,
+        `The postgres user cannot enter ${current} (mode ` +
+          `${(mode & 0o777).toString(8)}). Run \`chmod o+x ${current}\` or move ` +
+          `the checkout.`,
       );
     }
   }
@@ -148,7 +159,10 @@ export class PostgresCluster {
   }
 
   private isRunning(): boolean {
-    return existsSync(path.join(this.dir, "PG_VERSION")) && runAsOwner(this.bin("pg_ctl"), ["status", "-D", this.dir]).status === 0;
+    return (
+      existsSync(path.join(this.dir, "PG_VERSION")) &&
+      runAsOwner(this.bin("pg_ctl"), ["status", "-D", this.dir]).status === 0
+    );
   }
 
   private init(): void {
@@ -164,8 +178,15 @@ export class PostgresCluster {
     giveToOwner(pwfile);
     try {
       const result = runAsOwner(this.bin("initdb"), [
-        "-D", this.dir, "-U", this.conn.user, `--pwfile=${pwfile}`,
-        "--auth-host=scram-sha-256", "--auth-local=peer", "--encoding=UTF8", "--locale=C",
+        "-D",
+        this.dir,
+        "-U",
+        this.conn.user,
+        `--pwfile=${pwfile}`,
+        "--auth-host=scram-sha-256",
+        "--auth-local=peer",
+        "--encoding=UTF8",
+        "--locale=C",
       ]);
       if (result.status !== 0) throw new ClusterError(`initdb failed:\n${result.stderr || result.stdout}`);
     } finally {
@@ -183,14 +204,17 @@ export class PostgresCluster {
       if (existsSync(pidFile)) {
         const pid = Number(readFileSync(pidFile, "utf8").split("\n")[0]);
         if (pid && processAlive(pid)) {
-          throw new ClusterError(`A PostgreSQL process (pid ${pid}) holds ${this.dir} but does not answer. Stop it and start again.`);
+          throw new ClusterError(
+            `A PostgreSQL process (pid ${pid}) holds ${this.dir} but does not answer. Stop it and start again.`,
+          );
         }
         this.log(`removing a stale pid file (pid ${pid} is gone; PostgreSQL did not stop cleanly last time)`);
         rmSync(pidFile);
       }
       if (await portInUse(this.conn.port, "127.0.0.1")) {
         throw new ClusterError(
-          `Port ${this.conn.port} on 127.0.0.1 is already taken by another program. Stop it, or choose another port in DATABASE_URL.`,
+          `Port ${this.conn.port} on 127.0.0.1 is already taken by another ` +
+            `program. Stop it, or choose another port in DATABASE_URL.`,
         );
       }
       mkdirSync(this.socketDir, { recursive: true });
@@ -198,7 +222,18 @@ export class PostgresCluster {
       if (!existsSync(this.logFile)) writeFileSync(this.logFile, "");
       giveToOwner(this.logFile);
       const options = `-c listen_addresses=127.0.0.1 -p ${this.conn.port} -k ${this.socketDir}`;
-      const result = runAsOwner(this.bin("pg_ctl"), ["start", "-D", this.dir, "-l", this.logFile, "-w", "-t", "60", "-o", options]);
+      const result = runAsOwner(this.bin("pg_ctl"), [
+        "start",
+        "-D",
+        this.dir,
+        "-l",
+        this.logFile,
+        "-w",
+        "-t",
+        "60",
+        "-o",
+        options,
+      ]);
       if (result.status !== 0) {
         throw new ClusterError(`PostgreSQL did not start (see ${this.logFile}):\n${result.stderr || result.stdout}`);
       }

@@ -24,7 +24,10 @@ export async function startS3Fake({ port, directory }: S3FakeOptions): Promise<R
     await server.run();
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === "EADDRINUSE") {
-      throw new Error(`Port ${port} on 127.0.0.1 is already taken, so the S3 fake cannot start. Stop that program or change S3_ENDPOINT.`);
+      throw new Error(
+        `Port ${port} on 127.0.0.1 is already taken, so the S3 fake cannot ` +
+          `start. Stop that program or change S3_ENDPOINT.`,
+      );
     }
     throw error;
   }

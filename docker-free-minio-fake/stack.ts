@@ -175,11 +175,25 @@ async function waitForHealth(url: string, child: ChildProcess, seconds = 90): Pr
 const nextBin = path.join(root, "node_modules/next/dist/bin/next");
 
 async function main(): Promise<number> {
+  if (mode === "test" && passThrough.length === 0) {
+    // The whole suite starts with the linter and the formatter's check: a style fault fails fast, before any service.
+    log("lint: eslint, then prettier --check…");
+    for (const args of [
+      ["node_modules/eslint/bin/eslint.js", ".", "--max-warnings", "0"],
+      ["node_modules/prettier/bin/prettier.cjs", "--check", "--log-level", "warn", "."],
+    ]) {
+      const lint = run(process.execPath, [path.join(root, args[0]), ...args.slice(1)]);
+      const code = await finished(lint);
+      children = children.filter((child) => child !== lint);
+      if (code !== 0) return code;
+    }
+  }
   if (mode === "test") {
     const { ensureChromium } = await import("../tests/helpers/chromium");
     ensureChromium((m) => console.log(`[understudy] ${m}`));
     // A leftover test cluster from an interrupted run is stopped and thrown away.
-    if (existsSync(env.PG_CLUSTER_DIR)) new PostgresCluster({ dir: env.PG_CLUSTER_DIR, databaseUrl: env.DATABASE_URL, log }).stop(true);
+    if (existsSync(env.PG_CLUSTER_DIR))
+      new PostgresCluster({ dir: env.PG_CLUSTER_DIR, databaseUrl: env.DATABASE_URL, log }).stop(true);
     rmSync(dataDir, { recursive: true, force: true });
   }
   mkdirSync(dataDir, { recursive: true });
@@ -238,7 +252,11 @@ async function main(): Promise<number> {
   }
   if (mode === "bench-import") {
     // The import runs in the benchmark's own process, so that its memory is what gets measured.
-    const bench = run(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "tests/bench/import.ts", ...passThrough]);
+    const bench = run(process.execPath, [
+      path.join(root, "node_modules/tsx/dist/cli.mjs"),
+      "tests/bench/import.ts",
+      ...passThrough,
+    ]);
     return finished(bench);
   }
 
@@ -255,7 +273,10 @@ async function main(): Promise<number> {
   }
 
   // `next dev` for development; otherwise server.ts, which tells the app who opened each connection.
-  const serverArgs = mode === "dev" ? [nextBin, "dev", "-p", String(env.PORT), "-H", "127.0.0.1"] : [path.join(root, "node_modules/tsx/dist/cli.mjs"), "server.ts"];
+  const serverArgs =
+    mode === "dev"
+      ? [nextBin, "dev", "-p", String(env.PORT), "-H", "127.0.0.1"]
+      : [path.join(root, "node_modules/tsx/dist/cli.mjs"), "server.ts"];
   const server = run(process.execPath, serverArgs, { logFile: serverLog });
   await waitForHealth(`http://127.0.0.1:${env.PORT}`, server);
 
@@ -264,7 +285,11 @@ async function main(): Promise<number> {
     return finished(vitest);
   }
   if (mode === "bench") {
-    const bench = run(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "tests/bench/lookup.ts", ...passThrough]);
+    const bench = run(process.execPath, [
+      path.join(root, "node_modules/tsx/dist/cli.mjs"),
+      "tests/bench/lookup.ts",
+      ...passThrough,
+    ]);
     return finished(bench);
   }
 

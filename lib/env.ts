@@ -2,9 +2,7 @@ import { z } from "zod";
 
 // Parsed once; the rest of the code imports typed values. The defaults are the local ones from
 // .env.example, so a fresh checkout runs without a .env file.
-const flag = z
-  .enum(["true", "false", "1", "0", ""])
-  .transform((value) => value === "true" || value === "1");
+const flag = z.enum(["true", "false", "1", "0", ""]).transform((value) => value === "true" || value === "1");
 
 const schema = z.object({
   APP_ENV: z.enum(["development", "demo", "test", "production"]).default("development"),
@@ -45,7 +43,12 @@ const schema = z.object({
   TRUSTED_PROXIES: z
     .string()
     .default("")
-    .transform((value) => value.split(",").map((address) => address.trim()).filter(Boolean)),
+    .transform((value) =>
+      value
+        .split(",")
+        .map((address) => address.trim())
+        .filter(Boolean),
+    ),
 
   // Per member, per rolling hour: proposals saved and photo uploads granted.
   SUBMISSIONS_PER_HOUR: z.coerce.number().int().min(1).default(20),

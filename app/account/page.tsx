@@ -35,7 +35,10 @@ export default async function AccountPage() {
         <div className="grid gap-1 p-4 sm:grid-cols-[10rem_1fr]">
           <dt className="font-bold">Notifications</dt>
           <dd>
-            <NotificationsToggle initial={row?.notifyByEmail ?? true} reviewer={hasPermission(user.role, "proposals:review")} />
+            <NotificationsToggle
+              initial={row?.notifyByEmail ?? true}
+              reviewer={hasPermission(user.role, "proposals:review")}
+            />
           </dd>
         </div>
       </dl>

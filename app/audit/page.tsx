@@ -8,7 +8,13 @@ import { requirePagePermission } from "@/lib/auth/session";
 export const metadata: Metadata = { title: "Audit log" };
 
 function changed(before: Record<string, unknown> | null, after: Record<string, unknown> | null): string {
-  if (!before) return after ? Object.entries(after).map(([k, v]) => `${k}: ${JSON.stringify(v)}`).slice(0, 4).join("; ") : "";
+  if (!before)
+    return after
+      ? Object.entries(after)
+          .map(([k, v]) => `${k}: ${JSON.stringify(v)}`)
+          .slice(0, 4)
+          .join("; ")
+      : "";
   if (!after) return "removed";
   return Object.keys({ ...before, ...after })
     .filter((k) => JSON.stringify(before[k]) !== JSON.stringify(after[k]))
@@ -21,7 +27,8 @@ function Subject({ event }: { event: AuditRow }) {
   const words = `${auditSubjectWords(event.subjectType)} #${event.subjectId}`;
   if (event.subjectType === "submission") return <Link href={`/review/${event.subjectId}`}>{words}</Link>;
   if (event.subjectType === "import") return <Link href={`/admin/imports/${event.subjectId}`}>{words}</Link>;
-  if (event.subjectType === "user") return event.subjectEmail ? <EmailAddress address={event.subjectEmail} /> : <>a deleted account</>;
+  if (event.subjectType === "user")
+    return event.subjectEmail ? <EmailAddress address={event.subjectEmail} /> : <>a deleted account</>;
   return <>{words}</>;
 }
 
@@ -33,32 +40,45 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
     <div className="space-y-6">
       <header className="space-y-1">
         <h1 className="text-3xl">Audit log</h1>
-        <p className="text-ink-soft">Who changed what, newest first. Each entry keeps the record as it was before and after; the full records are in GET /api/audit.</p>
+        <p className="text-ink-soft">
+          Who changed what, newest first. Each entry keeps the record as it was before and after; the full records are
+          in GET /api/audit.
+        </p>
       </header>
       <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
         <table className="w-full text-left text-sm">
           <thead className="bg-ground-sunk">
             <tr>
-              <th scope="col" className="p-3">When (UTC)</th>
-              <th scope="col" className="p-3">Who</th>
-              <th scope="col" className="p-3">What</th>
-              <th scope="col" className="p-3">Record</th>
-              <th scope="col" className="p-3">Changed</th>
+              <th scope="col" className="p-3">
+                When (UTC)
+              </th>
+              <th scope="col" className="p-3">
+                Who
+              </th>
+              <th scope="col" className="p-3">
+                What
+              </th>
+              <th scope="col" className="p-3">
+                Record
+              </th>
+              <th scope="col" className="p-3">
+                Changed
+              </th>
             </tr>
           </thead>
           <tbody>
             {events.map((e) => (
               <tr key={e.id} className="border-t border-rule align-top" data-testid="audit-row">
-                <td className="num whitespace-nowrap p-3">{e.at.slice(0, 19).replace("T", " ")}</td>
+                <td className="p-3 num whitespace-nowrap">{e.at.slice(0, 19).replace("T", " ")}</td>
                 <td className="p-3">{e.actor ? <EmailAddress address={e.actor} /> : "—"}</td>
                 <td className="p-3">
                   <span className="font-bold">{auditActionWords(e.action)}</span>
-                  <span className="num block text-xs text-ink-soft">{e.action}</span>
+                  <span className="block num text-xs text-ink-soft">{e.action}</span>
                 </td>
                 <td className="p-3">
                   <Subject event={e} />
                 </td>
-                <td className="num min-w-64 p-3 [overflow-wrap:anywhere]">{changed(e.before, e.after)}</td>
+                <td className="min-w-64 p-3 num [overflow-wrap:anywhere]">{changed(e.before, e.after)}</td>
               </tr>
             ))}
           </tbody>

@@ -5,11 +5,19 @@ import { IMPORT_FIELDS, IMPORT_MAX_BYTES } from "@/lib/imports/kinds";
 export const metadata: Metadata = { title: "Import format" };
 
 const MEANING: Record<string, string> = {
-  maker: "The maker's name as in the catalogue. A name the catalogue does not know yet is added as a new maker (catalogue imports only).",
+  maker:
+    "The maker's name as in the catalogue. A name the catalogue does not " +
+    "know yet is added as a new maker (catalogue imports only).",
   number: "The factory number as stamped or printed; spacing, dashes and case do not matter.",
   description: "What the part is. Needed when the part is new to the catalogue.",
-  category: `The kind of part: ${PART_CATEGORIES.map((c) => CATEGORY_NAMES[c]).join(", ")}. Needed for a new part unless the standard part says it.`,
-  innerMm: "Sizes of the original part, in millimetres; 25,4 and 1 in are read too. A bearing or belt designation that contradicts them rejects the row.",
+  category:
+    `The kind of part: ` +
+    `${PART_CATEGORIES.map((c) => CATEGORY_NAMES[c]).join(", ")}. Needed ` +
+    `for a new part unless the standard part says it.`,
+  innerMm:
+    "Sizes of the original part, in millimetres; 25,4 and 1 in are read " +
+    "too. A bearing or belt designation that contradicts them rejects the " +
+    "row.",
   outerMm: "",
   widthMm: "",
   lengthMm: "",
@@ -26,8 +34,11 @@ export default function ImportFormatPage() {
     <div className="max-w-4xl space-y-6">
       <h1 className="text-3xl">The import format</h1>
       <p className="text-lg">
-        One row for each cross: an original part and the standard part that replaces it. Save the spreadsheet as CSV, UTF-8 or Windows-1252, with commas or semicolons between columns and the
-        column titles on the first line; up to {IMPORT_MAX_BYTES / 1024 / 1024} MB. The titles below are recognised as they are; other titles are matched by hand on the import&apos;s page.
+        One row for each cross: an original part and the standard part that replaces it. Save the spreadsheet as CSV,
+        UTF-8 or Windows-1252, with commas or semicolons between columns and the column titles on the first line;
+        {" up to "}
+        {IMPORT_MAX_BYTES / 1024 / 1024} MB. The titles below are recognised as they are; other titles are matched by
+        hand on the import&apos;s page.
       </p>
       <p>
         <a href="/import-format/sample.csv" download>
@@ -39,9 +50,15 @@ export default function ImportFormatPage() {
         <table className="w-full text-left">
           <thead className="bg-ground-sunk text-sm">
             <tr>
-              <th scope="col" className="p-3">Field</th>
-              <th scope="col" className="p-3">Column titles recognised</th>
-              <th scope="col" className="p-3">Meaning</th>
+              <th scope="col" className="p-3">
+                Field
+              </th>
+              <th scope="col" className="p-3">
+                Column titles recognised
+              </th>
+              <th scope="col" className="p-3">
+                Meaning
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -51,14 +68,17 @@ export default function ImportFormatPage() {
                   {f.label}
                   {f.required ? " (needed)" : ""}
                 </td>
-                <td className="num p-3 text-sm">{f.names.slice(0, 4).join(", ")}</td>
+                <td className="p-3 num text-sm">{f.names.slice(0, 4).join(", ")}</td>
                 <td className="p-3 text-sm">{MEANING[f.key] || "As above."}</td>
               </tr>
             ))}
           </tbody>
         </table>
       </div>
-      <p className="text-ink-soft">The full description, with how rows are counted and what a rollback does, is in docs/import-format.md in the source.</p>
+      <p className="text-ink-soft">
+        The full description, with how rows are counted and what a rollback does, is in docs/import-format.md in the
+        source.
+      </p>
     </div>
   );
 }

@@ -16,7 +16,10 @@ export default async function ListsPage() {
       <div className="space-y-4">
         <header className="space-y-1">
           <h1 className="text-3xl">Job lists</h1>
-          <p className="text-ink-soft">A parts list for each job, to order by standard numbers. Only you see your lists, unless you share one by its link.</p>
+          <p className="text-ink-soft">
+            A parts list for each job, to order by standard numbers. Only you see your lists, unless you share one by
+            its link.
+          </p>
         </header>
         {lists.length === 0 ? (
           <Notice>No lists yet. Start one for the job on your bench.</Notice>

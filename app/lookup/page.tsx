@@ -18,7 +18,11 @@ export async function generateMetadata({ searchParams }: { searchParams: Promise
  * The results are worked out here, on the server, and sent with the page: the address can be shared, the page works
  * with scripts off, and the browser does not ask for the same results a second time.
  */
-export default async function LookupPage({ searchParams }: { searchParams: Promise<{ q?: string | string[]; maker?: string | string[] }> }) {
+export default async function LookupPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ q?: string | string[]; maker?: string | string[] }>;
+}) {
   const params = await searchParams;
   const q = typeof params.q === "string" ? params.q : "";
   const makerText = typeof params.maker === "string" && params.maker !== "" ? params.maker : undefined;

@@ -11,7 +11,10 @@ export default async function MachinesPage() {
     <div className="space-y-8">
       <div className="space-y-2">
         <h1 className="text-3xl">Machines</h1>
-        <p className="max-w-3xl text-ink-soft">Browse by maker and model. Each machine lists its parts by assembly, with the standard part that takes each one&apos;s place.</p>
+        <p className="max-w-3xl text-ink-soft">
+          Browse by maker and model. Each machine lists its parts by assembly, with the standard part that takes each
+          one&apos;s place.
+        </p>
       </div>
       {makers.map((maker) => (
         <section key={maker.id} aria-labelledby={`maker-${maker.id}`} className="space-y-3">
@@ -22,7 +25,13 @@ export default async function MachinesPage() {
           <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
             {maker.machines.map((m) => (
               <li key={m.id}>
-                <Link href={`/machines/${m.id}`} className="block rounded-lg border-2 border-rule bg-ground-raised p-4 text-ink no-underline hover:border-brass">
+                <Link
+                  href={`/machines/${m.id}`}
+                  className={
+                    "block rounded-lg border-2 border-rule bg-ground-raised p-4 text-ink " +
+                    "no-underline hover:border-brass"
+                  }
+                >
                   <span className="block text-lg font-bold">{m.model}</span>
                   <span className="block text-sm text-ink-soft">
                     {m.kind} · {m.years} · {m.partCount} parts

@@ -6,9 +6,9 @@ export default function MeasureLayout({ children }: { children: React.ReactNode 
       <div className="space-y-2">
         <h1 className="text-3xl">Measure a part</h1>
         <p className="max-w-3xl text-ink-soft">
-          No number left on it? Measure it with calipers, in inches or millimetres, and see which standard parts it can be. Worn parts
-          read a little off; the answers allow for the way wear moves each size, and point out inch and metric sizes that are easy to
-          mistake for each other.
+          No number left on it? Measure it with calipers, in inches or millimetres, and see which standard parts it can
+          be. Worn parts read a little off; the answers allow for the way wear moves each size, and point out inch and
+          metric sizes that are easy to mistake for each other.
         </p>
       </div>
       <MeasureTabs />

@@ -9,7 +9,11 @@ import { readProposalPrefill } from "@/lib/community/prefill";
 
 export const metadata: Metadata = { title: "Propose a cross" };
 
-export default async function ProposePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function ProposePage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const params = await searchParams;
   const partParam = typeof params.part === "string" ? params.part : undefined;
   // Signing in comes back to the same form, filled in as the calculator left it.
@@ -27,8 +31,8 @@ export default async function ProposePage({ searchParams }: { searchParams: Prom
         <header className="space-y-2">
           <h1 className="text-3xl">Propose a cross</h1>
           <p className="max-w-2xl text-lg">
-            Tell other restorers which standard part you fitted in place of an obsolete one. A moderator checks every proposal before it reaches the catalogue, because a wrong cross can
-            cost someone a rebuild.
+            Tell other restorers which standard part you fitted in place of an obsolete one. A moderator checks every
+            proposal before it reaches the catalogue, because a wrong cross can cost someone a rebuild.
           </p>
           <p className="text-ink-soft">
             Already sent some? <Link href="/proposals">See your proposals</Link>.
@@ -46,7 +50,18 @@ export default async function ProposePage({ searchParams }: { searchParams: Prom
           }}
           pickedPart={
             part && maker
-              ? { id: part.id, number: part.number, maker: maker.name, description: part.description, dims: { innerMm: part.innerMm, outerMm: part.outerMm, widthMm: part.widthMm, lengthMm: part.lengthMm } }
+              ? {
+                  id: part.id,
+                  number: part.number,
+                  maker: maker.name,
+                  description: part.description,
+                  dims: {
+                    innerMm: part.innerMm,
+                    outerMm: part.outerMm,
+                    widthMm: part.widthMm,
+                    lengthMm: part.lengthMm,
+                  },
+                }
               : null
           }
           pickedStandard={null}

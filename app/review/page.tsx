@@ -20,10 +20,16 @@ const DONE: Record<string, string> = {
 
 const PAGE_SIZE = 50;
 
-export default async function ReviewQueuePage({ searchParams }: { searchParams: Promise<{ category?: string; maker?: string; q?: string; done?: string; page?: string }> }) {
+export default async function ReviewQueuePage({
+  searchParams,
+}: {
+  searchParams: Promise<{ category?: string; maker?: string; q?: string; done?: string; page?: string }>;
+}) {
   await requirePagePermission("proposals:review", "/review");
   const params = await searchParams;
-  const category = (PART_CATEGORIES as readonly string[]).includes(params.category ?? "") ? (params.category as PartCategory) : undefined;
+  const category = (PART_CATEGORIES as readonly string[]).includes(params.category ?? "")
+    ? (params.category as PartCategory)
+    : undefined;
   const makerId = Number(params.maker) > 0 && Number(params.maker) < 2 ** 31 ? Number(params.maker) : undefined;
   const q = params.q?.trim().slice(0, 80) || undefined;
   const page = Math.min(Math.max(Math.floor(Number(params.page)) || 1, 1), 10_000);
@@ -32,15 +38,21 @@ export default async function ReviewQueuePage({ searchParams }: { searchParams: 
     listQueue({ category, makerId, q, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
   ]);
   const pages = Math.max(1, Math.ceil(queue.total / PAGE_SIZE));
-  const pageLink = (n: number) => `/review?${new URLSearchParams({ ...(category ? { category } : {}), ...(makerId ? { maker: String(makerId) } : {}), ...(q ? { q } : {}), page: String(n) })}`;
+  const pageLink = (n: number) =>
+    `/review?${new URLSearchParams({
+      ...(category ? { category } : {}),
+      ...(makerId ? { maker: String(makerId) } : {}),
+      ...(q ? { q } : {}),
+      page: String(n),
+    })}`;
 
   return (
     <div className="space-y-6">
       <header className="space-y-1">
         <h1 className="text-3xl">Review queue</h1>
         <p className="max-w-3xl text-ink-soft">
-          Members&apos; proposals waiting for a decision, oldest first. Open one to see it beside what the catalogue already says. Nothing reaches the catalogue until it is approved; you cannot
-          decide your own.
+          Members&apos; proposals waiting for a decision, oldest first. Open one to see it beside what the catalogue
+          already says. Nothing reaches the catalogue until it is approved; you cannot decide your own.
         </p>
       </header>
       {params.done && DONE[params.done] && (
@@ -48,8 +60,18 @@ export default async function ReviewQueuePage({ searchParams }: { searchParams: 
           {DONE[params.done]}
         </Notice>
       )}
-      <form method="get" className="flex flex-wrap items-end gap-4 rounded-lg border border-rule bg-ground-raised p-4" aria-label="Filter the queue">
-        <SelectField id="category" label="Kind of part" name="category" defaultValue={category ?? ""} className="min-w-48">
+      <form
+        method="get"
+        className="flex flex-wrap items-end gap-4 rounded-lg border border-rule bg-ground-raised p-4"
+        aria-label="Filter the queue"
+      >
+        <SelectField
+          id="category"
+          label="Kind of part"
+          name="category"
+          defaultValue={category ?? ""}
+          className="min-w-48"
+        >
           <option value="">All kinds</option>
           {PART_CATEGORIES.map((c) => (
             <option key={c} value={c}>
@@ -73,7 +95,8 @@ export default async function ReviewQueuePage({ searchParams }: { searchParams: 
         </Button>
       </form>
       <p className="font-bold">
-        {queue.total} {queue.total === 1 ? "proposal is" : "proposals are"} waiting{category || makerId || q ? " with these filters" : ""}.
+        {queue.total} {queue.total === 1 ? "proposal is" : "proposals are"} waiting
+        {category || makerId || q ? " with these filters" : ""}.
         {pages > 1 && ` Page ${page} of ${pages}, ${PAGE_SIZE} to a page, oldest first.`}
       </p>
       {queue.rows.length === 0 ? <Notice>Nothing is waiting. Thank you.</Notice> : <QueueTable rows={queue.rows} />}

@@ -30,13 +30,20 @@ export function NotificationsToggle({ initial, reviewer }: { initial: boolean; r
         <span>
           <span className="font-bold">E-mail me about my proposals</span>
           <span className="block text-sm text-ink-soft">
-            When a moderator approves, rejects or sends back a cross you proposed{reviewer ? ", and a summary of new proposals to review" : ""}. Messages about your account itself (password,
-            address) are always sent.
+            When a moderator approves, rejects or sends back a cross you proposed
+            {reviewer ? ", and a summary of new proposals to review" : ""}. Messages about your account itself
+            (password, address) are always sent.
           </span>
         </span>
       </label>
       <p className="text-sm text-ink-soft" role="status">
-        {state === "saving" ? "Saving…" : state === "saved" ? "Saved." : state === "failed" ? "Not saved: try again." : ""}
+        {state === "saving"
+          ? "Saving…"
+          : state === "saved"
+            ? "Saved."
+            : state === "failed"
+              ? "Not saved: try again."
+              : ""}
       </p>
     </div>
   );

@@ -44,7 +44,14 @@ export function EmailOnlyForm({
       {hideEmail ? (
         <input type="hidden" {...form.register("email")} />
       ) : (
-        <Field id="email" label="E-mail" type="email" autoComplete="email" error={form.formState.errors.email?.message} {...form.register("email")} />
+        <Field
+          id="email"
+          label="E-mail"
+          type="email"
+          autoComplete="email"
+          error={form.formState.errors.email?.message}
+          {...form.register("email")}
+        />
       )}
       <Button type="submit" pending={pending} variant={hideEmail ? "secondary" : "primary"}>
         {submitLabel}

@@ -32,7 +32,12 @@ export function SignInForm({ next }: { next: string }) {
 
   return (
     <div className="space-y-5">
-      <form onSubmit={onSubmit} noValidate className="space-y-5" aria-describedby={formError ? "sign-in-error" : undefined}>
+      <form
+        onSubmit={onSubmit}
+        noValidate
+        className="space-y-5"
+        aria-describedby={formError ? "sign-in-error" : undefined}
+      >
         {formError && (
           <div id="sign-in-error">
             <Notice tone="caution" role="alert">
@@ -40,7 +45,14 @@ export function SignInForm({ next }: { next: string }) {
             </Notice>
           </div>
         )}
-        <Field id="email" label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+        <Field
+          id="email"
+          label="E-mail"
+          type="email"
+          autoComplete="email"
+          error={errors.email?.message}
+          {...form.register("email")}
+        />
         <Field
           id="password"
           label="Password"

@@ -25,7 +25,8 @@ export function SignUpForm({ mailPreviewHref }: { mailPreviewHref?: string }) {
         </Notice>
         {mailPreviewHref && (
           <p className="text-sm text-ink-soft">
-            This is a demo installation: mail is captured instead of delivered. Read it at <a href={mailPreviewHref}>{mailPreviewHref}</a>.
+            This is a demo installation: mail is captured instead of delivered. Read it at{" "}
+            <a href={mailPreviewHref}>{mailPreviewHref}</a>.
           </p>
         )}
       </div>
@@ -38,7 +39,14 @@ export function SignUpForm({ mailPreviewHref }: { mailPreviewHref?: string }) {
           {formError}
         </Notice>
       )}
-      <Field id="email" label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...form.register("email")} />
+      <Field
+        id="email"
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        error={errors.email?.message}
+        {...form.register("email")}
+      />
       <Field
         id="password"
         label="Password"

@@ -2,7 +2,7 @@
 export function LinkedText({ text }: { text: string }) {
   const parts = text.split(/(https?:\/\/[^\s<>"]+)/g);
   return (
-    <pre className="whitespace-pre-wrap break-words font-sans text-base">
+    <pre className="font-sans text-base break-words whitespace-pre-wrap">
       {parts.map((part, index) =>
         index % 2 === 1 ? (
           <a key={index} href={part} className="break-all">

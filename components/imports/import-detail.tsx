@@ -6,7 +6,13 @@ import { useState } from "react";
 import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { IMPORT_FIELDS, STATUS_WORDS, TARGET_WORDS, type ImportCounts, type ImportMappingValue } from "@/lib/imports/kinds";
+import {
+  IMPORT_FIELDS,
+  STATUS_WORDS,
+  TARGET_WORDS,
+  type ImportCounts,
+  type ImportMappingValue,
+} from "@/lib/imports/kinds";
 import type { ImportView } from "@/lib/imports/imports";
 import { sendJson } from "@/lib/http/post-json";
 
@@ -14,7 +20,8 @@ const BUSY = ["uploaded", "parsing", "committing"];
 
 async function fetchImport(url: string): Promise<ImportView> {
   const response = await fetch(url);
-  if (!response.ok) throw new Error((await response.json().catch(() => ({}))).message ?? "The import could not be loaded.");
+  if (!response.ok)
+    throw new Error((await response.json().catch(() => ({}))).message ?? "The import could not be loaded.");
   return response.json();
 }
 
@@ -28,7 +35,15 @@ function Progress({ view }: { view: ImportView }) {
         {label}… {p ? `${p.rows.toLocaleString("en-GB")} rows` : ""}
       </p>
       <div className="h-4 w-full overflow-hidden rounded-full border border-rule-strong bg-ground-sunk">
-        <div role="progressbar" aria-label={label} aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(share * 100)} className="h-full bg-brass transition-all" style={{ width: `${Math.max(3, share * 100)}%` }} />
+        <div
+          role="progressbar"
+          aria-label={label}
+          aria-valuemin={0}
+          aria-valuemax={100}
+          aria-valuenow={Math.round(share * 100)}
+          className="h-full bg-brass transition-all"
+          style={{ width: `${Math.max(3, share * 100)}%` }}
+        />
       </div>
     </div>
   );
@@ -51,7 +66,14 @@ function Counts({ counts, target, title }: { counts: ImportCounts; target: Impor
       <p className="text-ink-soft">{counts.rows.toLocaleString("en-GB")} rows read.</p>
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4" data-testid="import-counts">
         {COUNT_WORDS.map(([key, word]) => (
-          <div key={key} className={`rounded-md border p-3 ${key === "rejected" && counts.rejected > 0 ? "border-caution bg-caution-wash" : "border-rule bg-ground-raised"}`}>
+          <div
+            key={key}
+            className={`rounded-md border p-3 ${
+              key === "rejected" && counts.rejected > 0
+                ? "border-caution bg-caution-wash"
+                : "border-rule bg-ground-raised"
+            }`}
+          >
             <dt className="text-sm">{target === "review_queue" && key === "newCrosses" ? "new proposals" : word}</dt>
             <dd className="num text-2xl font-bold" data-count={key}>
               {counts[key].toLocaleString("en-GB")}
@@ -61,7 +83,11 @@ function Counts({ counts, target, title }: { counts: ImportCounts; target: Impor
       </dl>
       <NewNames title="New makers" names={counts.newMakerNames} total={counts.newMakers} />
       <NewNames title="New standard parts" names={counts.newStandardPartNames} total={counts.newStandardParts} />
-      {target === "catalogue" && <p className="text-sm text-ink-soft">No machines are added by an import: rows naming a machine the catalogue lacks are rejected.</p>}
+      {target === "catalogue" && (
+        <p className="text-sm text-ink-soft">
+          No machines are added by an import: rows naming a machine the catalogue lacks are rejected.
+        </p>
+      )}
     </section>
   );
 }
@@ -74,12 +100,14 @@ function NewNames({ title, names = [], total }: { title: string; names?: string[
       <h3 className="font-bold">{title}</h3>
       <ul className="flex flex-wrap gap-2" data-testid={`names-${title.toLowerCase().replace(/\s+/g, "-")}`}>
         {names.map((n) => (
-          <li key={n} className="num rounded border border-rule bg-ground-raised px-2 py-0.5">
+          <li key={n} className="rounded border border-rule bg-ground-raised px-2 py-0.5 num">
             {n}
           </li>
         ))}
       </ul>
-      {total > names.length && <p className="text-ink-soft">and {(total - names.length).toLocaleString("en-GB")} more.</p>}
+      {total > names.length && (
+        <p className="text-ink-soft">and {(total - names.length).toLocaleString("en-GB")} more.</p>
+      )}
     </div>
   );
 }
@@ -95,7 +123,8 @@ function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => voi
         Columns
       </h2>
       <p className="text-sm text-ink-soft">
-        Each field of the catalogue and the column of your file it is read from. Fields marked * are needed. Change any that are wrong and run the dry run again.
+        Each field of the catalogue and the column of your file it is read from. Fields marked * are needed. Change any
+        that are wrong and run the dry run again.
       </p>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         {IMPORT_FIELDS.map((f) => (
@@ -108,7 +137,10 @@ function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => voi
               id={`map-${f.key}`}
               value={mapping[f.key] ?? ""}
               onChange={(e) => setMapping({ ...mapping, [f.key]: e.target.value || null })}
-              className={`block min-h-11 w-full rounded-md border-2 bg-ground px-2 ${f.required && !mapping[f.key] ? "border-caution" : "border-rule-strong"}`}
+              className={
+                `block min-h-11 w-full rounded-md border-2 bg-ground px-2 ` +
+                `${f.required && !mapping[f.key] ? "border-caution" : "border-rule-strong"}`
+              }
             >
               <option value="">(not in this file)</option>
               {view.headers.filter(Boolean).map((h) => (
@@ -139,14 +171,24 @@ function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => voi
           <label htmlFor="mapping-name" className="block text-sm font-bold">
             Save this mapping as
           </label>
-          <input id="mapping-name" value={name} onChange={(e) => setName(e.target.value)} placeholder="e.g. club list 1962" className="min-h-11 rounded-md border-2 border-rule-strong bg-ground px-2" />
+          <input
+            id="mapping-name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            placeholder="e.g. club list 1962"
+            className="min-h-11 rounded-md border-2 border-rule-strong bg-ground px-2"
+          />
         </div>
         <Button
           type="button"
           variant="secondary"
           onClick={async () => {
             const result = await sendJson<{ name: string }>("POST", "/api/import-mappings", { name, mapping });
-            setMessage(result.ok ? `Saved as “${result.data.name}”; choose it when you import the next file from the same source.` : result.error.message);
+            setMessage(
+              result.ok
+                ? `Saved as “${result.data.name}”; choose it when you import the next file from the same source.`
+                : result.error.message,
+            );
           }}
         >
           Save
@@ -157,20 +199,39 @@ function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => voi
   );
 }
 
-const TABLE_WORDS: Record<string, string> = { original_parts: "part", crosses: "cross", standard_parts: "standard part", makers: "maker", part_usages: "where used", submissions: "proposal" };
+const TABLE_WORDS: Record<string, string> = {
+  original_parts: "part",
+  crosses: "cross",
+  standard_parts: "standard part",
+  makers: "maker",
+  part_usages: "where used",
+  submissions: "proposal",
+};
 
 /** What a committed import wrote, by file line, with links to what can be opened. */
 function WrittenRows({ id }: { id: number }) {
-  const { data } = useSWR(`/api/imports/${id}/rows`, async (url: string) => (await fetch(url)).json() as Promise<{ changes: Array<{ line: number; table: string; recordId: number; action: string }>; total: number }>);
+  const { data } = useSWR(
+    `/api/imports/${id}/rows`,
+    async (url: string) =>
+      (await fetch(url)).json() as Promise<{
+        changes: Array<{ line: number; table: string; recordId: number; action: string }>;
+        total: number;
+      }>,
+  );
   if (!data || data.total === 0) return null;
   return (
     <details className="rounded-lg border border-rule bg-ground-raised p-4">
-      <summary className="cursor-pointer font-bold">What it wrote: {data.total.toLocaleString("en-GB")} records, by line of the file</summary>
-      {data.total > data.changes.length && <p className="text-sm text-ink-soft">The first {data.changes.length} are listed.</p>}
+      <summary className="cursor-pointer font-bold">
+        What it wrote: {data.total.toLocaleString("en-GB")} records, by line of the file
+      </summary>
+      {data.total > data.changes.length && (
+        <p className="text-sm text-ink-soft">The first {data.changes.length} are listed.</p>
+      )}
       <ul className="mt-2 columns-1 text-sm sm:columns-2">
         {data.changes.map((c) => (
           <li key={`${c.table}-${c.recordId}-${c.action}`}>
-            line <span className="num">{c.line}</span>: {c.action === "insert" ? "added" : "changed"} {TABLE_WORDS[c.table] ?? c.table}{" "}
+            line <span className="num">{c.line}</span>: {c.action === "insert" ? "added" : "changed"}{" "}
+            {TABLE_WORDS[c.table] ?? c.table}{" "}
             {c.table === "original_parts" ? <Link href={`/parts/${c.recordId}`}>#{c.recordId}</Link> : `#${c.recordId}`}
           </li>
         ))}
@@ -201,10 +262,14 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
         <h1 className="text-3xl break-all">{view.fileName}</h1>
         <p className="text-ink-soft">
           {STATUS_WORDS[view.status]} · into {TARGET_WORDS[view.target]} · {(view.sizeBytes / 1024).toFixed(0)} KB
-          {view.encoding ? `, ${view.encoding}, “${view.delimiter === "\t" ? "tab" : view.delimiter}” between columns` : ""} · sent by {view.by ?? "?"} on{" "}
-          {new Date(view.createdAt).toUTCString().slice(0, 22)}
+          {view.encoding
+            ? `, ${view.encoding}, “${view.delimiter === "\t" ? "tab" : view.delimiter}” between columns`
+            : ""}{" "}
+          · sent by {view.by ?? "?"} on {new Date(view.createdAt).toUTCString().slice(0, 22)}
         </p>
-        <p className="text-sm text-ink-soft">The original file is kept as it was sent, so what the import did can be checked against it later.</p>
+        <p className="text-sm text-ink-soft">
+          The original file is kept as it was sent, so what the import did can be checked against it later.
+        </p>
       </header>
 
       {busyOnServer && <Progress view={view} />}
@@ -221,18 +286,24 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
 
       {view.status === "rolled_back" && (
         <Notice tone="caution" role="status">
-          Rolled back on {new Date(view.rolledBackAt ?? view.createdAt).toUTCString().slice(0, 22)}: everything this import added was removed and everything it changed was put
-          back. The figures below are what the commit had done.
+          Rolled back on {new Date(view.rolledBackAt ?? view.createdAt).toUTCString().slice(0, 22)}: everything this
+          import added was removed and everything it changed was put back. The figures below are what the commit had
+          done.
         </Notice>
       )}
-      {view.committedCounts && <Counts counts={view.committedCounts} target={view.target} title="What the commit did" />}
-      {!view.committedCounts && view.counts && <Counts counts={view.counts} target={view.target} title="Dry run: what a commit would do" />}
+      {view.committedCounts && (
+        <Counts counts={view.committedCounts} target={view.target} title="What the commit did" />
+      )}
+      {!view.committedCounts && view.counts && (
+        <Counts counts={view.counts} target={view.target} title="Dry run: what a commit would do" />
+      )}
 
       {view.status === "parsed" && view.counts && mayCommit && (
         <div className="flex flex-wrap items-center gap-4 rounded-lg border-2 border-brass bg-ground-raised p-4">
           <p className="flex-1">
             {view.target === "catalogue"
-              ? "Committing writes every accepted row in one go: all of them, or, if anything fails, none. Rejected rows are left out."
+              ? "Committing writes every accepted row in one go: all of them, or, if " +
+                "anything fails, none. Rejected rows are left out."
               : "Committing puts every accepted row in the review queue as a proposal for another moderator to decide."}
           </p>
           <Button
@@ -258,7 +329,13 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
             type="button"
             className="underline"
             onClick={async () => {
-              if (!window.confirm("Discard this import? Its dry run, rejected rows and the file are thrown away; the catalogue is not touched.")) return;
+              if (
+                !window.confirm(
+                  "Discard this import? Its dry run, rejected rows and the file are " +
+                    "thrown away; the catalogue is not touched.",
+                )
+              )
+                return;
               const result = await sendJson("DELETE", `/api/imports/${view.id}`);
               if (result.ok) router.push("/admin/imports?discarded=1");
               else setError(result.error.message);
@@ -279,7 +356,13 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
               variant="secondary"
               pending={busy}
               onClick={async () => {
-                if (!window.confirm("Roll back this whole import? Everything it added is removed and everything it changed is put back.")) return;
+                if (
+                  !window.confirm(
+                    "Roll back this whole import? Everything it added is removed and " +
+                      "everything it changed is put back.",
+                  )
+                )
+                  return;
                 setBusy(true);
                 const result = await sendJson("POST", `/api/imports/${view.id}/rollback`, {});
                 setBusy(false);
@@ -293,7 +376,9 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
         </div>
       )}
 
-      {!view.committedAt && view.headers.length > 0 && !busyOnServer && <MappingEditor key={JSON.stringify(view.mapping)} view={view} onSaved={() => void mutate()} />}
+      {!view.committedAt && view.headers.length > 0 && !busyOnServer && (
+        <MappingEditor key={JSON.stringify(view.mapping)} view={view} onSaved={() => void mutate()} />
+      )}
 
       {view.rejectionsTotal > 0 && (
         <section aria-labelledby="rejected-heading" className="space-y-2">
@@ -305,20 +390,34 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
               Download the rejected rows (CSV)
             </a>
           </div>
-          {view.rejectionsTotal > view.rejections.length && <p className="text-sm text-ink-soft">The first {view.rejections.length} are shown; the download has them all.</p>}
+          {view.rejectionsTotal > view.rejections.length && (
+            <p className="text-sm text-ink-soft">
+              The first {view.rejections.length} are shown; the download has them all.
+            </p>
+          )}
           <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
             <table className="w-full text-left text-sm">
               <thead className="bg-ground-sunk">
                 <tr>
-                  <th scope="col" className="p-2">Line</th>
-                  <th scope="col" className="p-2">Column</th>
-                  <th scope="col" className="p-2">Reason</th>
+                  <th scope="col" className="p-2">
+                    Line
+                  </th>
+                  <th scope="col" className="p-2">
+                    Column
+                  </th>
+                  <th scope="col" className="p-2">
+                    Reason
+                  </th>
                 </tr>
               </thead>
               <tbody>
                 {view.rejections.map((r) => (
-                  <tr key={`${r.line}-${r.column}`} className="border-t border-rule align-top" data-testid="rejected-row">
-                    <td className="num p-2">{r.line}</td>
+                  <tr
+                    key={`${r.line}-${r.column}`}
+                    className="border-t border-rule align-top"
+                    data-testid="rejected-row"
+                  >
+                    <td className="p-2 num">{r.line}</td>
                     <td className="p-2">{r.column ?? "—"}</td>
                     <td className="p-2">{r.reason}</td>
                   </tr>

@@ -8,7 +8,13 @@ import { SelectField } from "@/components/ui/select-field";
 import { IMPORT_MAX_BYTES, type ImportTarget } from "@/lib/imports/kinds";
 
 /** Drop a CSV: it is sent as it is, stored, and the dry run starts on the server; the page for it opens. */
-export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCatalogue: boolean; mappings: Array<{ id: number; name: string }> }) {
+export function ImportUpload({
+  canCommitToCatalogue,
+  mappings,
+}: {
+  canCommitToCatalogue: boolean;
+  mappings: Array<{ id: number; name: string }>;
+}) {
   const router = useRouter();
   const [target, setTarget] = useState<ImportTarget>(canCommitToCatalogue ? "catalogue" : "review_queue");
   const [mappingId, setMappingId] = useState("");
@@ -38,7 +44,13 @@ export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCa
     onDrop: (accepted, rejected) => {
       if (rejected.length > 0) {
         const code = rejected[0].errors[0]?.code;
-        setState({ busy: false, error: code === "file-too-large" ? `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB.` : "Choose one CSV file (saved from a spreadsheet as CSV)." });
+        setState({
+          busy: false,
+          error:
+            code === "file-too-large"
+              ? `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB.`
+              : "Choose one CSV file (saved from a spreadsheet as CSV).",
+        });
         return;
       }
       if (accepted[0]) void send(accepted[0]);
@@ -51,11 +63,21 @@ export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCa
         Import a spreadsheet
       </h2>
       <div className="grid gap-4 sm:grid-cols-2">
-        <SelectField id="target" label="Into" value={target} onChange={(e) => setTarget(e.target.value as ImportTarget)}>
+        <SelectField
+          id="target"
+          label="Into"
+          value={target}
+          onChange={(e) => setTarget(e.target.value as ImportTarget)}
+        >
           {canCommitToCatalogue && <option value="catalogue">The catalogue (approved crosses)</option>}
           <option value="review_queue">The review queue (proposals for moderators)</option>
         </SelectField>
-        <SelectField id="mapping" label="Column mapping" value={mappingId} onChange={(e) => setMappingId(e.target.value)}>
+        <SelectField
+          id="mapping"
+          label="Column mapping"
+          value={mappingId}
+          onChange={(e) => setMappingId(e.target.value)}
+        >
           <option value="">Match the columns by their titles</option>
           {mappings.map((m) => (
             <option key={m.id} value={m.id}>
@@ -66,14 +88,20 @@ export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCa
       </div>
       <div
         {...getRootProps({
-          className: `flex min-h-36 cursor-pointer flex-col items-center justify-center gap-1 rounded-lg border-2 border-dashed p-4 text-center ${isDragActive ? "border-brass bg-brass-wash" : "border-rule-strong bg-ground"}`,
+          className:
+            `flex min-h-36 cursor-pointer flex-col items-center justify-center ` +
+            `gap-1 rounded-lg border-2 border-dashed p-4 text-center ` +
+            `${isDragActive ? "border-brass bg-brass-wash" : "border-rule-strong bg-ground"}`,
         })}
         data-testid="import-drop"
       >
         <input {...getInputProps({ "aria-label": "Choose a CSV file" })} />
-        <p className="font-bold">{state.busy ? "Sending and storing the file…" : "Drop a CSV file here, or click to choose it"}</p>
+        <p className="font-bold">
+          {state.busy ? "Sending and storing the file…" : "Drop a CSV file here, or click to choose it"}
+        </p>
         <p className="text-sm text-ink-soft">
-          UTF-8 or Windows-1252, commas or semicolons, a title row first; up to {IMPORT_MAX_BYTES / 1024 / 1024} MB. Nothing changes until you have seen the dry run and commit it.
+          UTF-8 or Windows-1252, commas or semicolons, a title row first; up to {IMPORT_MAX_BYTES / 1024 / 1024} MB.
+          Nothing changes until you have seen the dry run and commit it.
         </p>
       </div>
       {state.error && (
@@ -82,7 +110,8 @@ export function ImportUpload({ canCommitToCatalogue, mappings }: { canCommitToCa
         </Notice>
       )}
       <p className="text-sm">
-        The columns and their meaning: <a href="/import-format">the import format</a>, with a <a href="/import-format/sample.csv">sample file</a>.
+        The columns and their meaning: <a href="/import-format">the import format</a>, with a{" "}
+        <a href="/import-format/sample.csv">sample file</a>.
       </p>
     </section>
   );

@@ -3,7 +3,9 @@ import type { Permission } from "@/lib/auth/roles";
 export interface Area {
   label: string;
   href: string;
-  /** Shown only to accounts holding this permission; member areas are also shown to visitors, as an invitation to join. */
+  /**
+   * Shown only to accounts holding this permission; member areas are also shown to visitors, as an invitation to join.
+   */
   permission?: Permission;
   /** Areas whose work has not shipped yet are listed, marked, and not linked. */
   ready: boolean;

@@ -41,17 +41,18 @@ export async function SiteHeader() {
               <Link
                 key={area.href}
                 href={area.href}
-                className="whitespace-nowrap rounded-md px-3 py-2 text-ground no-underline hover:bg-white/10"
+                className="rounded-md px-3 py-2 whitespace-nowrap text-ground no-underline hover:bg-white/10"
               >
                 {area.label}
               </Link>
             ) : (
               <span
                 key={area.href}
-                className="whitespace-nowrap rounded-md px-3 py-2 text-ground/55"
+                className="rounded-md px-3 py-2 whitespace-nowrap text-ground/55"
                 title="This area opens in a coming release"
               >
-                {area.label} <span className="ml-1 rounded border border-ground/30 px-1 text-[0.7rem] uppercase">soon</span>
+                {area.label}{" "}
+                <span className="ml-1 rounded border border-ground/30 px-1 text-[0.7rem] uppercase">soon</span>
               </span>
             ),
           )}

@@ -8,17 +8,26 @@ export function UserMenu({ email, role }: { email: string; role: Role }) {
   return (
     <details className="group relative" data-testid="user-menu">
       <summary className="flex cursor-pointer list-none items-center gap-2 rounded-md px-3 py-2 hover:bg-white/10">
-        <span className="flex h-8 w-8 items-center justify-center rounded-full bg-brass-light font-bold text-ink" aria-hidden="true">
+        <span
+          className="flex h-8 w-8 items-center justify-center rounded-full bg-brass-light font-bold text-ink"
+          aria-hidden="true"
+        >
           {email.charAt(0).toUpperCase()}
         </span>
         <span className="hidden max-w-[14rem] truncate sm:inline">{email}</span>
         <span className="sr-only">Account menu for {email}</span>
-        <span aria-hidden="true" className="text-sm transition-transform group-open:rotate-180">▾</span>
+        <span aria-hidden="true" className="text-sm transition-transform group-open:rotate-180">
+          ▾
+        </span>
       </summary>
-      <div className="absolute right-0 z-20 mt-2 w-64 rounded-lg border border-rule bg-ground-raised p-2 text-ink shadow-lg">
-        <p className="px-3 pb-2 pt-1 text-sm text-ink-soft">
+      <div
+        className={
+          "absolute right-0 z-20 mt-2 w-64 rounded-lg border border-rule " + "bg-ground-raised p-2 text-ink shadow-lg"
+        }
+      >
+        <p className="px-3 pt-1 pb-2 text-sm text-ink-soft">
           Signed in as <span className="block truncate font-bold text-ink">{email}</span>
-          <span className="mt-1 inline-block rounded border border-rule-strong px-1.5 text-xs uppercase tracking-wide">
+          <span className="mt-1 inline-block rounded border border-rule-strong px-1.5 text-xs tracking-wide uppercase">
             {roleNames[role]}
           </span>
         </p>

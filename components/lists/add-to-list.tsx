@@ -33,7 +33,11 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
 
   if (!open) {
     return (
-      <button type="button" onClick={() => setOpen(true)} className={compact ? "text-sm underline" : "font-bold underline"}>
+      <button
+        type="button"
+        onClick={() => setOpen(true)}
+        className={compact ? "text-sm underline" : "font-bold underline"}
+      >
         Add to a job list
       </button>
     );
@@ -59,16 +63,31 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
           listId = created.data.id;
           await mutate();
         }
-        const added = await postJson<{ superseded: boolean; merged: boolean }>(`/api/lists/${listId}/lines`, { ...item, quantity: Number(quantity) || 1 });
+        const added = await postJson<{ superseded: boolean; merged: boolean }>(`/api/lists/${listId}/lines`, {
+          ...item,
+          quantity: Number(quantity) || 1,
+        });
         if (!added.ok) return setError(added.error.message);
-        setDone({ id: listId, text: added.data.merged ? `${number} was already on the list; quantity raised.` : added.data.superseded ? `Added under ${number}'s latest number.` : `${number} added.` });
+        setDone({
+          id: listId,
+          text: added.data.merged
+            ? `${number} was already on the list; quantity raised.`
+            : added.data.superseded
+              ? `Added under ${number}'s latest number.`
+              : `${number} added.`,
+        });
       }}
     >
       <div>
         <label htmlFor={`${id}-list`} className="block text-sm font-bold">
           List
         </label>
-        <select id={`${id}-list`} value={selected} onChange={(e) => setChoice(e.target.value)} className="min-h-10 max-w-56 rounded-md border-2 border-rule-strong bg-ground-raised px-2">
+        <select
+          id={`${id}-list`}
+          value={selected}
+          onChange={(e) => setChoice(e.target.value)}
+          className="min-h-10 max-w-56 rounded-md border-2 border-rule-strong bg-ground-raised px-2"
+        >
           {(lists ?? []).map((l) => (
             <option key={l.id} value={l.id}>
               {l.title}
@@ -82,14 +101,27 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
           <label htmlFor={`${id}-title`} className="block text-sm font-bold">
             New list&apos;s title
           </label>
-          <input id={`${id}-title`} value={title} onChange={(e) => setTitle(e.target.value)} required minLength={2} className="min-h-10 rounded-md border-2 border-rule-strong bg-ground-raised px-2" />
+          <input
+            id={`${id}-title`}
+            value={title}
+            onChange={(e) => setTitle(e.target.value)}
+            required
+            minLength={2}
+            className="min-h-10 rounded-md border-2 border-rule-strong bg-ground-raised px-2"
+          />
         </div>
       )}
       <div>
         <label htmlFor={`${id}-qty`} className="block text-sm font-bold">
           Qty
         </label>
-        <input id={`${id}-qty`} inputMode="numeric" value={quantity} onChange={(e) => setQuantity(e.target.value)} className="num min-h-10 w-16 rounded-md border-2 border-rule-strong bg-ground-raised px-2" />
+        <input
+          id={`${id}-qty`}
+          inputMode="numeric"
+          value={quantity}
+          onChange={(e) => setQuantity(e.target.value)}
+          className="min-h-10 w-16 rounded-md border-2 border-rule-strong bg-ground-raised px-2 num"
+        />
       </div>
       <button type="submit" className="min-h-10 rounded-md bg-brass px-3 font-bold text-white">
         Add

@@ -24,8 +24,18 @@ export function ListDetailsForm({
   machines: Array<{ id: number; label: string }>;
 }) {
   const router = useRouter();
-  const [values, setValues] = useState({ title, machineId: machineId ? String(machineId) : "", machineSerial: machineSerial ?? "", notes: notes ?? "" });
-  const [state, setState] = useState<{ busy: boolean; error: string | null; field: string | null; saved: boolean }>({ busy: false, error: null, field: null, saved: false });
+  const [values, setValues] = useState({
+    title,
+    machineId: machineId ? String(machineId) : "",
+    machineSerial: machineSerial ?? "",
+    notes: notes ?? "",
+  });
+  const [state, setState] = useState<{ busy: boolean; error: string | null; field: string | null; saved: boolean }>({
+    busy: false,
+    error: null,
+    field: null,
+    saved: false,
+  });
   return (
     <details className="no-print rounded-lg border border-rule bg-ground-raised p-4">
       <summary className="cursor-pointer font-bold">Change the title, machine, serial or notes</summary>
@@ -40,12 +50,28 @@ export function ListDetailsForm({
             machineSerial: values.machineId ? values.machineSerial : null,
             notes: values.notes,
           });
-          setState({ busy: false, error: result.ok ? null : result.error.message, field: result.ok ? null : (result.error.field ?? null), saved: result.ok });
+          setState({
+            busy: false,
+            error: result.ok ? null : result.error.message,
+            field: result.ok ? null : (result.error.field ?? null),
+            saved: result.ok,
+          });
           if (result.ok) router.refresh();
         }}
       >
-        <Field id="edit-title" label="What is the job?" value={values.title} onChange={(e) => setValues({ ...values, title: e.target.value })} error={state.field !== "machineSerial" ? (state.error ?? undefined) : undefined} />
-        <SelectField id="edit-machine" label="Machine" value={values.machineId} onChange={(e) => setValues({ ...values, machineId: e.target.value })}>
+        <Field
+          id="edit-title"
+          label="What is the job?"
+          value={values.title}
+          onChange={(e) => setValues({ ...values, title: e.target.value })}
+          error={state.field !== "machineSerial" ? (state.error ?? undefined) : undefined}
+        />
+        <SelectField
+          id="edit-machine"
+          label="Machine"
+          value={values.machineId}
+          onChange={(e) => setValues({ ...values, machineId: e.target.value })}
+        >
           <option value="">Not for one machine</option>
           {machines.map((m) => (
             <option key={m.id} value={m.id}>
@@ -68,7 +94,14 @@ export function ListDetailsForm({
           <label htmlFor="edit-notes" className="block font-bold">
             Notes for the job
           </label>
-          <textarea id="edit-notes" rows={3} maxLength={2000} value={values.notes} onChange={(e) => setValues({ ...values, notes: e.target.value })} className="block w-full rounded-md border-2 border-rule-strong bg-ground px-3 py-2" />
+          <textarea
+            id="edit-notes"
+            rows={3}
+            maxLength={2000}
+            value={values.notes}
+            onChange={(e) => setValues({ ...values, notes: e.target.value })}
+            className="block w-full rounded-md border-2 border-rule-strong bg-ground px-3 py-2"
+          />
         </div>
         <div className="flex items-center gap-3">
           <Button type="submit" variant="secondary" pending={state.busy}>

@@ -14,6 +14,7 @@ import { sendJson } from "@/lib/http/post-json";
 import type { ListLine, ListView, NumberChoice, SerialChoice } from "@/lib/lists/lists";
 
 const WIDE = "(min-width: 768px)";
+const noSubscription = () => () => {};
 const subscribeWide = (onChange: () => void) => {
   const query = window.matchMedia(WIDE);
   query.addEventListener("change", onChange);
@@ -22,7 +23,11 @@ const subscribeWide = (onChange: () => void) => {
 
 /** A table on a wide screen, cards on a phone: one or the other is rendered, so each control exists once. */
 function useWideScreen(): boolean {
-  return useSyncExternalStore(subscribeWide, () => window.matchMedia(WIDE).matches, () => true);
+  return useSyncExternalStore(
+    subscribeWide,
+    () => window.matchMedia(WIDE).matches,
+    () => true,
+  );
 }
 
 async function fetchList(url: string): Promise<ListView> {
@@ -69,7 +74,11 @@ function TextCell({
           if (value === (saved ?? "")) return;
           setError(await save(value));
         }}
-        className={`${width} rounded-md border-2 bg-ground px-2 py-1 text-sm ${numeric ? "num" : ""} ${error ? "border-caution" : "border-rule-strong"}`}
+        className={
+          `${width} rounded-md border-2 bg-ground px-2 py-1 text-sm ` +
+          `${numeric ? "num" : ""} ` +
+          `${error ? "border-caution" : "border-rule-strong"}`
+        }
       />
       {error && <FieldError id={`${id}-error`}>{error}</FieldError>}
     </div>
@@ -104,7 +113,10 @@ function QuantityCell({ line, save }: { line: ListLine; save: (quantity: number)
             void commit();
           }
         }}
-        className={`num w-20 rounded-md border-2 bg-ground px-2 py-1 text-lg ${error ? "border-caution" : "border-rule-strong"}`}
+        className={
+          `w-20 rounded-md border-2 bg-ground px-2 py-1 num text-lg ` +
+          `${error ? "border-caution" : "border-rule-strong"}`
+        }
       />
       {error && <FieldError id={`quantity-${line.id}-error`}>{error}</FieldError>}
     </div>
@@ -125,7 +137,10 @@ const UNDO_SHOWN_MS = 10_000;
 
 /** The job list as its owner works on it: add by number, edit lines inline, pick equivalents, share, export. */
 export function ListEditor({ initial }: { initial: ListView }) {
-  const { data, mutate } = useSWR(`/api/lists/${initial.id}`, fetchList, { fallbackData: initial, revalidateOnFocus: false });
+  const { data, mutate } = useSWR(`/api/lists/${initial.id}`, fetchList, {
+    fallbackData: initial,
+    revalidateOnFocus: false,
+  });
   const view = data ?? initial;
   const wide = useWideScreen();
   const [number, setNumber] = useState("");
@@ -141,22 +156,40 @@ export function ListEditor({ initial }: { initial: ListView }) {
   /** Adds by typed number or by a chosen part; says what the number was read as, or offers the parts it may be. */
   const add = async (item: { number: string } | { partId: number }): Promise<boolean> => {
     setMessage(null);
-    const result = await sendJson<{ superseded: boolean; merged: boolean; read: string | null; latestNumber: string | null }>("POST", `/api/lists/${view.id}/lines`, { ...item, quantity: Number(quantity) || 1 });
+    const result = await sendJson<{
+      superseded: boolean;
+      merged: boolean;
+      read: string | null;
+      latestNumber: string | null;
+    }>("POST", `/api/lists/${view.id}/lines`, { ...item, quantity: Number(quantity) || 1 });
     if (!result.ok) {
-      setMessage({ tone: "caution", text: result.error.message, numbers: result.error.field === "number" ? (result.error.choices as NumberChoice[] | undefined) : undefined });
+      setMessage({
+        tone: "caution",
+        text: result.error.message,
+        numbers: result.error.field === "number" ? (result.error.choices as NumberChoice[] | undefined) : undefined,
+      });
       return false;
     }
     const { merged, superseded, read, latestNumber } = result.data;
     const readAs = read ? `Read as ${read}. ` : "";
-    const text = merged ? "Already on the list: its quantity was raised." : superseded ? `That number is superseded: added as ${latestNumber}.` : "Added.";
+    const text = merged
+      ? "Already on the list: its quantity was raised."
+      : superseded
+        ? `That number is superseded: added as ${latestNumber}.`
+        : "Added.";
     setMessage({ tone: "success", text: `${readAs}${text}` });
     setQuantity("1");
     await mutate();
     return true;
   };
-  const [shareUrl, setShareUrl] = useState<string | null>(initial.shareToken ? `/lists/shared/${initial.id}?token=${initial.shareToken}` : null);
-  const [origin, setOrigin] = useState("");
-  useEffect(() => setOrigin(window.location.origin), []);
+  const [shareUrl, setShareUrl] = useState<string | null>(
+    initial.shareToken ? `/lists/shared/${initial.id}?token=${initial.shareToken}` : null,
+  );
+  const origin = useSyncExternalStore(
+    noSubscription,
+    () => window.location.origin,
+    () => "",
+  );
 
   // The same cells serve the table on wide screens and the cards on a phone.
   const cells = useMemo(() => {
@@ -166,14 +199,18 @@ export function ListEditor({ initial }: { initial: ListView }) {
       return result.ok ? null : result.error.message;
     };
     const addAssembly = async (line: ListLine, serial?: string) => {
-      const result = await sendJson<{ added: number; machine: string; assembly: string; serial: string | null; serials: string | null; skipped: string[] }>(
-        "POST",
-        `/api/lists/${view.id}/lines/${line.id}/assembly`,
-        serial ? { serial } : {},
-      );
+      const result = await sendJson<{
+        added: number;
+        machine: string;
+        assembly: string;
+        serial: string | null;
+        serials: string | null;
+        skipped: string[];
+      }>("POST", `/api/lists/${view.id}/lines/${line.id}/assembly`, serial ? { serial } : {});
       await mutate();
       if (!result.ok) {
-        const choices = result.error.field === "serial" ? (result.error.choices as SerialChoice[] | undefined) : undefined;
+        const choices =
+          result.error.field === "serial" ? (result.error.choices as SerialChoice[] | undefined) : undefined;
         setMessage({ tone: "caution", text: result.error.message, serials: choices ? { line, choices } : undefined });
         return;
       }
@@ -182,13 +219,22 @@ export function ListEditor({ initial }: { initial: ListView }) {
       const already = skipped.length > 0 ? ` Already on the list: ${skipped.join(", ").toLowerCase()}.` : "";
       setMessage({
         tone: "success",
-        text: added === 0 ? `Every position of the ${assembly.toLowerCase()} (${machine}${forSerial}) is already on the list.` : `Added ${added} more ${added === 1 ? "part" : "parts"} of the ${assembly.toLowerCase()} (${machine}${forSerial}), one for each position.${already}`,
+        text:
+          added === 0
+            ? `Every position of the ${assembly.toLowerCase()} (${machine}${forSerial}) is already on the list.`
+            : `Added ${added} more ${added === 1 ? "part" : "parts"} of the ` +
+              `${assembly.toLowerCase()} (${machine}${forSerial}), one for each ` +
+              `position.${already}`,
       });
     };
     const remove = async (line: ListLine) => {
       const result = await sendJson("DELETE", `/api/lists/${view.id}/lines/${line.id}`);
       await mutate();
-      setMessage(result.ok ? { tone: "success", text: `Removed ${line.number}.`, undo: { lineId: line.id, number: line.number } } : { tone: "caution", text: result.error.message });
+      setMessage(
+        result.ok
+          ? { tone: "success", text: `Removed ${line.number}.`, undo: { lineId: line.id, number: line.number } }
+          : { tone: "caution", text: result.error.message },
+      );
     };
     return {
       addAssembly,
@@ -197,10 +243,12 @@ export function ListEditor({ initial }: { initial: ListView }) {
           <span className="text-sm text-ink-soft">none: sized from measurements</span>
         ) : (
           <>
-            <Link href={`/parts/${l.partId}`} className="num whitespace-nowrap font-bold">
+            <Link href={`/parts/${l.partId}`} className="num font-bold whitespace-nowrap">
               {l.number}
             </Link>
-            {l.earlierNumbers.length > 0 && <span className="num block text-sm text-ink-soft">replaces {l.earlierNumbers.join(", ")}</span>}
+            {l.earlierNumbers.length > 0 && (
+              <span className="block num text-sm text-ink-soft">replaces {l.earlierNumbers.join(", ")}</span>
+            )}
           </>
         ),
       part: (l: ListLine) => (
@@ -220,7 +268,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
                 aria-label={`Standard part for ${l.number}`}
                 value={l.chosen.standardPartId}
                 onChange={(e) => void patch(l, { standardPartId: Number(e.target.value) })}
-                className="num max-w-56 rounded-md border-2 border-rule-strong bg-ground px-2 py-1"
+                className="max-w-56 rounded-md border-2 border-rule-strong bg-ground px-2 py-1 num"
               >
                 {l.equivalents.map((e) => (
                   <option key={e.standardPartId} value={e.standardPartId}>
@@ -231,24 +279,72 @@ export function ListEditor({ initial }: { initial: ListView }) {
             ) : (
               <span className="num font-bold">{l.chosen.designation}</span>
             )}
-            <span className="num block text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
-            {l.measured ? <span className="block text-sm">Sized from your measurements</span> : <FitBadge fit={l.chosen.fit} />}
-            {l.chosen.viaNumber && <span className="block text-sm text-ink-soft">recorded on {l.chosen.viaNumber}</span>}
+            <span className="block num text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
+            {l.measured ? (
+              <span className="block text-sm">Sized from your measurements</span>
+            ) : (
+              <FitBadge fit={l.chosen.fit} />
+            )}
+            {l.chosen.viaNumber && (
+              <span className="block text-sm text-ink-soft">recorded on {l.chosen.viaNumber}</span>
+            )}
           </div>
         );
       },
       quantity: (l: ListLine) => <QuantityCell key={l.quantity} line={l} save={(q) => patch(l, { quantity: q })} />,
-      notes: (l: ListLine) => <TextCell key={l.notes ?? ""} line={l} label="Notes" value={l.notes} maxLength={500} placeholder="e.g. customer supplies" save={(v) => patch(l, { notes: v })} />,
+      notes: (l: ListLine) => (
+        <TextCell
+          key={l.notes ?? ""}
+          line={l}
+          label="Notes"
+          value={l.notes}
+          maxLength={500}
+          placeholder="e.g. customer supplies"
+          save={(v) => patch(l, { notes: v })}
+        />
+      ),
       supplier: (l: ListLine) => (
         <div className="space-y-1">
-          <TextCell key={`s${l.supplier ?? ""}`} line={l} label="Supplier" value={l.supplier} maxLength={120} placeholder="Supplier" save={(v) => patch(l, { supplier: v })} />
-          <TextCell key={`n${l.supplierNumber ?? ""}`} line={l} label="Supplier's number" value={l.supplierNumber} maxLength={60} placeholder="Their number" save={(v) => patch(l, { supplierNumber: v })} />
-          <TextCell key={`p${l.unitPrice ?? ""}`} line={l} label="Unit price" value={l.unitPrice} maxLength={14} width="w-28" numeric placeholder="Price each" save={(v) => patch(l, { unitPrice: v })} />
+          <TextCell
+            key={`s${l.supplier ?? ""}`}
+            line={l}
+            label="Supplier"
+            value={l.supplier}
+            maxLength={120}
+            placeholder="Supplier"
+            save={(v) => patch(l, { supplier: v })}
+          />
+          <TextCell
+            key={`n${l.supplierNumber ?? ""}`}
+            line={l}
+            label="Supplier's number"
+            value={l.supplierNumber}
+            maxLength={60}
+            placeholder="Their number"
+            save={(v) => patch(l, { supplierNumber: v })}
+          />
+          <TextCell
+            key={`p${l.unitPrice ?? ""}`}
+            line={l}
+            label="Unit price"
+            value={l.unitPrice}
+            maxLength={14}
+            width="w-28"
+            numeric
+            placeholder="Price each"
+            save={(v) => patch(l, { unitPrice: v })}
+          />
         </div>
       ),
       ordered: (l: ListLine) => (
         <label className="flex min-h-11 items-center gap-2 text-sm">
-          <input type="checkbox" checked={l.ordered} onChange={(e) => void patch(l, { ordered: e.target.checked })} className="h-5 w-5" aria-label={`${l.number} ordered`} />
+          <input
+            type="checkbox"
+            checked={l.ordered}
+            onChange={(e) => void patch(l, { ordered: e.target.checked })}
+            className="h-5 w-5"
+            aria-label={`${l.number} ordered`}
+          />
           <span aria-hidden="true">Ordered</span>
         </label>
       ),
@@ -313,7 +409,12 @@ export function ListEditor({ initial }: { initial: ListView }) {
           </div>
         ),
       },
-      { id: "supplier", accessorFn: (l) => l.supplier ?? "", header: "Supplier", cell: ({ row }) => cells.supplier(row.original) },
+      {
+        id: "supplier",
+        accessorFn: (l) => l.supplier ?? "",
+        header: "Supplier",
+        cell: ({ row }) => cells.supplier(row.original),
+      },
       { accessorKey: "notes", header: "Notes", enableSorting: false, cell: ({ row }) => cells.notes(row.original) },
     ],
     [cells],
@@ -336,13 +437,25 @@ export function ListEditor({ initial }: { initial: ListView }) {
           <label htmlFor="add-number" className="block font-bold">
             Add a part by factory number
           </label>
-          <input id="add-number" value={number} onChange={(e) => setNumber(e.target.value)} required className="num block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg" />
+          <input
+            id="add-number"
+            value={number}
+            onChange={(e) => setNumber(e.target.value)}
+            required
+            className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 num text-lg"
+          />
         </div>
         <div className="w-24 space-y-1">
           <label htmlFor="add-quantity" className="block font-bold">
             Qty
           </label>
-          <input id="add-quantity" inputMode="numeric" value={quantity} onChange={(e) => setQuantity(e.target.value)} className="num block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 text-lg" />
+          <input
+            id="add-quantity"
+            inputMode="numeric"
+            value={quantity}
+            onChange={(e) => setQuantity(e.target.value)}
+            className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 num text-lg"
+          />
         </div>
         <Button type="submit" pending={adding}>
           Add
@@ -354,7 +467,12 @@ export function ListEditor({ initial }: { initial: ListView }) {
           {message.numbers && message.numbers.length > 0 && (
             <span className="mt-2 flex flex-wrap gap-2">
               {message.numbers.map((c) => (
-                <Button key={c.partId} type="button" variant="secondary" onClick={() => void add({ partId: c.partId }).then((ok) => ok && setNumber(""))}>
+                <Button
+                  key={c.partId}
+                  type="button"
+                  variant="secondary"
+                  onClick={() => void add({ partId: c.partId }).then((ok) => ok && setNumber(""))}
+                >
                   <span className="num">{c.number}</span>
                   <span className="ml-2 text-sm font-normal">
                     {c.maker}, {c.description.toLowerCase()}
@@ -366,7 +484,12 @@ export function ListEditor({ initial }: { initial: ListView }) {
           {message.serials && (
             <span className="mt-2 flex flex-wrap gap-2">
               {message.serials.choices.map((c) => (
-                <Button key={c.serial} type="button" variant="secondary" onClick={() => void cells.addAssembly(message.serials!.line, c.serial)}>
+                <Button
+                  key={c.serial}
+                  type="button"
+                  variant="secondary"
+                  onClick={() => void cells.addAssembly(message.serials!.line, c.serial)}
+                >
                   Serial {c.label}
                 </Button>
               ))}
@@ -381,7 +504,11 @@ export function ListEditor({ initial }: { initial: ListView }) {
                 const undo = message.undo!;
                 const result = await sendJson("POST", `/api/lists/${view.id}/lines/${undo.lineId}/restore`, {});
                 await mutate();
-                setMessage(result.ok ? { tone: "success", text: `${undo.number} is back on the list.` } : { tone: "caution", text: result.error.message });
+                setMessage(
+                  result.ok
+                    ? { tone: "success", text: `${undo.number} is back on the list.` }
+                    : { tone: "caution", text: result.error.message },
+                );
               }}
             >
               Undo
@@ -393,15 +520,27 @@ export function ListEditor({ initial }: { initial: ListView }) {
       {view.lines.length === 0 ? (
         <Notice>The list is empty. Add parts by number above, or from a part page or the look-up results.</Notice>
       ) : wide ? (
-        <SortableTable rows={view.lines} columns={columns} count={(shown) => `${shown} ${shown === 1 ? "line" : "lines"}, ${view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all`} rowTestId="list-line" />
+        <SortableTable
+          rows={view.lines}
+          columns={columns}
+          count={(shown) =>
+            `${shown} ${shown === 1 ? "line" : "lines"}, ${view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all`
+          }
+          rowTestId="list-line"
+        />
       ) : (
         <>
           <p className="text-sm text-ink-soft" role="status">
-            {view.lines.length} {view.lines.length === 1 ? "line" : "lines"}, {view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all
+            {view.lines.length} {view.lines.length === 1 ? "line" : "lines"},{" "}
+            {view.lines.reduce((s, l) => s + l.quantity, 0)} parts in all
           </p>
           <ul className="space-y-3" aria-label="Lines">
             {view.lines.map((l) => (
-              <li key={l.id} className="space-y-2 rounded-lg border border-rule bg-ground-raised p-3" data-testid="list-line">
+              <li
+                key={l.id}
+                className="space-y-2 rounded-lg border border-rule bg-ground-raised p-3"
+                data-testid="list-line"
+              >
                 <div className="flex items-start justify-between gap-3">
                   <div>
                     {cells.number(l)}
@@ -429,13 +568,15 @@ export function ListEditor({ initial }: { initial: ListView }) {
           <ul className="flex flex-wrap gap-3">
             {view.totals.map((t) => (
               <li key={t.category} className="rounded-md border border-rule bg-ground-raised px-3 py-2">
-                {t.name}: <span className="num font-bold">{t.quantity}</span> ({t.lines} {t.lines === 1 ? "line" : "lines"})
+                {t.name}: <span className="num font-bold">{t.quantity}</span> ({t.lines}{" "}
+                {t.lines === 1 ? "line" : "lines"})
               </li>
             ))}
           </ul>
           {view.warnings > 0 && (
             <Notice tone="caution">
-              {view.warnings} {view.warnings === 1 ? "line needs" : "lines need"} a check before ordering: each is marked ⚠ under “Order as”, with the number it is about.
+              {view.warnings} {view.warnings === 1 ? "line needs" : "lines need"} a check before ordering: each is
+              marked ⚠ under “Order as”, with the number it is about.
             </Notice>
           )}
         </section>
@@ -454,14 +595,23 @@ export function ListEditor({ initial }: { initial: ListView }) {
               Printable sheet
             </Link>
           </p>
-          <p className="text-sm text-ink-soft">One row a line: the list, machine and serial, factory number, standard designation, sizes, fit, quantity, supplier details and your notes.</p>
+          <p className="text-sm text-ink-soft">
+            One row a line: the list, machine and serial, factory number, standard designation, sizes, fit, quantity,
+            supplier details and your notes.
+          </p>
         </div>
         <div className="space-y-2 rounded-lg border border-rule bg-ground-raised p-4">
           <h2 className="text-xl">Share</h2>
           {shareUrl ? (
             <>
               <p className="text-sm">Anyone with this link can read the list (not change it):</p>
-              <input readOnly aria-label="Share link" value={`${origin}${shareUrl}`} className="num w-full rounded-md border border-rule-strong bg-ground px-2 py-1 text-sm" onFocus={(e) => e.target.select()} />
+              <input
+                readOnly
+                aria-label="Share link"
+                value={`${origin}${shareUrl}`}
+                className="w-full rounded-md border border-rule-strong bg-ground px-2 py-1 num text-sm"
+                onFocus={(e) => e.target.select()}
+              />
               <button
                 type="button"
                 className="text-sm underline"
@@ -478,7 +628,9 @@ export function ListEditor({ initial }: { initial: ListView }) {
               type="button"
               variant="secondary"
               onClick={async () => {
-                const result = await sendJson<{ token: string }>("POST", `/api/lists/${view.id}/share`, { enabled: true });
+                const result = await sendJson<{ token: string }>("POST", `/api/lists/${view.id}/share`, {
+                  enabled: true,
+                });
                 if (result.ok) setShareUrl(`/lists/shared/${view.id}?token=${result.data.token}`);
               }}
             >

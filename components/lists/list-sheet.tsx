@@ -14,7 +14,9 @@ export function ListSheet({ view }: { view: ListView }) {
   return (
     <article className="sheet space-y-3">
       <header className="space-y-0.5">
-        <p className="text-xs uppercase tracking-wide text-ink-soft">Understudy job list · printed {new Date().toUTCString().slice(5, 16)}</p>
+        <p className="text-xs tracking-wide text-ink-soft uppercase">
+          Understudy job list · printed {new Date().toUTCString().slice(5, 16)}
+        </p>
         <h1 className="text-2xl">{view.title}</h1>
         {view.machine && (
           <p className="font-bold">
@@ -22,37 +24,55 @@ export function ListSheet({ view }: { view: ListView }) {
             {view.machineSerial && <span className="num font-normal"> · serial {view.machineSerial}</span>}
           </p>
         )}
-        {view.notes && <p className="whitespace-pre-line text-sm">{view.notes}</p>}
+        {view.notes && <p className="text-sm whitespace-pre-line">{view.notes}</p>}
       </header>
       <table className="sheet-table w-full border-collapse text-left text-[0.8rem] leading-snug">
         <thead>
           <tr className="border-b-2 border-ink">
-            <th scope="col" className="w-6 py-1 pr-1">✓</th>
-            <th scope="col" className="py-1 pr-2 text-right">Qty</th>
-            <th scope="col" className="py-1 pr-2">Order as</th>
-            <th scope="col" className="py-1 pr-2">Factory number</th>
-            <th scope="col" className="py-1 pr-2">Part</th>
-            {supplierColumn && <th scope="col" className="py-1 pr-2">Supplier</th>}
+            <th scope="col" className="w-6 py-1 pr-1">
+              ✓
+            </th>
+            <th scope="col" className="py-1 pr-2 text-right">
+              Qty
+            </th>
+            <th scope="col" className="py-1 pr-2">
+              Order as
+            </th>
+            <th scope="col" className="py-1 pr-2">
+              Factory number
+            </th>
+            <th scope="col" className="py-1 pr-2">
+              Part
+            </th>
+            {supplierColumn && (
+              <th scope="col" className="py-1 pr-2">
+                Supplier
+              </th>
+            )}
           </tr>
         </thead>
         <tbody>
           {view.lines.map((l) => (
             <tr key={l.id} className="border-b border-rule align-top" data-testid="sheet-line">
               <td className="py-1 pr-1">{l.ordered ? "☑" : "☐"}</td>
-              <td className="num py-1 pr-2 text-right text-base font-bold">{l.quantity}</td>
+              <td className="py-1 pr-2 text-right num text-base font-bold">{l.quantity}</td>
               <td className="py-1 pr-2">
-                <span className="num block font-bold">{l.chosen?.designation ?? l.method ?? "no approved standard part"}</span>
+                <span className="block num font-bold">
+                  {l.chosen?.designation ?? l.method ?? "no approved standard part"}
+                </span>
                 {l.chosen && (
-                  <span className="num block text-xs">
+                  <span className="block num text-xs">
                     {standardSizes(l.chosen)}
                     {standardSizes(l.chosen) && " · "}
                     {l.measured ? "sized from measurements" : FIT_NAMES[l.chosen.fit].word.toLowerCase()}
                   </span>
                 )}
               </td>
-              <td className="num py-1 pr-2">
+              <td className="py-1 pr-2 num">
                 {l.partId === null ? "—" : l.number}
-                {l.earlierNumbers.length > 0 && <span className="block text-xs">was {l.earlierNumbers.join(", ")}</span>}
+                {l.earlierNumbers.length > 0 && (
+                  <span className="block text-xs">was {l.earlierNumbers.join(", ")}</span>
+                )}
               </td>
               <td className="py-1 pr-2">
                 {l.description}
@@ -62,8 +82,8 @@ export function ListSheet({ view }: { view: ListView }) {
               {supplierColumn && (
                 <td className="py-1 pr-2 text-xs">
                   {l.supplier}
-                  {l.supplierNumber && <span className="num block">{l.supplierNumber}</span>}
-                  {l.unitPrice && <span className="num block">@ {l.unitPrice}</span>}
+                  {l.supplierNumber && <span className="block num">{l.supplierNumber}</span>}
+                  {l.unitPrice && <span className="block num">@ {l.unitPrice}</span>}
                 </td>
               )}
             </tr>
@@ -72,7 +92,7 @@ export function ListSheet({ view }: { view: ListView }) {
         <tfoot>
           <tr>
             <td />
-            <td className="num py-1 pr-2 text-right font-bold">{total}</td>
+            <td className="py-1 pr-2 text-right num font-bold">{total}</td>
             <td colSpan={supplierColumn ? 4 : 3} className="py-1 pr-2 text-xs">
               {view.totals.map((t) => `${t.name} ${t.quantity}`).join(" · ")}
             </td>
@@ -87,7 +107,9 @@ export function ListSheet({ view }: { view: ListView }) {
           </ul>
         </section>
       )}
-      <p className="text-xs text-ink-soft">Measure the old part before you order: the catalogue records what members fitted, not a guarantee.</p>
+      <p className="text-xs text-ink-soft">
+        Measure the old part before you order: the catalogue records what members fitted, not a guarantee.
+      </p>
       {view.cautions.length > 0 && <Cautions kinds={view.cautions} compact />}
     </article>
   );

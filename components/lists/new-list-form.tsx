@@ -20,15 +20,30 @@ export function NewListForm({ machines }: { machines: Array<{ id: number; label:
       onSubmit={async (e) => {
         e.preventDefault();
         setBusy(true);
-        const result = await postJson<{ id: number }>("/api/lists", { title, machineId: machineId ? Number(machineId) : null });
+        const result = await postJson<{ id: number }>("/api/lists", {
+          title,
+          machineId: machineId ? Number(machineId) : null,
+        });
         setBusy(false);
         if (result.ok) router.push(`/lists/${result.data.id}`);
         else setError(result.error.message);
       }}
     >
       <h2 className="text-xl">Start a list for a job</h2>
-      <Field id="list-title" label="What is the job?" hint="For example: water pump rebuild, customer's 1948 crawler." value={title} onChange={(e) => setTitle(e.target.value)} error={error ?? undefined} />
-      <SelectField id="list-machine" label="Machine (optional)" value={machineId} onChange={(e) => setMachineId(e.target.value)}>
+      <Field
+        id="list-title"
+        label="What is the job?"
+        hint="For example: water pump rebuild, customer's 1948 crawler."
+        value={title}
+        onChange={(e) => setTitle(e.target.value)}
+        error={error ?? undefined}
+      />
+      <SelectField
+        id="list-machine"
+        label="Machine (optional)"
+        value={machineId}
+        onChange={(e) => setMachineId(e.target.value)}
+      >
         <option value="">Not for one machine</option>
         {machines.map((m) => (
           <option key={m.id} value={m.id}>

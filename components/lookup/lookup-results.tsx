@@ -6,11 +6,17 @@ import { Notice } from "@/components/ui/notice";
 import type { LookupResult } from "@/lib/catalogue/find-parts";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
 
-const members = (n: number) => (n === 0 ? "not yet confirmed by a member" : `${n} ${n === 1 ? "member" : "members"} fitted it`);
+const members = (n: number) =>
+  n === 0 ? "not yet confirmed by a member" : `${n} ${n === 1 ? "member" : "members"} fitted it`;
 
 /** The best standard part on a result card, so a person need not open each part to know what to order. */
 function Best({ result }: { result: LookupResult }) {
-  if (!result.best) return <span className="mt-2 block text-sm text-ink-soft">No approved standard part yet: measure it, or propose one you have fitted.</span>;
+  if (!result.best)
+    return (
+      <span className="mt-2 block text-sm text-ink-soft">
+        No approved standard part yet: measure it, or propose one you have fitted.
+      </span>
+    );
   return (
     <span className="mt-2 block space-y-1" data-testid="best">
       <span className="block">
@@ -28,13 +34,29 @@ function Best({ result }: { result: LookupResult }) {
 }
 
 /** The results of a look-up, worked out on the server. */
-export function LookupResults({ query, maker, results, signedIn = false }: { query: string; maker: string | null; results: LookupResult[]; signedIn?: boolean }) {
-  if (!query) return <p className="text-ink-soft">Type a factory number as stamped, part of one, or words such as “water pump bearing model 22”.</p>;
+export function LookupResults({
+  query,
+  maker,
+  results,
+  signedIn = false,
+}: {
+  query: string;
+  maker: string | null;
+  results: LookupResult[];
+  signedIn?: boolean;
+}) {
+  if (!query)
+    return (
+      <p className="text-ink-soft">
+        Type a factory number as stamped, part of one, or words such as “water pump bearing model 22”.
+      </p>
+    );
   if (results.length === 0) {
     return (
       <Notice role="status">
-        Nothing like <span className="num font-bold">{query}</span> is in the catalogue{maker ? ` for ${maker}` : ""} yet. Check the stamping under a light at an
-        angle, try fewer characters or without the maker&apos;s prefix, or measure the part: <Link href="/measure/bearing">bearing</Link>,{" "}
+        Nothing like <span className="num font-bold">{query}</span> is in the catalogue
+        {maker ? ` for ${maker}` : ""} yet. Check the stamping under a light at an angle, try fewer characters or
+        without the maker&apos;s prefix, or measure the part: <Link href="/measure/bearing">bearing</Link>,{" "}
         <Link href="/measure/seal">lip seal</Link>, <Link href="/measure/belt">V-belt</Link>.
       </Notice>
     );
@@ -43,14 +65,23 @@ export function LookupResults({ query, maker, results, signedIn = false }: { que
   return (
     <section aria-label="Results">
       <p className="mb-3 text-ink-soft" role="status">
-        {results.length} {results.length === 1 ? "part" : "parts"} for <span className="num font-bold text-ink">{query}</span>
+        {results.length} {results.length === 1 ? "part" : "parts"} for{" "}
+        <span className="num font-bold text-ink">{query}</span>
         {maker ? ` from ${maker}` : ""}, closest first.
-        {exact > 0 && results.length > exact && " Similar numbers follow the match: check the stamping if the match is not your part."}
+        {exact > 0 &&
+          results.length > exact &&
+          " Similar numbers follow the match: check the stamping if the match is not your part."}
       </p>
       <ol className="space-y-3">
         {results.map((r) => (
           <li key={r.id} data-testid="result" data-matched-by={r.matchedBy}>
-            <Link href={`/parts/${r.id}`} className="block rounded-lg border-2 border-rule bg-ground-raised p-4 text-ink no-underline hover:border-brass">
+            <Link
+              href={`/parts/${r.id}`}
+              className={
+                "block rounded-lg border-2 border-rule bg-ground-raised p-4 text-ink " +
+                "no-underline hover:border-brass"
+              }
+            >
               <span className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
                 <span className="num text-2xl font-bold">{r.number}</span>
                 <MatchBadge matchedBy={r.matchedBy} why={r.why} />

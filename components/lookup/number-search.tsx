@@ -87,9 +87,15 @@ export function NumberSearch({
           aria-autocomplete="list"
           aria-activedescendant={active >= 0 ? `${listId}-${active}` : undefined}
           aria-describedby="q-hint"
-          className="num min-h-14 flex-1 rounded-md border-2 border-ink/70 bg-ground-raised px-4 text-xl tracking-wide focus:border-brass"
+          className={
+            "min-h-14 flex-1 rounded-md border-2 border-ink/70 bg-ground-raised " +
+            "px-4 num text-xl tracking-wide focus:border-brass"
+          }
         />
-        <button type="submit" className="min-h-14 rounded-md bg-brass px-6 text-lg font-bold text-white hover:bg-brass-deep">
+        <button
+          type="submit"
+          className="min-h-14 rounded-md bg-brass px-6 text-lg font-bold text-white hover:bg-brass-deep"
+        >
           Find the standard part
         </button>
       </div>
@@ -118,10 +124,11 @@ export function NumberSearch({
         </p>
       )}
       <p id="q-hint" className="mt-2 text-sm text-ink-soft">
-        Type it as stamped: spaces, dashes and a worn character or two are fine. Part of a number, or words such as “water pump bearing model 22”, work too.
+        Type it as stamped: spaces, dashes and a worn character or two are fine. Part of a number, or words such as
+        “water pump bearing model 22”, work too.
       </p>
       {showList && (
-        <div className="absolute left-0 right-0 z-30 mt-1 rounded-lg border-2 border-ink/80 bg-ground-raised shadow-xl">
+        <div className="absolute right-0 left-0 z-30 mt-1 rounded-lg border-2 border-ink/80 bg-ground-raised shadow-xl">
           <ul id={listId} role="listbox" aria-label="Matching factory numbers" className="max-h-96 overflow-y-auto">
             {results.map((r, i) => (
               <li
@@ -131,7 +138,10 @@ export function NumberSearch({
                 aria-selected={i === active}
                 onMouseDown={(e) => e.preventDefault()}
                 onClick={() => go(r.id)}
-                className={`cursor-pointer border-b border-rule px-4 py-3 last:border-b-0 ${i === active ? "bg-brass-wash" : "hover:bg-ground-sunk"}`}
+                className={
+                  `cursor-pointer border-b border-rule px-4 py-3 last:border-b-0 ` +
+                  `${i === active ? "bg-brass-wash" : "hover:bg-ground-sunk"}`
+                }
               >
                 <span className="flex flex-wrap items-baseline gap-x-3">
                   <span className="num text-lg font-bold">{r.number}</span>
@@ -145,7 +155,11 @@ export function NumberSearch({
             ))}
           </ul>
           <p className="px-4 py-2 text-sm text-ink-soft" role="status">
-            {isLoading ? "Searching…" : results.length === 0 && settled ? `No factory number like “${settled}” yet. Try fewer characters, or measure the part.` : `${results.length} shown. Enter for all results.`}
+            {isLoading
+              ? "Searching…"
+              : results.length === 0 && settled
+                ? `No factory number like “${settled}” yet. Try fewer characters, or measure the part.`
+                : `${results.length} shown. Enter for all results.`}
           </p>
         </div>
       )}

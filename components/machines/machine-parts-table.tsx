@@ -12,7 +12,7 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
     accessorKey: "number",
     header: "Factory number",
     cell: ({ row }) => (
-      <Link href={`/parts/${row.original.partId}`} className="num whitespace-nowrap font-bold">
+      <Link href={`/parts/${row.original.partId}`} className="num font-bold whitespace-nowrap">
         {row.original.number}
       </Link>
     ),
@@ -27,15 +27,25 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
       </>
     ),
   },
-  { accessorKey: "serials", header: "Serials", cell: ({ getValue }) => <span className="num whitespace-nowrap text-sm">{getValue<string | null>() ?? "all"}</span> },
-  { accessorKey: "category", header: "Kind", cell: ({ getValue }) => CATEGORY_NAMES[getValue<MachinePartRow["category"]>()] },
+  {
+    accessorKey: "serials",
+    header: "Serials",
+    cell: ({ getValue }) => <span className="num text-sm whitespace-nowrap">{getValue<string | null>() ?? "all"}</span>,
+  },
+  {
+    accessorKey: "category",
+    header: "Kind",
+    cell: ({ getValue }) => CATEGORY_NAMES[getValue<MachinePartRow["category"]>()],
+  },
   {
     accessorKey: "standard",
     header: "Standard equivalent",
     cell: ({ row }) => (
       <>
         <span className="num">{row.original.standard ?? "none approved yet"}</span>
-        {row.original.viaNumber && <span className="block text-sm text-ink-soft">recorded on {row.original.viaNumber}</span>}
+        {row.original.viaNumber && (
+          <span className="block text-sm text-ink-soft">recorded on {row.original.viaNumber}</span>
+        )}
       </>
     ),
   },
@@ -46,7 +56,9 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
       const fit = getValue<MachinePartRow["fit"]>();
       return fit ? (
         <span className="whitespace-nowrap">
-          <span aria-hidden="true" className="mr-1 text-brass">{FIT_NAMES[fit].mark}</span>
+          <span aria-hidden="true" className="mr-1 text-brass">
+            {FIT_NAMES[fit].mark}
+          </span>
           {FIT_NAMES[fit].word}
         </span>
       ) : (

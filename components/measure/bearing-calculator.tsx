@@ -69,7 +69,9 @@ export function BearingCalculator() {
   const settledDesignation = useDebounced(designation);
   const settled = useDebounced(sizes);
 
-  const decode = useCalculation<DecodedBearing>(calculationUrl("/api/bearings/decode", { designation: settledDesignation }, ["designation"]));
+  const decode = useCalculation<DecodedBearing>(
+    calculationUrl("/api/bearings/decode", { designation: settledDesignation }, ["designation"]),
+  );
   const match = useCalculation<{ candidates: BearingCandidate[]; warnings: string[]; catalogueParts: SizedPart[] }>(
     calculationUrl("/api/bearings/match", { ...settled, unit }, ["bore", "od"]),
   );
@@ -102,15 +104,53 @@ export function BearingCalculator() {
           <div className="space-y-4">
             <UnitSwitch unit={unit} onChange={changeUnit} />
             <div className="grid gap-4 sm:grid-cols-2">
-              <SizeField id="bore" label="Bore (d)" hint="Inside diameter of the inner ring." value={sizes.bore} onChange={set("bore")} onFocus={() => setActive("bore")} error={errorFor(match.error, "bore")} unit={unit} />
-              <SizeField id="od" label="Outside diameter (D)" value={sizes.od} onChange={set("od")} onFocus={() => setActive("od")} error={errorFor(match.error, "od")} unit={unit} />
-              <SizeField id="width" label="Width (B)" hint="Optional, but it tells series apart." value={sizes.width} onChange={set("width")} onFocus={() => setActive("width")} error={errorFor(match.error, "width")} unit={unit} />
-              <SizeField id="tolerance" label="Tolerance" hint={`How far off a reading may be. Default ${unit === "in" ? "0.004 in" : "0.1 mm"}.`} value={sizes.tolerance} onChange={set("tolerance")} onFocus={() => setActive(null)} error={errorFor(match.error, "tolerance")} unit={unit} />
+              <SizeField
+                id="bore"
+                label="Bore (d)"
+                hint="Inside diameter of the inner ring."
+                value={sizes.bore}
+                onChange={set("bore")}
+                onFocus={() => setActive("bore")}
+                error={errorFor(match.error, "bore")}
+                unit={unit}
+              />
+              <SizeField
+                id="od"
+                label="Outside diameter (D)"
+                value={sizes.od}
+                onChange={set("od")}
+                onFocus={() => setActive("od")}
+                error={errorFor(match.error, "od")}
+                unit={unit}
+              />
+              <SizeField
+                id="width"
+                label="Width (B)"
+                hint="Optional, but it tells series apart."
+                value={sizes.width}
+                onChange={set("width")}
+                onFocus={() => setActive("width")}
+                error={errorFor(match.error, "width")}
+                unit={unit}
+              />
+              <SizeField
+                id="tolerance"
+                label="Tolerance"
+                hint={`How far off a reading may be. Default ${unit === "in" ? "0.004 in" : "0.1 mm"}.`}
+                value={sizes.tolerance}
+                onChange={set("tolerance")}
+                onFocus={() => setActive(null)}
+                error={errorFor(match.error, "tolerance")}
+                unit={unit}
+              />
             </div>
           </div>
           <figure className="rounded-lg border border-rule bg-ground-raised p-3">
             <BearingDrawing active={active} />
-            <figcaption className="text-sm text-ink-soft">Measure each diameter at two or three places round it. A bearing that spun on its shaft reads large in the bore, one that spun in its housing reads small on the OD; the matching allows for that.</figcaption>
+            <figcaption className="text-sm text-ink-soft">
+              Measure each diameter at two or three places round it. A bearing that spun on its shaft reads large in the
+              bore, one that spun in its housing reads small on the OD; the matching allows for that.
+            </figcaption>
           </figure>
         </div>
         {otherError && (
@@ -121,19 +161,30 @@ export function BearingCalculator() {
         <div aria-live="polite" aria-busy={match.isLoading} className="space-y-3">
           {match.data && match.data.candidates[0] && (
             <OrderCard
-              title={match.data.candidates[0].score >= 0.7 ? "The bearing to ask for" : "The nearest standard bearing (a poor match: measure again)"}
+              title={
+                match.data.candidates[0].score >= 0.7
+                  ? "The bearing to ask for"
+                  : "The nearest standard bearing (a poor match: measure again)"
+              }
               label={match.data.candidates[0].designation}
               notes={[match.data.candidates[0].explanation, ...match.data.candidates[0].warnings]}
-              source={match.data.candidates[0].system === "inch" ? "ABMA inch radial ball bearing series (R sizes)" : "ISO 15:2017, boundary dimensions of deep groove ball bearings"}
+              source={
+                match.data.candidates[0].system === "inch"
+                  ? "ABMA inch radial ball bearing series (R sizes)"
+                  : "ISO 15:2017, boundary dimensions of deep groove ball bearings"
+              }
             >
               <ResultActions
                 kind="bearing"
                 designation={match.data.candidates[0].designation}
-                measurements={measuredValues([
-                  ["inner", settled.bore],
-                  ["outer", settled.od],
-                  ["width", settled.width],
-                ], unit)}
+                measurements={measuredValues(
+                  [
+                    ["inner", settled.bore],
+                    ["outer", settled.od],
+                    ["width", settled.width],
+                  ],
+                  unit,
+                )}
               />
             </OrderCard>
           )}
@@ -155,7 +206,11 @@ export function BearingCalculator() {
             />
           )}
           <CatalogueMatches parts={match.data?.catalogueParts} unit={unit} />
-          {!match.data && !match.error && <p className="text-ink-soft">Enter at least the bore and the outside diameter; the matching standard bearings appear here.</p>}
+          {!match.data && !match.error && (
+            <p className="text-ink-soft">
+              Enter at least the bore and the outside diameter; the matching standard bearings appear here.
+            </p>
+          )}
         </div>
       </section>
     </div>

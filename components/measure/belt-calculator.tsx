@@ -57,8 +57,12 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
   const settledSection = useDebounced(section);
   const settledDrive = useDebounced(drive);
 
-  const decoded = useCalculation<DecodedBelt>(calculationUrl("/api/belts/decode", { designation: settledDesignation }, ["designation"]));
-  const identified = useCalculation<{ candidates: SectionCandidate[] }>(calculationUrl("/api/belts/identify", { ...settledSection, unit }, ["top"]));
+  const decoded = useCalculation<DecodedBelt>(
+    calculationUrl("/api/belts/decode", { designation: settledDesignation }, ["designation"]),
+  );
+  const identified = useCalculation<{ candidates: SectionCandidate[] }>(
+    calculationUrl("/api/belts/identify", { ...settledSection, unit }, ["top"]),
+  );
   const driveParams = {
     large: settledDrive.large,
     small: settledDrive.small,
@@ -77,7 +81,15 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
         <h2 id="belt-number-heading" className="text-2xl">
           Read the number on the belt
         </h2>
-        <SizeField id="belt-designation" label="Belt number" hint="For example B60, A42, 4L380, 5V800, SPA1250, or a metric B 1600 Li." value={designation} onChange={setDesignation} error={errorFor(decoded.error, "designation")} placeholder="B60" />
+        <SizeField
+          id="belt-designation"
+          label="Belt number"
+          hint="For example B60, A42, 4L380, 5V800, SPA1250, or a metric B 1600 Li."
+          value={designation}
+          onChange={setDesignation}
+          error={errorFor(decoded.error, "designation")}
+          placeholder="B60"
+        />
         {decoded.data && !decoded.error && (
           <div className="space-y-3 rounded-lg border-2 border-ink/80 bg-ground-raised p-4" data-testid="belt-decoded">
             <p>
@@ -111,8 +123,25 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
               Which section is it?
             </h2>
             <div className="grid gap-4 sm:grid-cols-2">
-              <SizeField id="top" label="Top width" value={section.top} onChange={(v) => setSection((s) => ({ ...s, top: v }))} onFocus={() => setActive("top")} error={errorFor(identified.error, "top")} unit={unit} />
-              <SizeField id="height" label="Thickness" hint="Tells narrow belts from classical ones." value={section.height} onChange={(v) => setSection((s) => ({ ...s, height: v }))} onFocus={() => setActive("height")} error={errorFor(identified.error, "height")} unit={unit} />
+              <SizeField
+                id="top"
+                label="Top width"
+                value={section.top}
+                onChange={(v) => setSection((s) => ({ ...s, top: v }))}
+                onFocus={() => setActive("top")}
+                error={errorFor(identified.error, "top")}
+                unit={unit}
+              />
+              <SizeField
+                id="height"
+                label="Thickness"
+                hint="Tells narrow belts from classical ones."
+                value={section.height}
+                onChange={(v) => setSection((s) => ({ ...s, height: v }))}
+                onFocus={() => setActive("height")}
+                error={errorFor(identified.error, "height")}
+                unit={unit}
+              />
             </div>
             {identified.data && (
               <CandidatesTable
@@ -136,36 +165,88 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
               Work out the drive
             </h2>
             <div className="grid gap-4 sm:grid-cols-2">
-              <SizeField id="large" label="Large pulley, pitch diameter" value={drive.large} onChange={setD("large")} onFocus={() => setActive("large")} error={errorFor(solved.error, "large")} unit={unit} />
-              <SizeField id="small" label="Small pulley, pitch diameter" value={drive.small} onChange={setD("small")} onFocus={() => setActive("small")} error={errorFor(solved.error, "small")} unit={unit} />
+              <SizeField
+                id="large"
+                label="Large pulley, pitch diameter"
+                value={drive.large}
+                onChange={setD("large")}
+                onFocus={() => setActive("large")}
+                error={errorFor(solved.error, "large")}
+                unit={unit}
+              />
+              <SizeField
+                id="small"
+                label="Small pulley, pitch diameter"
+                value={drive.small}
+                onChange={setD("small")}
+                onFocus={() => setActive("small")}
+                error={errorFor(solved.error, "small")}
+                unit={unit}
+              />
             </div>
             <fieldset className="flex flex-wrap gap-4">
               <legend className="mb-1 font-bold">I know</legend>
               {(["center", "length"] as const).map((k) => (
                 <label key={k} className="flex min-h-12 items-center gap-2">
-                  <input type="radio" name="know" checked={know === k} onChange={() => setKnow(k)} className="h-5 w-5 accent-brass" />
+                  <input
+                    type="radio"
+                    name="know"
+                    checked={know === k}
+                    onChange={() => setKnow(k)}
+                    className="h-5 w-5 accent-brass"
+                  />
                   {k === "center" ? "the centre distance" : "the belt's pitch length"}
                 </label>
               ))}
             </fieldset>
             <div className="grid gap-4 sm:grid-cols-2">
               {know === "center" ? (
-                <SizeField id="center" label="Centre distance" value={drive.center} onChange={setD("center")} onFocus={() => setActive("center")} error={errorFor(solved.error, "center")} unit={unit} />
+                <SizeField
+                  id="center"
+                  label="Centre distance"
+                  value={drive.center}
+                  onChange={setD("center")}
+                  onFocus={() => setActive("center")}
+                  error={errorFor(solved.error, "center")}
+                  unit={unit}
+                />
               ) : (
-                <SizeField id="length" label="Belt pitch length" value={drive.length} onChange={setD("length")} onFocus={() => setActive(null)} error={errorFor(solved.error, "length")} unit={unit} />
+                <SizeField
+                  id="length"
+                  label="Belt pitch length"
+                  value={drive.length}
+                  onChange={setD("length")}
+                  onFocus={() => setActive(null)}
+                  error={errorFor(solved.error, "length")}
+                  unit={unit}
+                />
               )}
               <div className="space-y-1">
                 <label htmlFor="drive-section" className="block font-bold">
                   Belt section (for standard lengths)
                 </label>
-                <select id="drive-section" value={drive.section} onChange={(e) => setD("section")(e.target.value)} className="min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg">
+                <select
+                  id="drive-section"
+                  value={drive.section}
+                  onChange={(e) => setD("section")(e.target.value)}
+                  className="min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg"
+                >
                   <option value="">Any</option>
                   {SECTIONS.map((s) => (
                     <option key={s}>{s}</option>
                   ))}
                 </select>
               </div>
-              <SizeField id="smallMax" label="Adjustable small pulley: largest pitch diameter" hint="For a split-flange pulley; leave empty otherwise." value={drive.smallMax} onChange={setD("smallMax")} onFocus={() => setActive("small")} error={errorFor(solved.error, "smallMax")} unit={unit} />
+              <SizeField
+                id="smallMax"
+                label="Adjustable small pulley: largest pitch diameter"
+                hint="For a split-flange pulley; leave empty otherwise."
+                value={drive.smallMax}
+                onChange={setD("smallMax")}
+                onFocus={() => setActive("small")}
+                error={errorFor(solved.error, "smallMax")}
+                unit={unit}
+              />
             </div>
             {driveOther && (
               <Notice tone="caution" role="alert">
@@ -182,13 +263,19 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
                   <Figure label="Wrap on small pulley" value={solved.data.wrapAngleSmallDeg} unit="°" />
                   <Figure label="Speed ratio" value={solved.data.ratio} unit=": 1" />
                 </dl>
-                <p className="text-sm text-ink-soft">Deflection: press the middle of the span; 1/64 in per inch of span is the usual shop rule, not a maker&apos;s figure.</p>
+                <p className="text-sm text-ink-soft">
+                  Deflection: press the middle of the span; 1/64 in per inch of span is the usual shop rule, not a
+                  maker&apos;s figure.
+                </p>
                 {solved.data.standardLengths && solved.data.standardLengths.length > 0 && (
                   <div className="space-y-2 rounded-md border border-rule bg-ground-raised p-3">
                     <p>
                       Nearest standard belts:{" "}
                       {solved.data.standardLengths.map((l) => (
-                        <span key={l.designation} className={`num mr-3 ${l.nearest ? "font-bold underline decoration-brass decoration-2" : ""}`}>
+                        <span
+                          key={l.designation}
+                          className={`mr-3 num ${l.nearest ? "font-bold underline decoration-brass decoration-2" : ""}`}
+                        >
                           {l.designation}
                           {l.nearest && <span className="font-sans text-sm font-normal no-underline"> (nearest)</span>}
                         </span>
@@ -196,14 +283,18 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
                     </p>
                     <ResultActions
                       kind="v_belt"
-                      designation={(solved.data.standardLengths.find((l) => l.nearest) ?? solved.data.standardLengths[0]).designation}
+                      designation={
+                        (solved.data.standardLengths.find((l) => l.nearest) ?? solved.data.standardLengths[0])
+                          .designation
+                      }
                       measurements={measuredValues([["length", settledDrive.length]], unit)}
                     />
                   </div>
                 )}
                 {solved.data.adjustableRange && (
                   <p>
-                    The adjustable pulley takes belts from <span className="num font-bold">{solved.data.adjustableRange.shortest}</span> to{" "}
+                    The adjustable pulley takes belts from{" "}
+                    <span className="num font-bold">{solved.data.adjustableRange.shortest}</span> to{" "}
                     <span className="num font-bold">{solved.data.adjustableRange.longest}</span> {unit} pitch length.
                   </p>
                 )}
@@ -216,7 +307,9 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
         <div className="space-y-4 self-start md:sticky md:top-4">
           <figure className="rounded-lg border border-rule bg-ground-raised p-3">
             <BeltDrawing active={active} />
-            <figcaption className="text-sm text-ink-soft">Pitch diameters are measured where the belt&apos;s pitch line runs, a little inside the pulley rim.</figcaption>
+            <figcaption className="text-sm text-ink-soft">
+              Pitch diameters are measured where the belt&apos;s pitch line runs, a little inside the pulley rim.
+            </figcaption>
           </figure>
           <section aria-labelledby="measuring-heading" className="rounded-lg border border-rule bg-ground-sunk p-4">
             <h2 id="measuring-heading" className="mb-2 text-lg">

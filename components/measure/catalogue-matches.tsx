@@ -7,7 +7,10 @@ export function CatalogueMatches({ parts, unit }: { parts: SizedPart[] | undefin
   if (!parts || parts.length === 0) return null;
   const show = (mm: number) => showLength(fromMm(mm, unit), unit);
   return (
-    <section aria-labelledby="catalogue-matches-heading" className="space-y-2 rounded-lg border border-rule bg-ground-sunk p-4">
+    <section
+      aria-labelledby="catalogue-matches-heading"
+      className="space-y-2 rounded-lg border border-rule bg-ground-sunk p-4"
+    >
       <h3 id="catalogue-matches-heading" className="text-lg">
         Factory parts of this size in the catalogue
       </h3>
@@ -20,7 +23,7 @@ export function CatalogueMatches({ parts, unit }: { parts: SizedPart[] | undefin
             <span className="block text-sm text-ink-soft">
               {p.maker} · {p.description}
             </span>
-            <span className="num block text-sm">
+            <span className="block num text-sm">
               {show(p.innerMm)} × {show(p.outerMm)}
             </span>
           </li>

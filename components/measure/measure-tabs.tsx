@@ -20,7 +20,9 @@ export function MeasureTabs() {
             key={tab.href}
             href={tab.href}
             aria-current={current ? "page" : undefined}
-            className={`min-h-12 rounded-md border-2 px-4 py-2 text-lg font-bold no-underline ${current ? "border-ink bg-ink text-ground" : "border-ink/70 bg-ground-raised text-ink hover:bg-ground-sunk"}`}
+            className={`min-h-12 rounded-md border-2 px-4 py-2 text-lg font-bold no-underline ${
+              current ? "border-ink bg-ink text-ground" : "border-ink/70 bg-ground-raised text-ink hover:bg-ground-sunk"
+            }`}
           >
             {tab.label}
           </Link>

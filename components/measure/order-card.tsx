@@ -6,7 +6,21 @@ import { useState, type ReactNode } from "react";
  * The answer to take to the parts counter, first and big: what to ask for, in the system the part was made to, with a
  * button that copies it for a message or an order form.
  */
-export function OrderCard({ title, label, details, notes, source, children }: { title: string; label: string; details?: ReactNode; notes: string[]; source?: string; children?: ReactNode }) {
+export function OrderCard({
+  title,
+  label,
+  details,
+  notes,
+  source,
+  children,
+}: {
+  title: string;
+  label: string;
+  details?: ReactNode;
+  notes: string[];
+  source?: string;
+  children?: ReactNode;
+}) {
   const [copied, setCopied] = useState(false);
   const copy = async () => {
     try {
@@ -18,7 +32,11 @@ export function OrderCard({ title, label, details, notes, source, children }: { 
     }
   };
   return (
-    <section aria-labelledby="order-heading" className="space-y-3 rounded-lg border-2 border-ink/80 bg-ground-raised p-4" data-testid="order">
+    <section
+      aria-labelledby="order-heading"
+      className="space-y-3 rounded-lg border-2 border-ink/80 bg-ground-raised p-4"
+      data-testid="order"
+    >
       <h2 id="order-heading" className="text-lg">
         {title}
       </h2>
@@ -26,7 +44,11 @@ export function OrderCard({ title, label, details, notes, source, children }: { 
         <p className="num text-3xl font-bold break-words sm:text-4xl" data-testid="order-label">
           {label}
         </p>
-        <button type="button" onClick={() => void copy()} className="min-h-11 rounded-md border-2 border-ink/80 px-3 text-sm font-bold hover:bg-ground-sunk">
+        <button
+          type="button"
+          onClick={() => void copy()}
+          className="min-h-11 rounded-md border-2 border-ink/80 px-3 text-sm font-bold hover:bg-ground-sunk"
+        >
           {copied ? "Copied" : "Copy"}
         </button>
         <span className="sr-only" role="status">

@@ -9,7 +9,17 @@ import type { MeasuredKind } from "@/lib/lists/standard-item";
  * From a calculator's answer to the job: put the standard part on a job list by its designation and sizes, or
  * propose it as the cross for a factory part, with the form filled in.
  */
-export function ResultActions({ kind, designation, note, measurements }: { kind: MeasuredKind; designation: string; note?: string; measurements: ProposalPrefill["measurements"] }) {
+export function ResultActions({
+  kind,
+  designation,
+  note,
+  measurements,
+}: {
+  kind: MeasuredKind;
+  designation: string;
+  note?: string;
+  measurements: ProposalPrefill["measurements"];
+}) {
   return (
     <div className="flex flex-wrap items-start gap-x-6 gap-y-3 border-t border-rule pt-3" data-testid="result-actions">
       <AddToList item={{ standard: { kind, designation, note } }} number={designation} />

@@ -44,9 +44,18 @@ export function SealCalculator() {
   const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
 
   const match = useCalculation<SealMatch>(
-    calculationUrl("/api/seals/match", { shaft: settled.shaft, bore: settled.bore, width: settled.width, unit, grooved, spring, dustLip, outside }, ["shaft", "bore"]),
+    calculationUrl(
+      "/api/seals/match",
+      { shaft: settled.shaft, bore: settled.bore, width: settled.width, unit, grooved, spring, dustLip, outside },
+      ["shaft", "bore"],
+    ),
   );
-  const fit = useCalculation<PressFit>(calculationUrl("/api/seals/press-fit", { bore: settled.bore, sealOd: settled.sealOd, unit, outside }, ["bore", "sealOd"]));
+  const fit = useCalculation<PressFit>(
+    calculationUrl("/api/seals/press-fit", { bore: settled.bore, sealOd: settled.sealOd, unit, outside }, [
+      "bore",
+      "sealOd",
+    ]),
+  );
   const otherError = unplacedError(match.error, ["shaft", "bore", "width"]);
 
   return (
@@ -55,18 +64,54 @@ export function SealCalculator() {
         <div className="space-y-4">
           <UnitSwitch unit={unit} onChange={changeUnit} />
           <div className="grid gap-4 sm:grid-cols-3">
-            <SizeField id="shaft" label="Shaft" hint="Measure the shaft, not the old lip." value={sizes.shaft} onChange={set("shaft")} onFocus={() => setActive("shaft")} error={errorFor(match.error, "shaft")} unit={unit} />
-            <SizeField id="bore" label="Housing bore" value={sizes.bore} onChange={set("bore")} onFocus={() => setActive("bore")} error={errorFor(match.error, "bore") ?? errorFor(fit.error, "bore")} unit={unit} />
-            <SizeField id="width" label="Width" hint="Optional." value={sizes.width} onChange={set("width")} onFocus={() => setActive("width")} error={errorFor(match.error, "width")} unit={unit} />
+            <SizeField
+              id="shaft"
+              label="Shaft"
+              hint="Measure the shaft, not the old lip."
+              value={sizes.shaft}
+              onChange={set("shaft")}
+              onFocus={() => setActive("shaft")}
+              error={errorFor(match.error, "shaft")}
+              unit={unit}
+            />
+            <SizeField
+              id="bore"
+              label="Housing bore"
+              value={sizes.bore}
+              onChange={set("bore")}
+              onFocus={() => setActive("bore")}
+              error={errorFor(match.error, "bore") ?? errorFor(fit.error, "bore")}
+              unit={unit}
+            />
+            <SizeField
+              id="width"
+              label="Width"
+              hint="Optional."
+              value={sizes.width}
+              onChange={set("width")}
+              onFocus={() => setActive("width")}
+              error={errorFor(match.error, "width")}
+              unit={unit}
+            />
           </div>
           <fieldset className="grid gap-4 rounded-lg border border-rule p-4 sm:grid-cols-2">
             <legend className="px-1 font-bold">What the old seal was like</legend>
             <label className="flex min-h-12 items-center gap-3">
-              <input type="checkbox" checked={grooved} onChange={(e) => setGrooved(e.target.checked)} className="h-6 w-6 accent-brass" />
+              <input
+                type="checkbox"
+                checked={grooved}
+                onChange={(e) => setGrooved(e.target.checked)}
+                className="h-6 w-6 accent-brass"
+              />
               The old lip has worn a groove in the shaft
             </label>
             <label className="flex min-h-12 items-center gap-3">
-              <input type="checkbox" checked={dustLip} onChange={(e) => setDustLip(e.target.checked)} className="h-6 w-6 accent-brass" />
+              <input
+                type="checkbox"
+                checked={dustLip}
+                onChange={(e) => setDustLip(e.target.checked)}
+                className="h-6 w-6 accent-brass"
+              />
               It had a second, dust lip
             </label>
             <div className="space-y-1">
@@ -82,7 +127,12 @@ export function SealCalculator() {
               <label htmlFor="seal-outside" className="block font-bold">
                 Outside
               </label>
-              <select id="seal-outside" value={outside} onChange={(e) => setOutside(e.target.value as "metal" | "rubber")} className={selectClass}>
+              <select
+                id="seal-outside"
+                value={outside}
+                onChange={(e) => setOutside(e.target.value as "metal" | "rubber")}
+                className={selectClass}
+              >
                 <option value="metal">Bare metal case</option>
                 <option value="rubber">Rubber-covered</option>
               </select>
@@ -91,7 +141,9 @@ export function SealCalculator() {
         </div>
         <figure className="rounded-lg border border-rule bg-ground-raised p-3">
           <SealDrawing active={active} />
-          <figcaption className="text-sm text-ink-soft">The spring side of the lip faces the oil. Measure the shaft where the new lip will run.</figcaption>
+          <figcaption className="text-sm text-ink-soft">
+            The spring side of the lip faces the oil. Measure the shaft where the new lip will run.
+          </figcaption>
         </figure>
       </div>
 
@@ -109,7 +161,8 @@ export function SealCalculator() {
               <dl className="grid gap-x-4 gap-y-1 sm:grid-cols-[14rem_1fr]">
                 <dt className="font-bold">New seal&apos;s outside diameter</dt>
                 <dd className="num">
-                  {showLength(match.data.order.sealOd.min, match.data.order.unit)} to {showLength(match.data.order.sealOd.max, match.data.order.unit)}
+                  {showLength(match.data.order.sealOd.min, match.data.order.unit)} to{" "}
+                  {showLength(match.data.order.sealOd.max, match.data.order.unit)}
                 </dd>
                 <dt className="font-bold">Ask for</dt>
                 <dd>{match.data.order.askFor}</dd>
@@ -121,12 +174,20 @@ export function SealCalculator() {
             <ResultActions
               kind="lip_seal"
               designation={match.data.order.label}
-              note={`seal OD ${showLength(match.data.order.sealOd.min, match.data.order.unit)} to ${showLength(match.data.order.sealOd.max, match.data.order.unit)}; ${match.data.order.askFor}`}
-              measurements={measuredValues([
-                ["inner", settled.shaft],
-                ["outer", settled.bore],
-                ["width", settled.width],
-              ], unit)}
+              note={
+                `seal OD ` +
+                `${showLength(match.data.order.sealOd.min, match.data.order.unit)} to ` +
+                `${showLength(match.data.order.sealOd.max, match.data.order.unit)}; ` +
+                `${match.data.order.askFor}`
+              }
+              measurements={measuredValues(
+                [
+                  ["inner", settled.shaft],
+                  ["outer", settled.bore],
+                  ["width", settled.width],
+                ],
+                unit,
+              )}
             />
           </OrderCard>
         )}
@@ -159,21 +220,37 @@ export function SealCalculator() {
           />
         )}
         <CatalogueMatches parts={match.data?.catalogueParts} unit={unit} />
-        {!match.data && !match.error && <p className="text-ink-soft">Enter the shaft and the housing bore; the matching standard seals appear here.</p>}
+        {!match.data && !match.error && (
+          <p className="text-ink-soft">
+            Enter the shaft and the housing bore; the matching standard seals appear here.
+          </p>
+        )}
       </section>
 
       <section aria-labelledby="fit-heading" className="space-y-3 rounded-lg border border-rule bg-ground-sunk p-4">
         <h2 id="fit-heading" className="text-xl">
           Will it stay in the housing?
         </h2>
-        <p className="text-ink-soft">Give the new seal&apos;s outside diameter to check its press fit in the bore above.</p>
+        <p className="text-ink-soft">
+          Give the new seal&apos;s outside diameter to check its press fit in the bore above.
+        </p>
         <div className="max-w-xs">
-          <SizeField id="sealOd" label="Seal outside diameter" value={sizes.sealOd} onChange={set("sealOd")} onFocus={() => setActive("sealOd")} error={errorFor(fit.error, "sealOd")} unit={unit} />
+          <SizeField
+            id="sealOd"
+            label="Seal outside diameter"
+            value={sizes.sealOd}
+            onChange={set("sealOd")}
+            onFocus={() => setActive("sealOd")}
+            error={errorFor(fit.error, "sealOd")}
+            unit={unit}
+          />
         </div>
         {fit.data && (
           <div aria-live="polite">
             <Notice tone={fit.data.verdict === "ok" ? "success" : "caution"}>
-              <strong className="mr-1 uppercase">{fit.data.verdict === "ok" ? "Fit OK" : fit.data.verdict === "loose" ? "Loose" : "Tight"}.</strong>
+              <strong className="mr-1 uppercase">
+                {fit.data.verdict === "ok" ? "Fit OK" : fit.data.verdict === "loose" ? "Loose" : "Tight"}.
+              </strong>
               {fit.data.message}
               <span className="mt-1 block text-sm text-ink-soft">Source: {fit.data.source}.</span>
             </Notice>

@@ -2,7 +2,19 @@ import { ArrowDefs, DimensionLine } from "@/components/measure/dimension-line";
 
 export type SealDimension = "shaft" | "bore" | "width" | "sealOd" | null;
 
-function Label({ x, y, text, active, anchor = "start" }: { x: number; y: number; text: string; active: boolean; anchor?: "start" | "end" | "middle" }) {
+function Label({
+  x,
+  y,
+  text,
+  active,
+  anchor = "start",
+}: {
+  x: number;
+  y: number;
+  text: string;
+  active: boolean;
+  anchor?: "start" | "end" | "middle";
+}) {
   return (
     <text
       x={x}
@@ -26,15 +38,27 @@ export function SealDrawing({ active }: { active: SealDimension }) {
   const ink = "#23262b";
   return (
     <svg viewBox="0 0 360 320" role="img" aria-labelledby="seal-drawing-title" className="h-auto w-full max-w-sm">
-      <title id="seal-drawing-title">Cross-section of a lip seal in its housing on the shaft: shaft diameter, housing bore and seal width</title>
+      <title id="seal-drawing-title">
+        Cross-section of a lip seal in its housing on the shaft: shaft diameter, housing bore and seal width
+      </title>
       <ArrowDefs />
       {/* housing, above and below the shaft */}
       <path d="M 80 40 H 280 V 80 H 80 Z" fill="url(#hatch)" stroke={ink} strokeWidth={2} />
       <path d="M 80 260 H 280 V 300 H 80 Z" fill="url(#hatch)" stroke={ink} strokeWidth={2} />
       {/* seal: case against the bore, lip on the shaft with its spring */}
-      <path d="M 150 80 H 210 V 92 H 160 V 108 L 192 126 L 186 130 L 152 112 V 80 Z" fill="#d9d1c3" stroke={ink} strokeWidth={2} />
+      <path
+        d="M 150 80 H 210 V 92 H 160 V 108 L 192 126 L 186 130 L 152 112 V 80 Z"
+        fill="#d9d1c3"
+        stroke={ink}
+        strokeWidth={2}
+      />
       <circle cx={174} cy={112} r={4.5} fill="none" stroke={ink} strokeWidth={1.8} />
-      <path d="M 150 260 H 210 V 248 H 160 V 232 L 192 214 L 186 210 L 152 228 V 260 Z" fill="#d9d1c3" stroke={ink} strokeWidth={2} />
+      <path
+        d="M 150 260 H 210 V 248 H 160 V 232 L 192 214 L 186 210 L 152 228 V 260 Z"
+        fill="#d9d1c3"
+        stroke={ink}
+        strokeWidth={2}
+      />
       <circle cx={174} cy={228} r={4.5} fill="none" stroke={ink} strokeWidth={1.8} />
       {/* shaft and axis */}
       <rect x={60} y={130} width={270} height={80} fill="#ece6da" stroke={ink} strokeWidth={2} />

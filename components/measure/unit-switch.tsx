@@ -12,8 +12,21 @@ export function UnitSwitch({ unit, onChange }: { unit: LengthUnit; onChange: (un
       </span>
       <div className="inline-flex overflow-hidden rounded-md border-2 border-ink/80">
         {(["in", "mm"] as const).map((u) => (
-          <label key={u} className={`cursor-pointer px-5 py-2 text-lg font-bold ${unit === u ? "bg-ink text-ground" : "bg-ground-raised text-ink hover:bg-ground-sunk"}`}>
-            <input type="radio" name="unit" value={u} checked={unit === u} onChange={() => onChange(u)} className="sr-only" />
+          <label
+            key={u}
+            className={
+              `cursor-pointer px-5 py-2 text-lg font-bold ` +
+              `${unit === u ? "bg-ink text-ground" : "bg-ground-raised text-ink hover:bg-ground-sunk"}`
+            }
+          >
+            <input
+              type="radio"
+              name="unit"
+              value={u}
+              checked={unit === u}
+              onChange={() => onChange(u)}
+              className="sr-only"
+            />
             {u === "in" ? "inch" : "mm"}
           </label>
         ))}

@@ -20,7 +20,12 @@ export function ConfirmButton({ crossId, signedIn }: { crossId: number; signedIn
       </p>
     );
   }
-  if (state?.tone === "done") return <p className="text-sm font-bold" role="status">✓ {state.text}</p>;
+  if (state?.tone === "done")
+    return (
+      <p className="text-sm font-bold" role="status">
+        ✓ {state.text}
+      </p>
+    );
   if (!open) {
     return (
       <button type="button" className="text-sm font-bold underline" onClick={() => setOpen(true)}>
@@ -54,14 +59,22 @@ export function ConfirmButton({ crossId, signedIn }: { crossId: number; signedIn
         className="min-h-11 w-full rounded-md border-2 border-rule-strong bg-ground px-3"
       />
       <div className="flex gap-3">
-        <button type="submit" disabled={busy} className="rounded-md bg-brass px-4 py-2 text-sm font-bold text-white disabled:opacity-60">
+        <button
+          type="submit"
+          disabled={busy}
+          className="rounded-md bg-brass px-4 py-2 text-sm font-bold text-white disabled:opacity-60"
+        >
           Confirm
         </button>
         <button type="button" className="text-sm underline" onClick={() => setOpen(false)}>
           Cancel
         </button>
       </div>
-      {state?.tone === "problem" && <p className="text-sm font-bold text-caution" role="alert">{state.text}</p>}
+      {state?.tone === "problem" && (
+        <p className="text-sm font-bold text-caution" role="alert">
+          {state.text}
+        </p>
+      )}
     </form>
   );
 }

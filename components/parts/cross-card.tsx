@@ -12,8 +12,11 @@ const sizes = (s: NonNullable<CrossView["standard"]>) =>
 
 /** "3 members fitted this" / "size match only: not yet fitted by anyone". */
 function sureness(cross: CrossView): string {
-  if (cross.confirmations > 0) return `${cross.confirmations} ${cross.confirmations === 1 ? "member" : "members"} fitted this`;
-  return cross.fit === "dimensions_only" ? "Size match only: not yet fitted by anyone" : "Not yet confirmed by a member";
+  if (cross.confirmations > 0)
+    return `${cross.confirmations} ${cross.confirmations === 1 ? "member" : "members"} fitted this`;
+  return cross.fit === "dimensions_only"
+    ? "Size match only: not yet fitted by anyone"
+    : "Not yet confirmed by a member";
 }
 
 export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signedIn?: boolean }) {
@@ -26,7 +29,8 @@ export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signe
       {cross.standard && <p className="num text-2xl font-bold">{cross.standard.designation}</p>}
       {cross.viaNumber && (
         <p className="text-sm text-ink-soft" data-testid="via">
-          Recorded on <span className="num font-bold">{cross.viaNumber}</span>, a number of the same chain that fits here.
+          Recorded on <span className="num font-bold">{cross.viaNumber}</span>, a number of the same chain that fits
+          here.
         </p>
       )}
       {cross.standard && sizes(cross.standard).length > 0 && (
@@ -37,14 +41,18 @@ export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signe
         </p>
       )}
       {cross.repairMethod && <p className={cross.standard ? "text-ink-soft" : "text-lg"}>{cross.repairMethod}</p>}
-      {cross.notes && <p className="whitespace-pre-line border-l-2 border-brass pl-2 text-sm">{cross.notes}</p>}
+      {cross.notes && <p className="border-l-2 border-brass pl-2 text-sm whitespace-pre-line">{cross.notes}</p>}
       {cross.photos.length > 0 && (
         <ul className="flex flex-wrap gap-2" aria-label="Photos from the member who fitted it">
           {cross.photos.map((id) => (
             <li key={id}>
               <a href={`/api/photos/${id}`} target="_blank" rel="noreferrer">
                 {/* eslint-disable-next-line @next/next/no-img-element -- photos come from the app's own route */}
-                <img src={`/api/photos/${id}`} alt="Photo of the fitted part" className="h-20 w-20 rounded border border-rule object-cover" />
+                <img
+                  src={`/api/photos/${id}`}
+                  alt="Photo of the fitted part"
+                  className="h-20 w-20 rounded border border-rule object-cover"
+                />
               </a>
             </li>
           ))}

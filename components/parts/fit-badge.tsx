@@ -4,7 +4,10 @@ import { FIT_NAMES, type Fit } from "@/lib/catalogue/kinds";
 export function FitBadge({ fit }: { fit: Fit }) {
   const f = FIT_NAMES[fit];
   return (
-    <span className="inline-flex items-center gap-1 rounded-full border-2 border-ink/70 px-2.5 py-0.5 text-sm font-bold" title={f.text}>
+    <span
+      className="inline-flex items-center gap-1 rounded-full border-2 border-ink/70 px-2.5 py-0.5 text-sm font-bold"
+      title={f.text}
+    >
       <span aria-hidden="true" className="text-brass">
         {f.mark}
       </span>

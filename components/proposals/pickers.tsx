@@ -28,7 +28,10 @@ export interface PickedStandard {
 
 function Picked({ title, detail, onClear }: { title: string; detail: string; onClear: () => void }) {
   return (
-    <div className="flex flex-wrap items-center justify-between gap-3 rounded-md border-2 border-brass bg-brass-wash p-3" data-testid="picked">
+    <div
+      className="flex flex-wrap items-center justify-between gap-3 rounded-md border-2 border-brass bg-brass-wash p-3"
+      data-testid="picked"
+    >
       <div>
         <p className="num text-xl font-bold">{title}</p>
         <p className="text-sm">{detail}</p>
@@ -40,7 +43,21 @@ function Picked({ title, detail, onClear }: { title: string; detail: string; onC
   );
 }
 
-function SearchBox({ id, label, hint, value, onChange, error }: { id: string; label: string; hint: string; value: string; onChange: (v: string) => void; error?: string }) {
+function SearchBox({
+  id,
+  label,
+  hint,
+  value,
+  onChange,
+  error,
+}: {
+  id: string;
+  label: string;
+  hint: string;
+  value: string;
+  onChange: (v: string) => void;
+  error?: string;
+}) {
   return (
     <div className="space-y-1">
       <label htmlFor={id} className="block font-bold">
@@ -57,7 +74,11 @@ function SearchBox({ id, label, hint, value, onChange, error }: { id: string; la
         onChange={(e) => onChange(e.target.value)}
         autoComplete="off"
         aria-invalid={error ? true : undefined}
-        className={`num block min-h-12 w-full rounded-md border-2 bg-ground-raised px-3 py-2 text-lg ${error ? "border-caution" : "border-rule-strong focus:border-brass"}`}
+        className={
+          `block min-h-12 w-full rounded-md border-2 bg-ground-raised px-3 py-2 ` +
+          `num text-lg ` +
+          `${error ? "border-caution" : "border-rule-strong focus:border-brass"}`
+        }
       />
       {error && <FieldError id={`${id}-error`}>{error}</FieldError>}
     </div>
@@ -65,24 +86,48 @@ function SearchBox({ id, label, hint, value, onChange, error }: { id: string; la
 }
 
 /** Finds the worn part by its factory number, the same way the look-up does. */
-export function PartPicker({ picked, onPick, error }: { picked: PickedPart | null; onPick: (p: PickedPart | null) => void; error?: string }) {
+export function PartPicker({
+  picked,
+  onPick,
+  error,
+}: {
+  picked: PickedPart | null;
+  onPick: (p: PickedPart | null) => void;
+  error?: string;
+}) {
   const [query, setQuery] = useState("");
   const { results, isLoading } = useLookup(query, 6);
   const id = useId();
-  if (picked) return <Picked title={picked.number} detail={`${picked.maker} · ${picked.description}`} onClear={() => onPick(null)} />;
+  if (picked)
+    return (
+      <Picked title={picked.number} detail={`${picked.maker} · ${picked.description}`} onClear={() => onPick(null)} />
+    );
   return (
     <div className="space-y-2">
-      <SearchBox id={id} label="Factory number" hint="As stamped or as in the parts book; spaces, dashes and worn characters are fine." value={query} onChange={setQuery} error={error} />
+      <SearchBox
+        id={id}
+        label="Factory number"
+        hint="As stamped or as in the parts book; spaces, dashes and worn characters are fine."
+        value={query}
+        onChange={setQuery}
+        error={error}
+      />
       {query.trim() && (
         <ul className="divide-y divide-rule rounded-md border border-rule bg-ground-raised" aria-label="Parts found">
           {isLoading && results.length === 0 && <li className="p-3 text-ink-soft">Looking…</li>}
-          {!isLoading && results.length === 0 && <li className="p-3 text-ink-soft">No part with a number like that. Choose “not in the catalogue yet” above.</li>}
+          {!isLoading && results.length === 0 && (
+            <li className="p-3 text-ink-soft">
+              No part with a number like that. Choose “not in the catalogue yet” above.
+            </li>
+          )}
           {results.map((r) => (
             <li key={r.id}>
               <button
                 type="button"
                 className="flex w-full flex-wrap items-baseline gap-x-3 p-3 text-left hover:bg-ground-sunk"
-                onClick={() => onPick({ id: r.id, number: r.number, maker: r.maker, description: r.description, dims: r.sizes })}
+                onClick={() =>
+                  onPick({ id: r.id, number: r.number, maker: r.maker, description: r.description, dims: r.sizes })
+                }
               >
                 <span className="num text-lg font-bold">{r.number}</span>
                 <span>{r.description}</span>
@@ -99,24 +144,60 @@ export function PartPicker({ picked, onPick, error }: { picked: PickedPart | nul
 }
 
 /** Finds a standard part already in the catalogue by its designation. */
-export function StandardPicker({ picked, onPick, kind, error }: { picked: PickedStandard | null; onPick: (p: PickedStandard | null) => void; kind?: StandardKind; error?: string }) {
+export function StandardPicker({
+  picked,
+  onPick,
+  kind,
+  error,
+}: {
+  picked: PickedStandard | null;
+  onPick: (p: PickedStandard | null) => void;
+  kind?: StandardKind;
+  error?: string;
+}) {
   const [query, setQuery] = useState("");
   const settled = useDebounced(query.trim(), 250);
-  const path = settled ? `/api/standard-parts?${new URLSearchParams({ q: settled, limit: "8", ...(kind ? { kind } : {}) })}` : null;
+  const path = settled
+    ? `/api/standard-parts?${new URLSearchParams({ q: settled, limit: "8", ...(kind ? { kind } : {}) })}`
+    : null;
   const { data, isLoading } = useCalculation<{ results: StandardPartHit[] }>(path);
   const id = useId();
   if (picked) return <Picked title={picked.designation} detail={picked.sizes} onClear={() => onPick(null)} />;
   const results = data?.results ?? [];
   return (
     <div className="space-y-2">
-      <SearchBox id={id} label="Designation" hint="For example 6205-2RS, 32 × 47 or B43." value={query} onChange={setQuery} error={error} />
+      <SearchBox
+        id={id}
+        label="Designation"
+        hint="For example 6205-2RS, 32 × 47 or B43."
+        value={query}
+        onChange={setQuery}
+        error={error}
+      />
       {settled && (
-        <ul className="divide-y divide-rule rounded-md border border-rule bg-ground-raised" aria-label="Standard parts found">
+        <ul
+          className="divide-y divide-rule rounded-md border border-rule bg-ground-raised"
+          aria-label="Standard parts found"
+        >
           {isLoading && <li className="p-3 text-ink-soft">Looking…</li>}
-          {!isLoading && results.length === 0 && <li className="p-3 text-ink-soft">Not in the catalogue. Choose “enter it by designation” above.</li>}
+          {!isLoading && results.length === 0 && (
+            <li className="p-3 text-ink-soft">Not in the catalogue. Choose “enter it by designation” above.</li>
+          )}
           {results.map((r) => (
             <li key={r.id}>
-              <button type="button" className="flex w-full flex-wrap items-baseline gap-x-3 p-3 text-left hover:bg-ground-sunk" onClick={() => onPick({ id: r.id, designation: r.designation, sizes: standardSizes(r), kind: r.kind, dims: { innerMm: r.innerMm, outerMm: r.outerMm, widthMm: r.widthMm, lengthMm: r.lengthMm } })}>
+              <button
+                type="button"
+                className="flex w-full flex-wrap items-baseline gap-x-3 p-3 text-left hover:bg-ground-sunk"
+                onClick={() =>
+                  onPick({
+                    id: r.id,
+                    designation: r.designation,
+                    sizes: standardSizes(r),
+                    kind: r.kind,
+                    dims: { innerMm: r.innerMm, outerMm: r.outerMm, widthMm: r.widthMm, lengthMm: r.lengthMm },
+                  })
+                }
+              >
                 <span className="num text-lg font-bold">{r.designation}</span>
                 <span className="text-sm text-ink-soft">{standardSizes(r)}</span>
               </button>

@@ -15,7 +15,10 @@ function deviationWord(d: number): string {
   return "does not match";
 }
 
-/** A proposal as sent: the parts, fit, notes, the engine's checks, the measurements against the standard part, the photos. */
+/**
+ * A proposal as sent: the parts, fit, notes, the engine's checks, the measurements against the standard part, the
+ * photos.
+ */
 export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
   return (
     <section aria-labelledby="proposal-heading" className="space-y-4">
@@ -29,7 +32,10 @@ export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
             <span className="num font-bold">{d.part.number}</span> · {d.part.maker} · {CATEGORY_NAMES[d.part.category]}
             <span className="block">{d.part.description}</span>
             {d.part.isNew ? (
-              <span className="block text-sm font-bold text-caution">New to the catalogue: approving adds it{d.part.machine ? ` to the ${d.part.machine}, ${d.part.assembly}` : ""}.</span>
+              <span className="block text-sm font-bold text-caution">
+                New to the catalogue: approving adds it
+                {d.part.machine ? ` to the ${d.part.machine}, ${d.part.assembly}` : ""}.
+              </span>
             ) : (
               <Link href={`/parts/${d.part.id}`} className="text-sm">
                 Its part page
@@ -40,9 +46,14 @@ export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
         <div className="grid gap-1 p-3 sm:grid-cols-[9rem_1fr]">
           <dt className="font-bold">Standard part</dt>
           <dd>
-            <span className="num font-bold">{d.standardPart.designation}</span> · {STANDARD_KIND_NAMES[d.standardPart.kind]}
-            <span className="num block">{standardSizes(d.standardPart) || "no sizes given"}</span>
-            {d.standardPart.isNew && <span className="block text-sm font-bold text-caution">New to the catalogue: approving adds it with these sizes.</span>}
+            <span className="num font-bold">{d.standardPart.designation}</span> ·{" "}
+            {STANDARD_KIND_NAMES[d.standardPart.kind]}
+            <span className="block num">{standardSizes(d.standardPart) || "no sizes given"}</span>
+            {d.standardPart.isNew && (
+              <span className="block text-sm font-bold text-caution">
+                New to the catalogue: approving adds it with these sizes.
+              </span>
+            )}
           </dd>
         </div>
         <div className="grid gap-1 p-3 sm:grid-cols-[9rem_1fr]">
@@ -79,28 +90,48 @@ export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
             <table className="w-full text-left">
               <thead className="bg-ground-sunk text-sm">
                 <tr>
-                  <th scope="col" className="p-3">Size</th>
-                  <th scope="col" className="p-3">Measured</th>
-                  <th scope="col" className="p-3">Standard part</th>
-                  <th scope="col" className="p-3">Difference</th>
+                  <th scope="col" className="p-3">
+                    Size
+                  </th>
+                  <th scope="col" className="p-3">
+                    Measured
+                  </th>
+                  <th scope="col" className="p-3">
+                    Standard part
+                  </th>
+                  <th scope="col" className="p-3">
+                    Difference
+                  </th>
                 </tr>
               </thead>
               <tbody>
                 {d.measurements.map((m, i) => {
-                  const dev = d.deviations.find((x) => x.dimension === m.dimension && (x.label === (m.label || m.dimension)));
+                  const dev = d.deviations.find(
+                    (x) => x.dimension === m.dimension && x.label === (m.label || m.dimension),
+                  );
                   return (
                     <tr key={i} className="border-t border-rule" data-testid="measurement">
                       <td className="p-3">{m.label || MEASURED_NAMES[m.dimension]}</td>
-                      <td className="num p-3">
+                      <td className="p-3 num">
                         {m.value} {m.unit}
                         {m.unit === "in" && <span className="block text-sm text-ink-soft">{mm(m.value * 25.4)}</span>}
                       </td>
-                      <td className="num p-3">{dev ? mm(dev.nominalMm) : "—"}</td>
+                      <td className="p-3 num">{dev ? mm(dev.nominalMm) : "—"}</td>
                       <td className="p-3">
                         {dev ? (
                           <>
-                            <span className="num">{dev.deviationMm > 0 ? "+" : ""}{mm(dev.deviationMm)}</span>
-                            <span className={`block text-sm ${Math.abs(dev.deviationMm) > 0.3 ? "font-bold text-caution" : "text-ink-soft"}`}>{deviationWord(dev.deviationMm)}</span>
+                            <span className="num">
+                              {dev.deviationMm > 0 ? "+" : ""}
+                              {mm(dev.deviationMm)}
+                            </span>
+                            <span
+                              className={
+                                `block text-sm ` +
+                                `${Math.abs(dev.deviationMm) > 0.3 ? "font-bold text-caution" : "text-ink-soft"}`
+                              }
+                            >
+                              {deviationWord(dev.deviationMm)}
+                            </span>
                           </>
                         ) : (
                           "—"
@@ -113,7 +144,9 @@ export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
             </table>
           </div>
         )}
-        <p className="text-sm text-ink-soft">Within 0.05 mm: agrees. Up to 0.3 mm: usual wear on a shaft or bore. Common practice (no published source).</p>
+        <p className="text-sm text-ink-soft">
+          Within 0.05 mm: agrees. Up to 0.3 mm: usual wear on a shaft or bore. Common practice (no published source).
+        </p>
       </div>
 
       <div className="space-y-2">
@@ -125,8 +158,13 @@ export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
             {d.photoList.map((p) => (
               <li key={p.id}>
                 <a href={p.url} target="_blank" rel="noreferrer">
-                  {/* eslint-disable-next-line @next/next/no-img-element -- photos come from the app's own route, checked per viewer */}
-                  <img src={p.url} alt={p.fileName ?? `Photo ${p.id}`} className="aspect-square w-full rounded-md border border-rule object-cover" data-testid="review-photo" />
+                  {/* eslint-disable-next-line @next/next/no-img-element -- the app's own route, checked per viewer */}
+                  <img
+                    src={p.url}
+                    alt={p.fileName ?? `Photo ${p.id}`}
+                    className="aspect-square w-full rounded-md border border-rule object-cover"
+                    data-testid="review-photo"
+                  />
                 </a>
               </li>
             ))}
@@ -134,6 +172,5 @@ export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
         )}
       </div>
     </section>
-
   );
 }

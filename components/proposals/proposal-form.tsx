@@ -10,7 +10,14 @@ import { Button } from "@/components/ui/button";
 import { Field, FieldError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
-import { CATEGORY_NAMES, FIT_NAMES, FITS, PART_CATEGORIES, STANDARD_KIND_NAMES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
+import {
+  CATEGORY_NAMES,
+  FIT_NAMES,
+  FITS,
+  PART_CATEGORIES,
+  STANDARD_KIND_NAMES,
+  STANDARD_KINDS,
+} from "@/lib/catalogue/kinds";
 import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
 import { MEASURED_DIMENSIONS, MEASURED_NAMES, type ProposalCheck } from "@/lib/community/kinds";
 import type { SubmitOutcome } from "@/lib/community/submissions";
@@ -34,20 +41,57 @@ export interface ProposalFormProps {
 
 const numberOrNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
-function Choice({ name, value, checked, onChange, children, testId }: { name: string; value: string; checked: boolean; onChange: () => void; children: ReactNode; testId?: string }) {
+function Choice({
+  name,
+  value,
+  checked,
+  onChange,
+  children,
+  testId,
+}: {
+  name: string;
+  value: string;
+  checked: boolean;
+  onChange: () => void;
+  children: ReactNode;
+  testId?: string;
+}) {
   return (
-    <label className={`flex cursor-pointer items-start gap-3 rounded-md border-2 p-3 ${checked ? "border-brass bg-brass-wash" : "border-rule bg-ground-raised"}`} data-testid={testId}>
-      <input type="radio" name={name} value={value} checked={checked} onChange={onChange} className="mt-1 h-5 w-5 accent-brass" />
+    <label
+      className={
+        `flex cursor-pointer items-start gap-3 rounded-md border-2 p-3 ` +
+        `${checked ? "border-brass bg-brass-wash" : "border-rule bg-ground-raised"}`
+      }
+      data-testid={testId}
+    >
+      <input
+        type="radio"
+        name={name}
+        value={value}
+        checked={checked}
+        onChange={onChange}
+        className="mt-1 h-5 w-5 accent-brass"
+      />
       <span>{children}</span>
     </label>
   );
 }
 
-function Section({ number, title, hint, children }: { number: number; title: string; hint?: string; children: ReactNode }) {
+function Section({
+  number,
+  title,
+  hint,
+  children,
+}: {
+  number: number;
+  title: string;
+  hint?: string;
+  children: ReactNode;
+}) {
   return (
     <fieldset className="space-y-4 rounded-lg border border-rule bg-ground p-4 sm:p-5">
       <legend className="px-1 text-xl font-bold">
-        <span className="num mr-2 text-brass">{number}</span>
+        <span className="mr-2 num text-brass">{number}</span>
         {title}
       </legend>
       {hint && <p className="-mt-2 text-ink-soft">{hint}</p>}
@@ -69,7 +113,14 @@ function Checks({ checks }: { checks: ProposalCheck[] }) {
   );
 }
 
-type Outcome = SubmitOutcome | { outcome: "submitted"; submission: { id: number; status: string }; checks: ProposalCheck[]; photosMissing: number[] };
+type Outcome =
+  | SubmitOutcome
+  | {
+      outcome: "submitted";
+      submission: { id: number; status: string };
+      checks: ProposalCheck[];
+      photosMissing: number[];
+    };
 
 function Result({ outcome, edited }: { outcome: Outcome; edited: boolean }) {
   if (outcome.outcome === "confirmed") {
@@ -95,13 +146,18 @@ function Result({ outcome, edited }: { outcome: Outcome; edited: boolean }) {
   return (
     <div className="space-y-3" role="status">
       <Notice tone="success">
-        <p className="font-bold">{edited ? "Your changes are sent. The proposal is back in the review queue." : "Thank you. Your proposal is in the review queue."}</p>
+        <p className="font-bold">
+          {edited
+            ? "Your changes are sent. The proposal is back in the review queue."
+            : "Thank you. Your proposal is in the review queue."}
+        </p>
         <p>A moderator checks it before it reaches the catalogue; you get an e-mail when it is decided.</p>
       </Notice>
       {outcome.photosMissing.length > 0 && (
         <Notice tone="caution">
-          {outcome.photosMissing.length === 1 ? "One photo" : `${outcome.photosMissing.length} photos`} did not reach storage, so the proposal was saved without{" "}
-          {outcome.photosMissing.length === 1 ? "it" : "them"}. Your text is kept.
+          {outcome.photosMissing.length === 1 ? "One photo" : `${outcome.photosMissing.length} photos`} did not reach
+          storage, so the proposal was saved without {outcome.photosMissing.length === 1 ? "it" : "them"}. Your text is
+          kept.
         </Notice>
       )}
       <Checks checks={outcome.checks} />
@@ -120,7 +176,14 @@ function errorAt(errors: FieldErrors<SubmissionFormValues>, path: string): strin
 }
 
 /** The proposal form; the same zod schema checks it here and in the route handler. */
-export function ProposalForm({ choices, defaults, pickedPart: initialPart, pickedStandard: initialStandard, photos, editId }: ProposalFormProps) {
+export function ProposalForm({
+  choices,
+  defaults,
+  pickedPart: initialPart,
+  pickedStandard: initialStandard,
+  photos,
+  editId,
+}: ProposalFormProps) {
   const [outcome, setOutcome] = useState<Outcome | null>(null);
   const { form, onSubmit, formError } = useApiForm<SubmissionFormValues, SubmissionInput, Outcome>({
     schema: submissionInput,
@@ -147,9 +210,17 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
   const standard = useWatch({ control, name: "standard" });
 
   const checked = useMemo(() => {
-    if (standardMode !== "new" || !standard?.kind || !standard.designation || standard.designation.trim().length < 2) return null;
+    if (standardMode !== "new" || !standard?.kind || !standard.designation || standard.designation.trim().length < 2)
+      return null;
     const n = (v: unknown) => (typeof v === "number" && Number.isFinite(v) ? v : null);
-    return checkStandard({ kind: standard.kind, designation: standard.designation, innerMm: n(standard.innerMm), outerMm: n(standard.outerMm), widthMm: n(standard.widthMm), lengthMm: n(standard.lengthMm) });
+    return checkStandard({
+      kind: standard.kind,
+      designation: standard.designation,
+      innerMm: n(standard.innerMm),
+      outerMm: n(standard.outerMm),
+      widthMm: n(standard.widthMm),
+      lengthMm: n(standard.lengthMm),
+    });
   }, [standardMode, standard]);
   const liveChecks = checked?.checks ?? [];
   // The same comparison the server makes and the review page shows first: the standard part against the worn part's
@@ -173,10 +244,20 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
     <form onSubmit={onSubmit} noValidate className="space-y-6">
       <Section number={1} title="The worn part" hint="The part you took off the machine.">
         <div className="grid gap-2 sm:grid-cols-2">
-          <Choice name="original-mode" value="existing" checked={originalMode === "existing"} onChange={() => setValue("original.mode", "existing")}>
+          <Choice
+            name="original-mode"
+            value="existing"
+            checked={originalMode === "existing"}
+            onChange={() => setValue("original.mode", "existing")}
+          >
             It is in the catalogue
           </Choice>
-          <Choice name="original-mode" value="new" checked={originalMode === "new"} onChange={() => setValue("original.mode", "new")}>
+          <Choice
+            name="original-mode"
+            value="new"
+            checked={originalMode === "new"}
+            onChange={() => setValue("original.mode", "new")}
+          >
             It is not in the catalogue yet
           </Choice>
         </div>
@@ -191,7 +272,12 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
           />
         ) : (
           <div className="grid gap-4 sm:grid-cols-2">
-            <SelectField id="maker" label="Maker" error={errorAt(errors, "original.makerId")} {...register("original.makerId", { setValueAs: numberOrNull })}>
+            <SelectField
+              id="maker"
+              label="Maker"
+              error={errorAt(errors, "original.makerId")}
+              {...register("original.makerId", { setValueAs: numberOrNull })}
+            >
               <option value="">Choose…</option>
               {choices.makers.map((m) => (
                 <option key={m.id} value={m.id}>
@@ -199,9 +285,27 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
                 </option>
               ))}
             </SelectField>
-            <Field id="number" label="Factory number" mono hint="As stamped or as in the parts book." error={errorAt(errors, "original.number")} {...register("original.number")} />
-            <Field id="description" label="What it is" hint="For example: fan shaft bearing, front." error={errorAt(errors, "original.description")} {...register("original.description")} />
-            <SelectField id="category" label="Kind of part" error={errorAt(errors, "original.category")} {...register("original.category", { setValueAs: (v) => v || null })}>
+            <Field
+              id="number"
+              label="Factory number"
+              mono
+              hint="As stamped or as in the parts book."
+              error={errorAt(errors, "original.number")}
+              {...register("original.number")}
+            />
+            <Field
+              id="description"
+              label="What it is"
+              hint="For example: fan shaft bearing, front."
+              error={errorAt(errors, "original.description")}
+              {...register("original.description")}
+            />
+            <SelectField
+              id="category"
+              label="Kind of part"
+              error={errorAt(errors, "original.category")}
+              {...register("original.category", { setValueAs: (v) => v || null })}
+            >
               <option value="">Choose…</option>
               {PART_CATEGORIES.map((c) => (
                 <option key={c} value={c}>
@@ -209,7 +313,12 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
                 </option>
               ))}
             </SelectField>
-            <SelectField id="machine" label="Machine (if you know it)" error={errorAt(errors, "original.machineId")} {...register("original.machineId", { setValueAs: numberOrNull })}>
+            <SelectField
+              id="machine"
+              label="Machine (if you know it)"
+              error={errorAt(errors, "original.machineId")}
+              {...register("original.machineId", { setValueAs: numberOrNull })}
+            >
               <option value="">Not sure / several</option>
               {machines.map((m) => (
                 <option key={m.id} value={m.id}>
@@ -218,7 +327,12 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
               ))}
             </SelectField>
             {Boolean(machineId) && (
-              <SelectField id="assembly" label="Where on the machine" error={errorAt(errors, "original.assemblyId")} {...register("original.assemblyId", { setValueAs: numberOrNull })}>
+              <SelectField
+                id="assembly"
+                label="Where on the machine"
+                error={errorAt(errors, "original.assemblyId")}
+                {...register("original.assemblyId", { setValueAs: numberOrNull })}
+              >
                 <option value="">Choose…</option>
                 {choices.assemblies.map((a) => (
                   <option key={a.id} value={a.id}>
@@ -231,12 +345,26 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
         )}
       </Section>
 
-      <Section number={2} title="The standard part you fitted" hint="The part you can buy today by its standard number.">
+      <Section
+        number={2}
+        title="The standard part you fitted"
+        hint="The part you can buy today by its standard number."
+      >
         <div className="grid gap-2 sm:grid-cols-2">
-          <Choice name="standard-mode" value="existing" checked={standardMode === "existing"} onChange={() => setValue("standard.mode", "existing")}>
+          <Choice
+            name="standard-mode"
+            value="existing"
+            checked={standardMode === "existing"}
+            onChange={() => setValue("standard.mode", "existing")}
+          >
             Pick it from the catalogue
           </Choice>
-          <Choice name="standard-mode" value="new" checked={standardMode === "new"} onChange={() => setValue("standard.mode", "new")}>
+          <Choice
+            name="standard-mode"
+            value="new"
+            checked={standardMode === "new"}
+            onChange={() => setValue("standard.mode", "new")}
+          >
             Enter it by designation and sizes
           </Choice>
         </div>
@@ -252,7 +380,12 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
         ) : (
           <div className="space-y-4">
             <div className="grid gap-4 sm:grid-cols-2">
-              <SelectField id="standard-kind" label="Kind" error={errorAt(errors, "standard.kind")} {...register("standard.kind", { setValueAs: (v) => v || null })}>
+              <SelectField
+                id="standard-kind"
+                label="Kind"
+                error={errorAt(errors, "standard.kind")}
+                {...register("standard.kind", { setValueAs: (v) => v || null })}
+              >
                 <option value="">Choose…</option>
                 {STANDARD_KINDS.map((k) => (
                   <option key={k} value={k}>
@@ -260,7 +393,14 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
                   </option>
                 ))}
               </SelectField>
-              <Field id="designation" label="Designation" mono hint="6205-2RS, 35 × 52 × 7, B43…" error={errorAt(errors, "standard.designation")} {...register("standard.designation")} />
+              <Field
+                id="designation"
+                label="Designation"
+                mono
+                hint="6205-2RS, 35 × 52 × 7, B43…"
+                error={errorAt(errors, "standard.designation")}
+                {...register("standard.designation")}
+              />
             </div>
             <div className="grid grid-cols-2 gap-4 sm:grid-cols-4">
               {(
@@ -283,7 +423,9 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
                 />
               ))}
             </div>
-            <p className="text-sm text-ink-soft">Sizes are optional when the designation says them; the engine checks any you enter against it.</p>
+            <p className="text-sm text-ink-soft">
+              Sizes are optional when the designation says them; the engine checks any you enter against it.
+            </p>
             <Checks checks={liveChecks} />
           </div>
         )}
@@ -299,7 +441,14 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
       <Section number={3} title="How it fitted">
         <div className="grid gap-2">
           {FITS.map((f) => (
-            <Choice key={f} name="fit" value={f} checked={fit === f} onChange={() => setValue("fit", f, { shouldValidate: true })} testId={`fit-${f}`}>
+            <Choice
+              key={f}
+              name="fit"
+              value={f}
+              checked={fit === f}
+              onChange={() => setValue("fit", f, { shouldValidate: true })}
+              testId={`fit-${f}`}
+            >
               <span className="font-bold">
                 {FIT_NAMES[f].mark} {FIT_NAMES[f].word}
               </span>
@@ -310,19 +459,41 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
         {errorAt(errors, "fit") && <FieldError id="fit-error">{errorAt(errors, "fit")}</FieldError>}
       </Section>
 
-      <Section number={4} title="What you measured on the old part" hint="With calipers or a micrometer; inch or mm. Worn sizes are fine: the reviewer compares them with the standard part.">
+      <Section
+        number={4}
+        title="What you measured on the old part"
+        hint={
+          "With calipers or a micrometer; inch or mm. Worn sizes are fine: the " +
+          "reviewer compares them with the standard part."
+        }
+      >
         {measurements.fields.length === 0 && <p className="text-ink-soft">No measurements yet.</p>}
         <ol className="space-y-3">
           {measurements.fields.map((row, i) => (
-            <li key={row.id} className="grid items-end gap-3 rounded-md border border-rule p-3 sm:grid-cols-[1fr_1fr_7rem_auto]">
-              <SelectField id={`m-${i}-dimension`} label="Which size" error={errorAt(errors, `measurements.${i}.dimension`)} {...register(`measurements.${i}.dimension`)}>
+            <li
+              key={row.id}
+              className="grid items-end gap-3 rounded-md border border-rule p-3 sm:grid-cols-[1fr_1fr_7rem_auto]"
+            >
+              <SelectField
+                id={`m-${i}-dimension`}
+                label="Which size"
+                error={errorAt(errors, `measurements.${i}.dimension`)}
+                {...register(`measurements.${i}.dimension`)}
+              >
                 {MEASURED_DIMENSIONS.map((d) => (
                   <option key={d} value={d}>
                     {MEASURED_NAMES[d]}
                   </option>
                 ))}
               </SelectField>
-              <Field id={`m-${i}-value`} label="Measured" mono inputMode="decimal" error={errorAt(errors, `measurements.${i}.value`)} {...register(`measurements.${i}.value`, { setValueAs: numberOrNull })} />
+              <Field
+                id={`m-${i}-value`}
+                label="Measured"
+                mono
+                inputMode="decimal"
+                error={errorAt(errors, `measurements.${i}.value`)}
+                {...register(`measurements.${i}.value`, { setValueAs: numberOrNull })}
+              />
               <SelectField id={`m-${i}-unit`} label="Unit" {...register(`measurements.${i}.unit`)}>
                 <option value="mm">mm</option>
                 <option value="in">in</option>
@@ -334,7 +505,13 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
           ))}
         </ol>
         {measurements.fields.length < 12 && (
-          <Button type="button" variant="secondary" onClick={() => measurements.append({ dimension: "inner", value: undefined as unknown as number, unit: "mm" })}>
+          <Button
+            type="button"
+            variant="secondary"
+            onClick={() =>
+              measurements.append({ dimension: "inner", value: undefined as unknown as number, unit: "mm" })
+            }
+          >
             Add a measurement
           </Button>
         )}
@@ -353,7 +530,10 @@ export function ProposalForm({ choices, defaults, pickedPart: initialPart, picke
             rows={5}
             aria-describedby={errorAt(errors, "notes") ? "notes-hint notes-error" : "notes-hint"}
             aria-invalid={errorAt(errors, "notes") ? true : undefined}
-            className="block w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 py-2 text-lg focus:border-brass"
+            className={
+              "block w-full rounded-md border-2 border-rule-strong bg-ground-raised " +
+              "px-3 py-2 text-lg focus:border-brass"
+            }
             {...register("notes")}
           />
           {errorAt(errors, "notes") && <FieldError id="notes-error">{errorAt(errors, "notes")}</FieldError>}

@@ -12,7 +12,13 @@ const MARK: Record<SubmissionStatus, string> = { pending: "…", changes_request
 /** The word carries the status; the mark and colour only repeat it. */
 export function StatusBadge({ status }: { status: SubmissionStatus }) {
   return (
-    <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded border px-2 py-0.5 text-sm font-bold ${STYLE[status]}`} data-status={status}>
+    <span
+      className={
+        `inline-flex items-center gap-1 rounded border px-2 py-0.5 text-sm ` +
+        `font-bold whitespace-nowrap ${STYLE[status]}`
+      }
+      data-status={status}
+    >
       <span aria-hidden="true">{MARK[status]}</span>
       {STATUS_NAMES[status]}
     </span>

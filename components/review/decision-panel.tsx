@@ -7,7 +7,11 @@ import { Notice } from "@/components/ui/notice";
 import type { Decision } from "@/lib/community/kinds";
 import { postJson } from "@/lib/http/post-json";
 
-const LABELS: Record<Decision, string> = { approve: "Approve", request_changes: "Send back for changes", reject: "Reject" };
+const LABELS: Record<Decision, string> = {
+  approve: "Approve",
+  request_changes: "Send back for changes",
+  reject: "Reject",
+};
 
 /** Approve, send back or reject; the version read with the page goes along, so a decision made meanwhile wins. */
 export function DecisionPanel({ id, version }: { id: number; version: number }) {
@@ -23,7 +27,11 @@ export function DecisionPanel({ id, version }: { id: number; version: number }) 
       return;
     }
     setPending(action);
-    const result = await postJson<{ submission: { status: string } }>(`/api/submissions/${id}/decision`, { action, message, version });
+    const result = await postJson<{ submission: { status: string } }>(`/api/submissions/${id}/decision`, {
+      action,
+      message,
+      version,
+    });
     setPending(null);
     if (result.ok) {
       router.push(`/review?done=${result.data.submission.status}`);
@@ -34,7 +42,10 @@ export function DecisionPanel({ id, version }: { id: number; version: number }) 
   }
 
   return (
-    <section aria-labelledby="decide-heading" className="space-y-3 rounded-lg border-2 border-brass bg-ground-raised p-4">
+    <section
+      aria-labelledby="decide-heading"
+      className="space-y-3 rounded-lg border-2 border-brass bg-ground-raised p-4"
+    >
       <h2 id="decide-heading" className="text-xl">
         Your decision
       </h2>
@@ -61,7 +72,14 @@ export function DecisionPanel({ id, version }: { id: number; version: number }) 
       )}
       <div className="flex flex-wrap gap-3">
         {(["approve", "request_changes", "reject"] as const).map((action) => (
-          <Button key={action} type="button" variant={action === "approve" ? "primary" : "secondary"} pending={pending === action} disabled={pending !== null} onClick={() => decide(action)}>
+          <Button
+            key={action}
+            type="button"
+            variant={action === "approve" ? "primary" : "secondary"}
+            pending={pending === action}
+            disabled={pending !== null}
+            onClick={() => decide(action)}
+          >
             {LABELS[action]}
           </Button>
         ))}

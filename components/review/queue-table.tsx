@@ -14,19 +14,27 @@ function waited(iso: string): string {
 }
 
 const columns: Array<ColumnDef<SubmissionRow>> = [
-  { accessorKey: "createdAt", header: "Waiting", cell: ({ getValue }) => <span className="whitespace-nowrap">{waited(getValue<string>())}</span> },
+  {
+    accessorKey: "createdAt",
+    header: "Waiting",
+    cell: ({ getValue }) => <span className="whitespace-nowrap">{waited(getValue<string>())}</span>,
+  },
   {
     accessorKey: "partNumber",
     header: "Factory number",
     cell: ({ row }) => (
-      <Link href={`/review/${row.original.id}`} className="num whitespace-nowrap font-bold">
+      <Link href={`/review/${row.original.id}`} className="num font-bold whitespace-nowrap">
         {row.original.partNumber}
       </Link>
     ),
   },
   { accessorKey: "maker", header: "Maker" },
   { accessorKey: "categoryName", header: "Kind" },
-  { accessorKey: "standard", header: "Proposed standard part", cell: ({ getValue }) => <span className="num">{getValue<string>()}</span> },
+  {
+    accessorKey: "standard",
+    header: "Proposed standard part",
+    cell: ({ getValue }) => <span className="num">{getValue<string>()}</span>,
+  },
   { accessorKey: "fit", header: "Fit", cell: ({ row }) => <FitBadge fit={row.original.fit} /> },
   {
     id: "evidence",
@@ -39,7 +47,11 @@ const columns: Array<ColumnDef<SubmissionRow>> = [
       return (
         <span className="text-sm">
           {bits.join(" · ")}
-          {r.warnings > 0 && <span className="block font-bold text-caution">⚠ {r.warnings} engine {r.warnings === 1 ? "warning" : "warnings"}</span>}
+          {r.warnings > 0 && (
+            <span className="block font-bold text-caution">
+              ⚠ {r.warnings} engine {r.warnings === 1 ? "warning" : "warnings"}
+            </span>
+          )}
         </span>
       );
     },

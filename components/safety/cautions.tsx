@@ -5,21 +5,25 @@ const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
     title: "Pressing and heating bearings",
     points: [
       "Wear a face shield: a cocked bearing can shatter under the press.",
-      "Press only on the ring with the tight fit: the inner ring onto a shaft, the outer ring into a housing. Never through the balls.",
+      "Press only on the ring with the tight fit: the inner ring onto a " +
+        "shaft, the outer ring into a housing. Never through the balls.",
       "Heat a bearing with an induction heater or in an oven to at most about 120 °C, never with an open flame.",
     ],
   },
   belts: {
     title: "Belts, fans and pulleys",
     points: [
-      "Engine stopped and key out before you measure, fit or tension a belt: a turning belt draws fingers into the pulley.",
+      "Engine stopped and key out before you measure, fit or tension a belt: " +
+        "a turning belt draws fingers into the pulley.",
       "Put every guard back before the engine runs again.",
       "Stand clear of the fan when running a tensioned drive for the first time.",
     ],
   },
   coolant: {
     title: "Cooling systems",
-    points: ["Never open a hot, pressurised cooling system: let it cool, then ease the cap off a quarter turn under a rag."],
+    points: [
+      "Never open a hot, pressurised cooling system: let it cool, then ease the cap off a quarter turn under a rag.",
+    ],
   },
   seals: {
     title: "Fitting seals",
@@ -44,7 +48,9 @@ export function Cautions({ kinds, compact = false }: { kinds: CautionKind[]; com
             <span className="font-bold">{TEXT[kind].title}.</span> {TEXT[kind].points.join(" ")}
           </p>
         ))}
-        <p className="text-ink-soft">The maker&apos;s manual and your local rules come first; these notes do not replace them.</p>
+        <p className="text-ink-soft">
+          The maker&apos;s manual and your local rules come first; these notes do not replace them.
+        </p>
       </aside>
     );
   }
@@ -64,7 +70,9 @@ export function Cautions({ kinds, compact = false }: { kinds: CautionKind[]; com
             </ul>
           </section>
         ))}
-        <p className="text-sm text-ink-soft">The maker&apos;s manual and your local rules come first; these notes do not replace them.</p>
+        <p className="text-sm text-ink-soft">
+          The maker&apos;s manual and your local rules come first; these notes do not replace them.
+        </p>
       </div>
     </aside>
   );

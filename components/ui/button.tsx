@@ -19,9 +19,18 @@ export function Button({
       {...props}
       disabled={pending || props.disabled}
       aria-busy={pending || undefined}
-      className={`inline-flex min-h-12 items-center justify-center gap-2 rounded-md px-5 py-2 text-base font-bold transition-colors disabled:cursor-not-allowed ${styles[variant]} ${className}`}
+      className={
+        `inline-flex min-h-12 items-center justify-center gap-2 rounded-md px-5 ` +
+        `py-2 text-base font-bold transition-colors disabled:cursor-not-allowed ` +
+        `${styles[variant]} ${className}`
+      }
     >
-      {pending && <span className="h-4 w-4 animate-spin rounded-full border-2 border-current border-r-transparent" aria-hidden="true" />}
+      {pending && (
+        <span
+          className="h-4 w-4 animate-spin rounded-full border-2 border-current border-r-transparent"
+          aria-hidden="true"
+        />
+      )}
       {children}
     </button>
   );

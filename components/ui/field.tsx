@@ -12,7 +12,14 @@ export function Field({
   suffix,
   mono = false,
   ...input
-}: InputHTMLAttributes<HTMLInputElement> & { id: string; label: string; hint?: ReactNode; error?: string; suffix?: string; mono?: boolean }) {
+}: InputHTMLAttributes<HTMLInputElement> & {
+  id: string;
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  suffix?: string;
+  mono?: boolean;
+}) {
   const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
   return (
     <div className="space-y-1">
@@ -35,7 +42,13 @@ export function Field({
           {...input}
         />
         {suffix && (
-          <span className="num flex items-center rounded-r-md border-2 border-l-0 border-rule-strong bg-ground-sunk px-3 text-ink-soft" aria-hidden="true">
+          <span
+            className={
+              "flex items-center rounded-r-md border-2 border-l-0 border-rule-strong " +
+              "bg-ground-sunk px-3 num text-ink-soft"
+            }
+            aria-hidden="true"
+          >
             {suffix}
           </span>
         )}

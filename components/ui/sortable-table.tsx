@@ -23,10 +23,19 @@ export interface SortableTableProps<T> {
 }
 
 /** A table whose column headers sort it (click again to reverse), with an optional filter box above. */
-export function SortableTable<T>({ rows, columns, initialSorting = [], filter, count, rowTestId }: SortableTableProps<T>) {
+export function SortableTable<T>({
+  rows,
+  columns,
+  initialSorting = [],
+  filter,
+  count,
+  rowTestId,
+}: SortableTableProps<T>) {
   const [sorting, setSorting] = useState<SortingState>(initialSorting);
   const [text, setText] = useState("");
   const filterId = useId();
+  // TanStack Table hands back functions whose identity changes each render, so the compiler leaves this one alone.
+  // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({
     data: rows,
     columns,
@@ -49,7 +58,10 @@ export function SortableTable<T>({ rows, columns, initialSorting = [], filter, c
             value={text}
             onChange={(e) => setText(e.target.value)}
             placeholder={filter.placeholder}
-            className="min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg focus:border-brass"
+            className={
+              "min-h-12 w-full rounded-md border-2 border-rule-strong " +
+              "bg-ground-raised px-3 text-lg focus:border-brass"
+            }
           />
         </div>
       )}
@@ -71,8 +83,17 @@ export function SortableTable<T>({ rows, columns, initialSorting = [], filter, c
                     );
                   }
                   return (
-                    <th key={header.id} scope="col" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"} className="p-0">
-                      <button type="button" onClick={header.column.getToggleSortingHandler()} className="flex min-h-12 w-full items-center gap-1 p-3 text-left font-bold hover:bg-ground">
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : "none"}
+                      className="p-0"
+                    >
+                      <button
+                        type="button"
+                        onClick={header.column.getToggleSortingHandler()}
+                        className="flex min-h-12 w-full items-center gap-1 p-3 text-left font-bold hover:bg-ground"
+                      >
                         {flexRender(header.column.columnDef.header, header.getContext())}
                         <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
                       </button>

@@ -15,7 +15,10 @@ const ref = (model: string, allowNull = false) => ({
   references: { model, key: "id" },
   onDelete: allowNull ? "SET NULL" : "CASCADE",
 });
-const stamps = { created_at: { type: DataTypes.DATE, allowNull: false }, updated_at: { type: DataTypes.DATE, allowNull: false } };
+const stamps = {
+  created_at: { type: DataTypes.DATE, allowNull: false },
+  updated_at: { type: DataTypes.DATE, allowNull: false },
+};
 // A fresh object for each attribute: Sequelize writes the column name into the definition it is given.
 const mm = () => ({ type: DataTypes.DOUBLE, allowNull: true });
 
@@ -24,7 +27,18 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     const t = { transaction };
     // Trigram similarity for misread and mistyped factory numbers.
     await qi.sequelize.query("CREATE EXTENSION IF NOT EXISTS pg_trgm", t);
-    await qi.createTable("makers", { id: id(), name: { type: DataTypes.STRING(120), allowNull: false, unique: true }, prefixes: { type: DataTypes.ARRAY(DataTypes.STRING(12)), allowNull: false, defaultValue: [] }, country: { type: DataTypes.STRING(60) }, note: { type: DataTypes.TEXT }, ...stamps }, t);
+    await qi.createTable(
+      "makers",
+      {
+        id: id(),
+        name: { type: DataTypes.STRING(120), allowNull: false, unique: true },
+        prefixes: { type: DataTypes.ARRAY(DataTypes.STRING(12)), allowNull: false, defaultValue: [] },
+        country: { type: DataTypes.STRING(60) },
+        note: { type: DataTypes.TEXT },
+        ...stamps,
+      },
+      t,
+    );
     await qi.createTable(
       "machines",
       {
@@ -40,7 +54,16 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
       t,
     );
     await qi.addIndex("machines", ["maker_id", "model"], { unique: true, ...t });
-    await qi.createTable("assemblies", { id: id(), name: { type: DataTypes.STRING(80), allowNull: false, unique: true }, caution: { type: DataTypes.STRING(20) }, ...stamps }, t);
+    await qi.createTable(
+      "assemblies",
+      {
+        id: id(),
+        name: { type: DataTypes.STRING(80), allowNull: false, unique: true },
+        caution: { type: DataTypes.STRING(20) },
+        ...stamps,
+      },
+      t,
+    );
     await qi.createTable(
       "original_parts",
       {
@@ -65,7 +88,10 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.addIndex("original_parts", ["number_key"], t);
     // GIN for the similarity operator (%). GiST would serve nearest-neighbour ordering too, but measured ten times
     // slower on short part numbers, which share many trigrams (docs/performance.md).
-    await qi.sequelize.query("CREATE INDEX original_parts_number_key_trgm ON original_parts USING gin (number_key gin_trgm_ops)", t);
+    await qi.sequelize.query(
+      "CREATE INDEX original_parts_number_key_trgm ON original_parts USING gin (number_key gin_trgm_ops)",
+      t,
+    );
     // Measured-size search: a category and two diameters within a tolerance.
     await qi.addIndex("original_parts", ["category", "inner_mm", "outer_mm"], t);
     await qi.createTable(
@@ -124,13 +150,19 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
         notes: { type: DataTypes.TEXT },
         status: { type: DataTypes.ENUM(...CROSS_STATUSES), allowNull: false, defaultValue: "pending" },
         origin: { type: DataTypes.ENUM(...CROSS_ORIGINS), allowNull: false },
-        created_by: { type: DataTypes.STRING(40), allowNull: true, references: { model: "users", key: "id" }, onDelete: "SET NULL" },
+        created_by: {
+          type: DataTypes.STRING(40),
+          allowNull: true,
+          references: { model: "users", key: "id" },
+          onDelete: "SET NULL",
+        },
         ...stamps,
       },
       t,
     );
     await qi.sequelize.query(
-      "ALTER TABLE crosses ADD CONSTRAINT crosses_target CHECK ((standard_part_id IS NOT NULL) OR (repair_method IS NOT NULL))",
+      "ALTER TABLE crosses ADD CONSTRAINT crosses_target CHECK " +
+        "((standard_part_id IS NOT NULL) OR (repair_method IS NOT NULL))",
       t,
     );
     await qi.addIndex("crosses", ["original_part_id", "status"], t);
@@ -140,7 +172,12 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
       {
         id: id(),
         cross_id: ref("crosses"),
-        user_id: { type: DataTypes.STRING(40), allowNull: false, references: { model: "users", key: "id" }, onDelete: "CASCADE" },
+        user_id: {
+          type: DataTypes.STRING(40),
+          allowNull: false,
+          references: { model: "users", key: "id" },
+          onDelete: "CASCADE",
+        },
         note: { type: DataTypes.TEXT },
         ...stamps,
       },
@@ -153,10 +190,28 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.sequelize.transaction(async (transaction) => {
     const t = { transaction };
-    for (const table of ["confirmations", "crosses", "standard_parts", "supersessions", "part_usages", "original_parts", "assemblies", "machines", "makers"]) {
+    for (const table of [
+      "confirmations",
+      "crosses",
+      "standard_parts",
+      "supersessions",
+      "part_usages",
+      "original_parts",
+      "assemblies",
+      "machines",
+      "makers",
+    ]) {
       await qi.dropTable(table, t);
     }
-    for (const type of ["enum_crosses_status", "enum_crosses_origin", "enum_crosses_fit", "enum_standard_parts_kind", "enum_supersessions_kind", "enum_original_parts_category", "enum_machines_kind"]) {
+    for (const type of [
+      "enum_crosses_status",
+      "enum_crosses_origin",
+      "enum_crosses_fit",
+      "enum_standard_parts_kind",
+      "enum_supersessions_kind",
+      "enum_original_parts_category",
+      "enum_machines_kind",
+    ]) {
       await qi.sequelize.query(`DROP TYPE IF EXISTS "${type}"`, t);
     }
   });

@@ -17,7 +17,10 @@ const ref = (model: string, allowNull: boolean, onDelete = allowNull ? "SET NULL
   references: { model, key: "id" },
   onDelete,
 });
-const stamps = () => ({ created_at: { type: DataTypes.DATE, allowNull: false }, updated_at: { type: DataTypes.DATE, allowNull: false } });
+const stamps = () => ({
+  created_at: { type: DataTypes.DATE, allowNull: false },
+  updated_at: { type: DataTypes.DATE, allowNull: false },
+});
 
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.sequelize.transaction(async (transaction) => {
@@ -49,11 +52,13 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
       t,
     );
     await qi.sequelize.query(
-      "ALTER TABLE submissions ADD CONSTRAINT submissions_original CHECK ((original_part_id IS NOT NULL) OR (new_part IS NOT NULL))",
+      "ALTER TABLE submissions ADD CONSTRAINT submissions_original CHECK " +
+        "((original_part_id IS NOT NULL) OR (new_part IS NOT NULL))",
       t,
     );
     await qi.sequelize.query(
-      "ALTER TABLE submissions ADD CONSTRAINT submissions_standard CHECK ((standard_part_id IS NOT NULL) OR (new_standard IS NOT NULL))",
+      "ALTER TABLE submissions ADD CONSTRAINT submissions_standard CHECK " +
+        "((standard_part_id IS NOT NULL) OR (new_standard IS NOT NULL))",
       t,
     );
     await qi.addIndex("submissions", ["status", "created_at"], t);
@@ -104,7 +109,8 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.addColumn("confirmations", "submission_id", ref("submissions", true, "CASCADE"), t);
     await qi.sequelize.query("ALTER TABLE confirmations ALTER COLUMN cross_id DROP NOT NULL", t);
     await qi.sequelize.query(
-      "ALTER TABLE confirmations ADD CONSTRAINT confirmations_target CHECK ((cross_id IS NOT NULL) OR (submission_id IS NOT NULL))",
+      "ALTER TABLE confirmations ADD CONSTRAINT confirmations_target CHECK " +
+        "((cross_id IS NOT NULL) OR (submission_id IS NOT NULL))",
       t,
     );
     await qi.addIndex("confirmations", ["submission_id", "user_id"], { unique: true, ...t });

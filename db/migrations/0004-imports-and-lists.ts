@@ -5,9 +5,22 @@ const IMPORT_STATUSES = ["uploaded", "parsing", "parsed", "committing", "committ
 const IMPORT_TARGETS = ["catalogue", "review_queue"] as const;
 
 const id = () => ({ type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true });
-const userRef = (allowNull: boolean) => ({ type: DataTypes.STRING(40), allowNull, references: { model: "users", key: "id" }, onDelete: allowNull ? "SET NULL" : "CASCADE" });
-const ref = (model: string, allowNull: boolean, onDelete: string) => ({ type: DataTypes.INTEGER, allowNull, references: { model, key: "id" }, onDelete });
-const stamps = () => ({ created_at: { type: DataTypes.DATE, allowNull: false }, updated_at: { type: DataTypes.DATE, allowNull: false } });
+const userRef = (allowNull: boolean) => ({
+  type: DataTypes.STRING(40),
+  allowNull,
+  references: { model: "users", key: "id" },
+  onDelete: allowNull ? "SET NULL" : "CASCADE",
+});
+const ref = (model: string, allowNull: boolean, onDelete: string) => ({
+  type: DataTypes.INTEGER,
+  allowNull,
+  references: { model, key: "id" },
+  onDelete,
+});
+const stamps = () => ({
+  created_at: { type: DataTypes.DATE, allowNull: false },
+  updated_at: { type: DataTypes.DATE, allowNull: false },
+});
 
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.sequelize.transaction(async (transaction) => {
@@ -116,7 +129,16 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.sequelize.transaction(async (transaction) => {
     const t = { transaction };
-    for (const table of ["job_list_lines", "job_lists", "import_mappings", "import_changes", "import_rejections", "imports"]) await qi.dropTable(table, t);
-    for (const type of ["enum_imports_status", "enum_imports_target"]) await qi.sequelize.query(`DROP TYPE IF EXISTS "${type}"`, t);
+    for (const table of [
+      "job_list_lines",
+      "job_lists",
+      "import_mappings",
+      "import_changes",
+      "import_rejections",
+      "imports",
+    ])
+      await qi.dropTable(table, t);
+    for (const type of ["enum_imports_status", "enum_imports_target"])
+      await qi.sequelize.query(`DROP TYPE IF EXISTS "${type}"`, t);
   });
 }

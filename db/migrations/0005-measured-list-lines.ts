@@ -14,7 +14,8 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     );
     // One line for each measured standard part on a list: adding it again raises the quantity.
     await qi.sequelize.query(
-      `CREATE UNIQUE INDEX job_list_lines_list_item ON job_list_lines (list_id, (standard_item->>'kind'), upper(standard_item->>'designation'))
+      `CREATE UNIQUE INDEX job_list_lines_list_item ON job_list_lines (list_id, (standard_item->>'kind'),
+        upper(standard_item->>'designation'))
        WHERE part_id IS NULL`,
       t,
     );

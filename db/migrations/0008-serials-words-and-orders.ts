@@ -20,11 +20,16 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.addColumn("part_usages", "serial_from", { type: DataTypes.INTEGER, allowNull: true }, t);
     await qi.addColumn("part_usages", "serial_to", { type: DataTypes.INTEGER, allowNull: true }, t);
     await qi.addColumn("part_usages", "position", { type: DataTypes.STRING(200), allowNull: true }, t);
-    await q("ALTER TABLE part_usages ADD CONSTRAINT part_usages_serial_order CHECK (serial_from IS NULL OR serial_to IS NULL OR serial_from <= serial_to)");
+    await q(
+      "ALTER TABLE part_usages ADD CONSTRAINT part_usages_serial_order CHECK " +
+        "(serial_from IS NULL OR serial_to IS NULL OR serial_from <= serial_to)",
+    );
     // Notes written before the columns existed ("Early machines, to serial 22-1340") give up their numbers.
-    await q(`UPDATE part_usages SET serial_to = substring(serial_note from 'to serial [^0-9]*(?:[0-9]+-)?([0-9]+)')::integer
+    await q(`UPDATE part_usages SET serial_to = substring(serial_note from
+      'to serial [^0-9]*(?:[0-9]+-)?([0-9]+)')::integer
              WHERE serial_note ~ 'to serial [^0-9]*([0-9]+-)?[0-9]+'`);
-    await q(`UPDATE part_usages SET serial_from = substring(serial_note from 'from serial [^0-9]*(?:[0-9]+-)?([0-9]+)')::integer
+    await q(`UPDATE part_usages SET serial_from = substring(serial_note from
+      'from serial [^0-9]*(?:[0-9]+-)?([0-9]+)')::integer
              WHERE serial_note ~ 'from serial [^0-9]*([0-9]+-)?[0-9]+'`);
     await q("UPDATE part_usages u SET position = p.description FROM original_parts p WHERE p.id = u.part_id");
 
@@ -32,18 +37,28 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
     await qi.addColumn("job_list_lines", "supplier", { type: DataTypes.STRING(120), allowNull: true }, t);
     await qi.addColumn("job_list_lines", "supplier_number", { type: DataTypes.STRING(60), allowNull: true }, t);
     await qi.addColumn("job_list_lines", "unit_price", { type: DataTypes.DECIMAL(10, 2), allowNull: true }, t);
-    await qi.addColumn("job_list_lines", "ordered", { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false }, t);
+    await qi.addColumn(
+      "job_list_lines",
+      "ordered",
+      { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+      t,
+    );
     await qi.addColumn("job_list_lines", "removed_at", { type: DataTypes.DATE, allowNull: true }, t);
-    await q("ALTER TABLE job_list_lines ADD CONSTRAINT job_list_lines_price CHECK (unit_price IS NULL OR unit_price >= 0)");
+    await q(
+      "ALTER TABLE job_list_lines ADD CONSTRAINT job_list_lines_price CHECK (unit_price IS NULL OR unit_price >= 0)",
+    );
     // A measured item may be removed and added again: the one-line rule holds among the lines still on the list.
     await q("DROP INDEX IF EXISTS job_list_lines_list_item");
     await q(
-      `CREATE UNIQUE INDEX job_list_lines_list_item ON job_list_lines (list_id, (standard_item->>'kind'), upper(standard_item->>'designation'))
+      `CREATE UNIQUE INDEX job_list_lines_list_item ON job_list_lines (list_id, (standard_item->>'kind'),
+        upper(standard_item->>'designation'))
        WHERE part_id IS NULL AND removed_at IS NULL`,
     );
 
     // Prefix look-up ("CV-30" finds CV-3003-A) reads these with LIKE 'CV30%'.
-    await q("CREATE INDEX original_parts_number_normalized_prefix ON original_parts (number_normalized text_pattern_ops)");
+    await q(
+      "CREATE INDEX original_parts_number_normalized_prefix ON original_parts (number_normalized text_pattern_ops)",
+    );
     await q("CREATE INDEX original_parts_number_key_prefix ON original_parts (number_key text_pattern_ops)");
 
     await qi.addColumn("original_parts", "search_document", { type: "tsvector", allowNull: true }, t);
@@ -70,9 +85,11 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
       CREATE FUNCTION part_usages_search_refresh() RETURNS trigger LANGUAGE plpgsql AS $$
       BEGIN
         IF TG_OP = 'INSERT' THEN
-          UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id) WHERE p.id IN (SELECT part_id FROM new_rows);
+          UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id) WHERE
+            p.id IN (SELECT part_id FROM new_rows);
         ELSIF TG_OP = 'DELETE' THEN
-          UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id) WHERE p.id IN (SELECT part_id FROM old_rows);
+          UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id) WHERE
+            p.id IN (SELECT part_id FROM old_rows);
         ELSE
           UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id)
           WHERE p.id IN (SELECT part_id FROM new_rows UNION SELECT part_id FROM old_rows);
@@ -83,14 +100,16 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
              FOR EACH STATEMENT EXECUTE FUNCTION part_usages_search_refresh()`);
     await q(`CREATE TRIGGER part_usages_search_delete AFTER DELETE ON part_usages REFERENCING OLD TABLE AS old_rows
              FOR EACH STATEMENT EXECUTE FUNCTION part_usages_search_refresh()`);
-    await q(`CREATE TRIGGER part_usages_search_update AFTER UPDATE ON part_usages REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows
+    await q(`CREATE TRIGGER part_usages_search_update AFTER UPDATE ON part_usages REFERENCING OLD TABLE AS old_rows NEW
+      TABLE AS new_rows
              FOR EACH STATEMENT EXECUTE FUNCTION part_usages_search_refresh()`);
     // A renamed machine, place or maker changes the words of every part it holds (rare: an editor's correction).
     await q(`
       CREATE FUNCTION names_search_refresh() RETURNS trigger LANGUAGE plpgsql AS $$
       BEGIN
         IF TG_TABLE_NAME = 'makers' THEN
-          UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id) WHERE p.maker_id = NEW.id;
+          UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id) WHERE
+            p.maker_id = NEW.id;
         ELSIF TG_TABLE_NAME = 'machines' THEN
           UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id)
           WHERE p.id IN (SELECT part_id FROM part_usages WHERE machine_id = NEW.id);
@@ -100,9 +119,21 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
         END IF;
         RETURN NULL;
       END $$`);
-    await q("CREATE TRIGGER makers_search AFTER UPDATE OF name ON makers FOR EACH ROW WHEN (OLD.name IS DISTINCT FROM NEW.name) EXECUTE FUNCTION names_search_refresh()");
-    await q("CREATE TRIGGER machines_search AFTER UPDATE OF model ON machines FOR EACH ROW WHEN (OLD.model IS DISTINCT FROM NEW.model) EXECUTE FUNCTION names_search_refresh()");
-    await q("CREATE TRIGGER assemblies_search AFTER UPDATE OF name ON assemblies FOR EACH ROW WHEN (OLD.name IS DISTINCT FROM NEW.name) EXECUTE FUNCTION names_search_refresh()");
+    await q(
+      "CREATE TRIGGER makers_search AFTER UPDATE OF name ON makers FOR EACH " +
+        "ROW WHEN (OLD.name IS DISTINCT FROM NEW.name) EXECUTE FUNCTION " +
+        "names_search_refresh()",
+    );
+    await q(
+      "CREATE TRIGGER machines_search AFTER UPDATE OF model ON machines FOR " +
+        "EACH ROW WHEN (OLD.model IS DISTINCT FROM NEW.model) EXECUTE FUNCTION " +
+        "names_search_refresh()",
+    );
+    await q(
+      "CREATE TRIGGER assemblies_search AFTER UPDATE OF name ON assemblies " +
+        "FOR EACH ROW WHEN (OLD.name IS DISTINCT FROM NEW.name) EXECUTE " +
+        "FUNCTION names_search_refresh()",
+    );
     await q("UPDATE original_parts p SET search_document = part_search_document(p.id, p.description, p.maker_id)");
     await q("CREATE INDEX original_parts_search ON original_parts USING gin (search_document)");
   });
@@ -130,11 +161,13 @@ export async function down({ context: qi }: { context: QueryInterface }): Promis
     await q("DELETE FROM job_list_lines WHERE removed_at IS NOT NULL");
     await q("DROP INDEX IF EXISTS job_list_lines_list_item");
     await q(
-      `CREATE UNIQUE INDEX job_list_lines_list_item ON job_list_lines (list_id, (standard_item->>'kind'), upper(standard_item->>'designation'))
+      `CREATE UNIQUE INDEX job_list_lines_list_item ON job_list_lines (list_id, (standard_item->>'kind'),
+        upper(standard_item->>'designation'))
        WHERE part_id IS NULL`,
     );
     await q("ALTER TABLE job_list_lines DROP CONSTRAINT IF EXISTS job_list_lines_price");
-    for (const column of ["supplier", "supplier_number", "unit_price", "ordered", "removed_at"]) await qi.removeColumn("job_list_lines", column, t);
+    for (const column of ["supplier", "supplier_number", "unit_price", "ordered", "removed_at"])
+      await qi.removeColumn("job_list_lines", column, t);
     await qi.removeColumn("job_lists", "machine_serial", t);
     await q("ALTER TABLE part_usages DROP CONSTRAINT IF EXISTS part_usages_serial_order");
     for (const column of ["serial_from", "serial_to", "position"]) await qi.removeColumn("part_usages", column, t);

@@ -9,7 +9,10 @@ import type { QueryInterface } from "sequelize";
 export async function up({ context: qi }: { context: QueryInterface }): Promise<void> {
   await qi.sequelize.transaction(async (transaction) => {
     await qi.sequelize.query("CREATE EXTENSION IF NOT EXISTS fuzzystrmatch", { transaction });
-    await qi.sequelize.query("CREATE INDEX original_parts_number_key_reversed ON original_parts (reverse(number_key) text_pattern_ops)", { transaction });
+    await qi.sequelize.query(
+      "CREATE INDEX original_parts_number_key_reversed ON original_parts (reverse(number_key) text_pattern_ops)",
+      { transaction },
+    );
   });
 }
 

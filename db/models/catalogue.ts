@@ -33,7 +33,17 @@ export class Maker extends Model<InferAttributes<Maker>, InferCreationAttributes
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
-Maker.init({ id: id(), name: DataTypes.STRING(120), prefixes: DataTypes.ARRAY(DataTypes.STRING(12)), country: DataTypes.STRING(60), note: DataTypes.TEXT, ...stamps }, { sequelize, modelName: "Maker", tableName: "makers" });
+Maker.init(
+  {
+    id: id(),
+    name: DataTypes.STRING(120),
+    prefixes: DataTypes.ARRAY(DataTypes.STRING(12)),
+    country: DataTypes.STRING(60),
+    note: DataTypes.TEXT,
+    ...stamps,
+  },
+  { sequelize, modelName: "Maker", tableName: "makers" },
+);
 
 export class Machine extends Model<InferAttributes<Machine>, InferCreationAttributes<Machine>> {
   declare id: CreationOptional<number>;
@@ -49,7 +59,17 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare updatedAt: CreationOptional<Date>;
 }
 Machine.init(
-  { id: id(), makerId: DataTypes.INTEGER, model: DataTypes.STRING(120), kind: DataTypes.ENUM(...MACHINE_KINDS), yearFrom: DataTypes.INTEGER, yearTo: DataTypes.INTEGER, serialNote: DataTypes.TEXT, serialPrefix: DataTypes.STRING(12), ...stamps },
+  {
+    id: id(),
+    makerId: DataTypes.INTEGER,
+    model: DataTypes.STRING(120),
+    kind: DataTypes.ENUM(...MACHINE_KINDS),
+    yearFrom: DataTypes.INTEGER,
+    yearTo: DataTypes.INTEGER,
+    serialNote: DataTypes.TEXT,
+    serialPrefix: DataTypes.STRING(12),
+    ...stamps,
+  },
   { sequelize, modelName: "Machine", tableName: "machines" },
 );
 
@@ -60,7 +80,10 @@ export class Assembly extends Model<InferAttributes<Assembly>, InferCreationAttr
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
-Assembly.init({ id: id(), name: DataTypes.STRING(80), caution: DataTypes.STRING(20), ...stamps }, { sequelize, modelName: "Assembly", tableName: "assemblies" });
+Assembly.init(
+  { id: id(), name: DataTypes.STRING(80), caution: DataTypes.STRING(20), ...stamps },
+  { sequelize, modelName: "Assembly", tableName: "assemblies" },
+);
 
 export class OriginalPart extends Model<InferAttributes<OriginalPart>, InferCreationAttributes<OriginalPart>> {
   declare id: CreationOptional<number>;
@@ -138,7 +161,14 @@ export class Supersession extends Model<InferAttributes<Supersession>, InferCrea
   declare updatedAt: CreationOptional<Date>;
 }
 Supersession.init(
-  { id: id(), oldPartId: DataTypes.INTEGER, newPartId: DataTypes.INTEGER, kind: DataTypes.ENUM(...SUPERSESSION_KINDS), note: DataTypes.TEXT, ...stamps },
+  {
+    id: id(),
+    oldPartId: DataTypes.INTEGER,
+    newPartId: DataTypes.INTEGER,
+    kind: DataTypes.ENUM(...SUPERSESSION_KINDS),
+    note: DataTypes.TEXT,
+    ...stamps,
+  },
   { sequelize, modelName: "Supersession", tableName: "supersessions" },
 );
 
@@ -155,7 +185,17 @@ export class StandardPart extends Model<InferAttributes<StandardPart>, InferCrea
   declare updatedAt: CreationOptional<Date>;
 }
 StandardPart.init(
-  { id: id(), kind: DataTypes.ENUM(...STANDARD_KINDS), designation: DataTypes.STRING(80), innerMm: mm(), outerMm: mm(), widthMm: mm(), lengthMm: mm(), attributes: DataTypes.JSONB, ...stamps },
+  {
+    id: id(),
+    kind: DataTypes.ENUM(...STANDARD_KINDS),
+    designation: DataTypes.STRING(80),
+    innerMm: mm(),
+    outerMm: mm(),
+    widthMm: mm(),
+    lengthMm: mm(),
+    attributes: DataTypes.JSONB,
+    ...stamps,
+  },
   { sequelize, modelName: "StandardPart", tableName: "standard_parts" },
 );
 
@@ -197,4 +237,14 @@ export class Confirmation extends Model<InferAttributes<Confirmation>, InferCrea
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
-Confirmation.init({ id: id(), crossId: DataTypes.INTEGER, submissionId: DataTypes.INTEGER, userId: DataTypes.STRING(40), note: DataTypes.TEXT, ...stamps }, { sequelize, modelName: "Confirmation", tableName: "confirmations" });
+Confirmation.init(
+  {
+    id: id(),
+    crossId: DataTypes.INTEGER,
+    submissionId: DataTypes.INTEGER,
+    userId: DataTypes.STRING(40),
+    note: DataTypes.TEXT,
+    ...stamps,
+  },
+  { sequelize, modelName: "Confirmation", tableName: "confirmations" },
+);

@@ -1,7 +1,14 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
 import { FITS, type Fit } from "@/lib/catalogue/kinds";
-import { SUBMISSION_STATUSES, type Measurement, type NewPartInput, type NewStandardInput, type ProposalCheck, type SubmissionStatus } from "@/lib/community/kinds";
+import {
+  SUBMISSION_STATUSES,
+  type Measurement,
+  type NewPartInput,
+  type NewStandardInput,
+  type ProposalCheck,
+  type SubmissionStatus,
+} from "@/lib/community/kinds";
 
 const id = () => ({ type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true });
 const json = () => ({ type: DataTypes.JSONB, allowNull: true });

@@ -1,6 +1,14 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
-import { IMPORT_STATUSES, IMPORT_TARGETS, type ImportCounts, type ImportMappingValue, type ImportProgress, type ImportStatus, type ImportTarget } from "@/lib/imports/kinds";
+import {
+  IMPORT_STATUSES,
+  IMPORT_TARGETS,
+  type ImportCounts,
+  type ImportMappingValue,
+  type ImportProgress,
+  type ImportStatus,
+  type ImportTarget,
+} from "@/lib/imports/kinds";
 
 const id = () => ({ type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true });
 const json = () => ({ type: DataTypes.JSONB, allowNull: true });
@@ -35,7 +43,12 @@ Import.init(
     status: { type: DataTypes.ENUM(...IMPORT_STATUSES), defaultValue: "uploaded" },
     objectKey: DataTypes.STRING(200),
     fileName: DataTypes.STRING(200),
-    sizeBytes: { type: DataTypes.BIGINT, get() { return Number(this.getDataValue("sizeBytes")); } },
+    sizeBytes: {
+      type: DataTypes.BIGINT,
+      get() {
+        return Number(this.getDataValue("sizeBytes"));
+      },
+    },
     sha256: DataTypes.STRING(64),
     encoding: DataTypes.STRING(20),
     delimiter: DataTypes.STRING(2),
@@ -62,6 +75,13 @@ export class ImportMapping extends Model<InferAttributes<ImportMapping>, InferCr
   declare updatedAt: CreationOptional<Date>;
 }
 ImportMapping.init(
-  { id: id(), name: DataTypes.STRING(80), mapping: DataTypes.JSONB, createdBy: DataTypes.STRING(40), createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE },
+  {
+    id: id(),
+    name: DataTypes.STRING(80),
+    mapping: DataTypes.JSONB,
+    createdBy: DataTypes.STRING(40),
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
   { sequelize, modelName: "ImportMapping", tableName: "import_mappings" },
 );

@@ -17,7 +17,17 @@ export class JobList extends Model<InferAttributes<JobList>, InferCreationAttrib
   declare updatedAt: CreationOptional<Date>;
 }
 JobList.init(
-  { id: id(), userId: DataTypes.STRING(40), title: DataTypes.STRING(120), machineId: DataTypes.INTEGER, notes: DataTypes.TEXT, shareToken: DataTypes.STRING(64), machineSerial: DataTypes.INTEGER, createdAt: DataTypes.DATE, updatedAt: DataTypes.DATE },
+  {
+    id: id(),
+    userId: DataTypes.STRING(40),
+    title: DataTypes.STRING(120),
+    machineId: DataTypes.INTEGER,
+    notes: DataTypes.TEXT,
+    shareToken: DataTypes.STRING(64),
+    machineSerial: DataTypes.INTEGER,
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
   { sequelize, modelName: "JobList", tableName: "job_lists" },
 );
 

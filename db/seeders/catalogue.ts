@@ -1,5 +1,18 @@
 import { Op } from "sequelize";
-import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, Supersession, User } from "@/db";
+import {
+  Assembly,
+  Confirmation,
+  Cross,
+  Machine,
+  Maker,
+  OriginalPart,
+  PartUsage,
+  sequelize,
+  StandardPart,
+  Submission,
+  Supersession,
+  User,
+} from "@/db";
 import type { Measurement } from "@/lib/community/kinds";
 import type { DemoStandardPart } from "@/fixtures/catalogue/build";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
@@ -8,20 +21,42 @@ import { searchForms } from "@/lib/catalogue/normalise";
 /** Loads the invented demo catalogue in one transaction: all of it lands, or none. */
 export async function seedDemoCatalogue(log: (message: string) => void = () => {}): Promise<void> {
   const demo = buildDemoCatalogue();
-  const confirmers = await User.findAll({ where: { email: { [Op.like]: "club.member%@understudy.test" } }, order: [["email", "ASC"]] });
+  const confirmers = await User.findAll({
+    where: { email: { [Op.like]: "club.member%@understudy.test" } },
+    order: [["email", "ASC"]],
+  });
   await sequelize.transaction(async (transaction) => {
     const t = { transaction };
     const makers = new Map<string, Maker>();
-    for (const m of demo.makers) makers.set(m.key, await Maker.create({ name: m.name, prefixes: m.prefixes, country: m.country, note: m.note }, t));
+    for (const m of demo.makers)
+      makers.set(
+        m.key,
+        await Maker.create({ name: m.name, prefixes: m.prefixes, country: m.country, note: m.note }, t),
+      );
     const machines = new Map<string, number>();
     for (const m of demo.machines) {
-      const row = await Machine.create({ makerId: makers.get(m.makerKey)!.id, model: m.model, kind: m.kind, yearFrom: m.yearFrom, yearTo: m.yearTo, serialNote: m.serialNote, serialPrefix: m.serialPrefix }, t);
+      const row = await Machine.create(
+        {
+          makerId: makers.get(m.makerKey)!.id,
+          model: m.model,
+          kind: m.kind,
+          yearFrom: m.yearFrom,
+          yearTo: m.yearTo,
+          serialNote: m.serialNote,
+          serialPrefix: m.serialPrefix,
+        },
+        t,
+      );
       machines.set(m.key, row.id);
     }
     const assemblies = new Map<string, number>();
-    for (const a of demo.assemblies) assemblies.set(a.name, (await Assembly.create({ name: a.name, caution: a.caution }, t)).id);
+    for (const a of demo.assemblies)
+      assemblies.set(a.name, (await Assembly.create({ name: a.name, caution: a.caution }, t)).id);
 
-    const standardRows = await StandardPart.bulkCreate(demo.standardParts.map(({ key: _key, ...s }) => s), { ...t, returning: true });
+    const standardRows = await StandardPart.bulkCreate(
+      demo.standardParts.map(({ key: _key, ...s }) => s),
+      { ...t, returning: true },
+    );
     const standard = new Map(demo.standardParts.map((s, i) => [s.key, standardRows[i].id]));
 
     const partRows = await OriginalPart.bulkCreate(
@@ -35,10 +70,27 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
     const partIds = new Map(demo.parts.map((p, i) => [p.key, partRows[i].id]));
 
     await PartUsage.bulkCreate(
-      demo.usages.map((u) => ({ partId: partIds.get(u.partKey)!, machineId: machines.get(u.machineKey)!, assemblyId: assemblies.get(u.assembly)!, quantity: u.quantity, serialNote: u.serialNote, serialFrom: u.serialFrom, serialTo: u.serialTo, position: u.position })),
+      demo.usages.map((u) => ({
+        partId: partIds.get(u.partKey)!,
+        machineId: machines.get(u.machineKey)!,
+        assemblyId: assemblies.get(u.assembly)!,
+        quantity: u.quantity,
+        serialNote: u.serialNote,
+        serialFrom: u.serialFrom,
+        serialTo: u.serialTo,
+        position: u.position,
+      })),
       t,
     );
-    await Supersession.bulkCreate(demo.supersessions.map((s) => ({ oldPartId: partIds.get(s.oldKey)!, newPartId: partIds.get(s.newKey)!, kind: s.kind, note: s.note })), t);
+    await Supersession.bulkCreate(
+      demo.supersessions.map((s) => ({
+        oldPartId: partIds.get(s.oldKey)!,
+        newPartId: partIds.get(s.newKey)!,
+        kind: s.kind,
+        note: s.note,
+      })),
+      t,
+    );
     // Pending crosses with a standard part are members' proposals waiting in the review queue: they are loaded as
     // submissions by the club members, sent over the last few weeks, so the queue has work in it from the start.
     const proposals = demo.crosses.filter((c) => c.status === "pending" && c.standardKey && confirmers.length > 0);
@@ -80,22 +132,37 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
       { ...t, returning: true },
     );
     await Confirmation.bulkCreate(
-      crosses.flatMap((c, i) => confirmers.slice(0, c.confirmations).map((user) => ({ crossId: crossRows[i].id, userId: user.id, note: null }))),
+      crosses.flatMap((c, i) =>
+        confirmers.slice(0, c.confirmations).map((user) => ({ crossId: crossRows[i].id, userId: user.id, note: null })),
+      ),
       t,
     );
   });
   const proposals = demo.crosses.filter((c) => c.status === "pending" && c.standardKey).length;
-  log(`demo catalogue: ${demo.makers.length} makers, ${demo.machines.length} machines, ${demo.parts.length} parts, ${demo.crosses.length - proposals} crosses, ${proposals} proposals to review`);
+  log(
+    `demo catalogue: ${demo.makers.length} makers, ${demo.machines.length} ` +
+      `machines, ${demo.parts.length} parts, ` +
+      `${demo.crosses.length - proposals} crosses, ${proposals} proposals to ` +
+      `review`,
+  );
 }
 
 /** What a member would have measured on the worn part: near the standard sizes, a little off as worn parts are. */
 function demoMeasurements(sp: DemoStandardPart, i: number): Measurement[] {
   const wear = [0.02, -0.03, 0.05, 0.01][i % 4];
   const out: Measurement[] = [];
-  if (sp.innerMm) out.push({ dimension: "inner", value: Math.round((sp.innerMm - Math.abs(wear)) * 100) / 100, unit: "mm" });
+  if (sp.innerMm)
+    out.push({ dimension: "inner", value: Math.round((sp.innerMm - Math.abs(wear)) * 100) / 100, unit: "mm" });
   if (sp.outerMm) out.push({ dimension: "outer", value: Math.round((sp.outerMm + wear) * 100) / 100, unit: "mm" });
-  if (sp.widthMm && sp.kind !== "v_belt") out.push({ dimension: "width", value: Math.round((sp.widthMm - Math.abs(wear)) * 100) / 100, unit: "mm" });
-  if (sp.lengthMm) out.push({ dimension: "length", value: Math.round(sp.lengthMm + 4), unit: "mm", label: "outside length, measured with a tape" });
+  if (sp.widthMm && sp.kind !== "v_belt")
+    out.push({ dimension: "width", value: Math.round((sp.widthMm - Math.abs(wear)) * 100) / 100, unit: "mm" });
+  if (sp.lengthMm)
+    out.push({
+      dimension: "length",
+      value: Math.round(sp.lengthMm + 4),
+      unit: "mm",
+      label: "outside length, measured with a tape",
+    });
   return out;
 }
 

@@ -20,7 +20,13 @@ export const AUDIT_ACTIONS = {
 export type AuditAction = keyof typeof AUDIT_ACTIONS;
 
 /** The kinds of record an entry is about. */
-export const AUDIT_SUBJECTS = { submission: "proposal", cross: "cross", import: "import", job_list: "job list", user: "account" } as const;
+export const AUDIT_SUBJECTS = {
+  submission: "proposal",
+  cross: "cross",
+  import: "import",
+  job_list: "job list",
+  user: "account",
+} as const;
 
 export type AuditSubject = keyof typeof AUDIT_SUBJECTS;
 

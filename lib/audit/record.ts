@@ -42,9 +42,21 @@ export interface AuditRow {
 
 /** Newest first, a page at a time: `before` is the smallest id of the previous page. */
 export async function listAudit(limit: number, before?: number): Promise<{ events: AuditRow[]; next: number | null }> {
-  const rows = await sequelize.query<{ id: string; created_at: Date; email: string | null; subject_email: string | null; action: string; subject_type: string; subject_id: string; before: Record<string, unknown> | null; after: Record<string, unknown> | null }>(
-    `SELECT a.id, a.created_at, u.email, s.email AS subject_email, a.action, a.subject_type, a.subject_id, a.before, a.after
-     FROM audit_events a LEFT JOIN users u ON u.id = a.actor_id LEFT JOIN users s ON a.subject_type = 'user' AND s.id = a.subject_id
+  const rows = await sequelize.query<{
+    id: string;
+    created_at: Date;
+    email: string | null;
+    subject_email: string | null;
+    action: string;
+    subject_type: string;
+    subject_id: string;
+    before: Record<string, unknown> | null;
+    after: Record<string, unknown> | null;
+  }>(
+    `SELECT a.id, a.created_at, u.email, s.email AS subject_email, a.action, a.subject_type, a.subject_id, a.before,
+      a.after
+     FROM audit_events a LEFT JOIN users u ON u.id = a.actor_id LEFT JOIN users s ON a.subject_type = 'user' AND s.id =
+       a.subject_id
      ${before ? "WHERE a.id < :before" : ""}
      ORDER BY a.id DESC LIMIT :limit`,
     { replacements: { before: before ?? null, limit: limit + 1 }, type: QueryTypes.SELECT },

@@ -37,7 +37,8 @@ export const SIGN_IN_REFUSED = "That e-mail and password do not match an account
 /** A new password that is easy to guess is refused with the estimator's reason, on the password field. */
 function assertStrongPassword(password: string, userInputs: string[]): void {
   const weakness = passwordWeakness(password, userInputs);
-  if (weakness) throw new AppError("validation_failed", weakness, { field: "password", fields: { password: weakness } });
+  if (weakness)
+    throw new AppError("validation_failed", weakness, { field: "password", fields: { password: weakness } });
 }
 
 export async function signUp(input: { email: string; password: string }): Promise<{ mailSent: boolean }> {
@@ -48,7 +49,12 @@ export async function signUp(input: { email: string; password: string }): Promis
     await takeTurn(transaction, `sign-up:${input.email.toLowerCase()}`);
     const existing = await User.findOne({ where: { email: input.email }, transaction });
     if (existing) {
-      return { mail: accountExistsMail(input.email, link("/reset-password", await issueAccountToken(existing.id, "reset_password", transaction))) };
+      return {
+        mail: accountExistsMail(
+          input.email,
+          link("/reset-password", await issueAccountToken(existing.id, "reset_password", transaction)),
+        ),
+      };
     }
     const user = await User.create(
       { id: generateIdFromEntropySize(10), email: input.email, passwordHash, role: "member", emailVerifiedAt: null },
@@ -72,7 +78,9 @@ export async function verifyEmail(token: string): Promise<AccountView> {
     const userId = await consumeAccountToken(token, "verify_email", transaction);
     const user = userId ? await User.findByPk(userId, { transaction }) : null;
     if (!user) {
-      throw new AppError("validation_failed", "This confirmation link has expired or was already used.", { field: "token" });
+      throw new AppError("validation_failed", "This confirmation link has expired or was already used.", {
+        field: "token",
+      });
     }
     user.emailVerifiedAt ??= new Date();
     await user.save({ transaction });
@@ -90,7 +98,9 @@ export async function signIn(input: {
   const found = await User.findOne({ where: { email: input.email } });
   // A demo account in production is answered exactly like an unknown address.
   const user = found && accountUsable(found.email, env.APP_ENV) ? found : null;
-  const valid = user ? await verifyPassword(user.passwordHash, input.password) : (await spendPasswordTime(input.password), false);
+  const valid = user
+    ? await verifyPassword(user.passwordHash, input.password)
+    : (await spendPasswordTime(input.password), false);
   if (!user || !valid) throw new AppError("unauthenticated", SIGN_IN_REFUSED);
   await settleSuccessfulSignIn(keys);
   if (!user.emailVerifiedAt) {
@@ -123,7 +133,9 @@ export async function resetPassword(input: { token: string; password: string }):
     const userId = await consumeAccountToken(input.token, "reset_password", transaction);
     const found = userId ? await User.findByPk(userId, { transaction }) : null;
     if (!found) {
-      throw new AppError("validation_failed", "This link has expired or was already used. Ask for a new one.", { field: "token" });
+      throw new AppError("validation_failed", "This link has expired or was already used. Ask for a new one.", {
+        field: "token",
+      });
     }
     found.passwordHash = passwordHash;
     found.emailVerifiedAt ??= new Date();
@@ -151,7 +163,17 @@ export async function setAccountRole(input: { actorId: string; userId: string; r
     if (before !== input.role) {
       user.role = input.role;
       await user.save({ transaction });
-      await recordAudit({ actorId: input.actorId, action: "account.role", subjectType: "user", subjectId: user.id, before: { role: before }, after: { role: input.role } }, transaction);
+      await recordAudit(
+        {
+          actorId: input.actorId,
+          action: "account.role",
+          subjectType: "user",
+          subjectId: user.id,
+          before: { role: before },
+          after: { role: input.role },
+        },
+        transaction,
+      );
     }
     return toAccountView(user);
   });

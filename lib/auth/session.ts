@@ -18,7 +18,8 @@ export const getCurrentSession = cache(async (): Promise<CurrentSession> => {
   if (!sessionId) return { user: null, session: null };
   const validated = await lucia.validateSession(sessionId);
   // A session a demo account opened before the app went into production no longer counts.
-  const result: CurrentSession = validated.user && !accountUsable(validated.user.email, env.APP_ENV) ? { user: null, session: null } : validated;
+  const result: CurrentSession =
+    validated.user && !accountUsable(validated.user.email, env.APP_ENV) ? { user: null, session: null } : validated;
   try {
     if (result.session?.fresh) {
       const cookie = lucia.createSessionCookie(result.session.id);

@@ -46,16 +46,22 @@ export async function takeSignInAttempt(keys: ThrottleKeys): Promise<void> {
       const row = rows.find((r) => r.key === key);
       if (!row || row.window_started_at < cutoff || row.failures < max) continue;
       const retryAfterSeconds = Math.max(1, Math.ceil((row.window_started_at.getTime() + windowMs() - now) / 1000));
-      throw new AppError("rate_limited", `Too many failed sign-ins. Wait ${Math.ceil(retryAfterSeconds / 60)} minutes, or reset your password.`, {
-        retryAfterSeconds,
-      });
+      throw new AppError(
+        "rate_limited",
+        `Too many failed sign-ins. Wait ${Math.ceil(retryAfterSeconds / 60)} minutes, or reset your password.`,
+        {
+          retryAfterSeconds,
+        },
+      );
     }
     for (const [key] of limits(keys)) {
       await sequelize.query(
         `INSERT INTO sign_in_failures (key, failures, window_started_at) VALUES (:key, 1, now())
          ON CONFLICT (key) DO UPDATE SET
-           failures = CASE WHEN sign_in_failures.window_started_at < :cutoff THEN 1 ELSE sign_in_failures.failures + 1 END,
-           window_started_at = CASE WHEN sign_in_failures.window_started_at < :cutoff THEN now() ELSE sign_in_failures.window_started_at END`,
+           failures = CASE WHEN sign_in_failures.window_started_at < :cutoff THEN 1 ELSE sign_in_failures.failures + 1
+             END,
+           window_started_at = CASE WHEN sign_in_failures.window_started_at < :cutoff THEN now() ELSE
+             sign_in_failures.window_started_at END`,
         { replacements: { key, cutoff }, type: QueryTypes.INSERT, transaction },
       );
     }

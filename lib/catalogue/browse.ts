@@ -14,16 +14,35 @@ export interface MakerWithMachines {
 }
 
 export async function listMakersWithMachines(): Promise<MakerWithMachines[]> {
-  const rows = await sequelize.query<{ maker_id: number; maker: string; country: string | null; note: string | null; id: number; model: string; kind: MachineKind; year_from: number | null; year_to: number | null; parts: string }>(
-    `SELECT mk.id AS maker_id, mk.name AS maker, mk.country, mk.note, ma.id, ma.model, ma.kind, ma.year_from, ma.year_to,
+  const rows = await sequelize.query<{
+    maker_id: number;
+    maker: string;
+    country: string | null;
+    note: string | null;
+    id: number;
+    model: string;
+    kind: MachineKind;
+    year_from: number | null;
+    year_to: number | null;
+    parts: string;
+  }>(
+    `SELECT mk.id AS maker_id, mk.name AS maker, mk.country, mk.note, ma.id, ma.model, ma.kind, ma.year_from,
+      ma.year_to,
             (SELECT count(DISTINCT u.part_id) FROM part_usages u WHERE u.machine_id = ma.id) AS parts
      FROM makers mk JOIN machines ma ON ma.maker_id = mk.id ORDER BY mk.name, ma.year_from, ma.model`,
     { type: QueryTypes.SELECT },
   );
   const makers = new Map<number, MakerWithMachines>();
   for (const r of rows) {
-    if (!makers.has(r.maker_id)) makers.set(r.maker_id, { id: r.maker_id, name: r.maker, country: r.country, note: r.note, machines: [] });
-    makers.get(r.maker_id)!.machines.push({ id: r.id, model: r.model, kind: r.kind, years: years(r.year_from, r.year_to), partCount: Number(r.parts) });
+    if (!makers.has(r.maker_id))
+      makers.set(r.maker_id, { id: r.maker_id, name: r.maker, country: r.country, note: r.note, machines: [] });
+    makers.get(r.maker_id)!.machines.push({
+      id: r.id,
+      model: r.model,
+      kind: r.kind,
+      years: years(r.year_from, r.year_to),
+      partCount: Number(r.parts),
+    });
   }
   return [...makers.values()];
 }
@@ -60,15 +79,38 @@ export interface MachineDetail {
 
 /** A machine and its parts by assembly, each with its best approved standard equivalent. */
 export async function getMachine(id: number): Promise<MachineDetail> {
-  const [machine] = await sequelize.query<{ id: number; maker: string; model: string; kind: MachineKind; year_from: number | null; year_to: number | null; serial_note: string | null; serial_prefix: string | null }>(
-    "SELECT ma.id, mk.name AS maker, ma.model, ma.kind, ma.year_from, ma.year_to, ma.serial_note, ma.serial_prefix FROM machines ma JOIN makers mk ON mk.id = ma.maker_id WHERE ma.id = :id",
+  const [machine] = await sequelize.query<{
+    id: number;
+    maker: string;
+    model: string;
+    kind: MachineKind;
+    year_from: number | null;
+    year_to: number | null;
+    serial_note: string | null;
+    serial_prefix: string | null;
+  }>(
+    "SELECT ma.id, mk.name AS maker, ma.model, ma.kind, ma.year_from, " +
+      "ma.year_to, ma.serial_note, ma.serial_prefix FROM machines ma JOIN " +
+      "makers mk ON mk.id = ma.maker_id WHERE ma.id = :id",
     { replacements: { id }, type: QueryTypes.SELECT },
   );
   if (!machine) throw new AppError("not_found", "No machine with that id.");
-  const parts = await sequelize.query<{ part_id: number; number: string; description: string; category: PartCategory; assembly: string; quantity: number; serial_from: number | null; serial_to: number | null; serial_note: string | null }>(
-    `SELECT p.id AS part_id, p.number, p.description, p.category, a.name AS assembly, u.quantity, u.serial_from, u.serial_to, u.serial_note
+  const parts = await sequelize.query<{
+    part_id: number;
+    number: string;
+    description: string;
+    category: PartCategory;
+    assembly: string;
+    quantity: number;
+    serial_from: number | null;
+    serial_to: number | null;
+    serial_note: string | null;
+  }>(
+    `SELECT p.id AS part_id, p.number, p.description, p.category, a.name AS assembly, u.quantity, u.serial_from,
+      u.serial_to, u.serial_note
      FROM part_usages u JOIN original_parts p ON p.id = u.part_id JOIN assemblies a ON a.id = u.assembly_id
-     WHERE u.machine_id = :id ORDER BY a.name, coalesce(u.position, p.description), u.serial_from NULLS FIRST, p.number`,
+     WHERE u.machine_id = :id ORDER BY a.name, coalesce(u.position, p.description), u.serial_from NULLS FIRST,
+       p.number`,
     { replacements: { id }, type: QueryTypes.SELECT },
   );
   const best = await bestCrosses(parts.map((p) => p.part_id));
@@ -104,10 +146,14 @@ export async function getMachine(id: number): Promise<MachineDetail> {
 
 /** Every maker by name, for a filter. */
 export async function makerChoices(): Promise<Array<{ id: number; name: string }>> {
-  return sequelize.query<{ id: number; name: string }>("SELECT id, name FROM makers ORDER BY name", { type: QueryTypes.SELECT });
+  return sequelize.query<{ id: number; name: string }>("SELECT id, name FROM makers ORDER BY name", {
+    type: QueryTypes.SELECT,
+  });
 }
 
 /** Every machine as one line ("Corvane Tractor Works Model 30 (1946–1952)"), for choosing one in a form. */
 export async function machineChoices(): Promise<Array<{ id: number; label: string }>> {
-  return (await listMakersWithMachines()).flatMap((m) => m.machines.map((ma) => ({ id: ma.id, label: `${m.name} ${ma.model}${ma.years ? ` (${ma.years})` : ""}` })));
+  return (await listMakersWithMachines()).flatMap((m) =>
+    m.machines.map((ma) => ({ id: ma.id, label: `${m.name} ${ma.model}${ma.years ? ` (${ma.years})` : ""}` })),
+  );
 }

@@ -27,15 +27,21 @@ export function resolveChain(startId: number, edges: SupersessionEdge[]): ChainR
   const forward = new Map<number, SupersessionEdge[]>();
   const backward = new Map<number, SupersessionEdge[]>();
   for (const edge of edges) {
-    forward.set(edge.oldPartId, [...(forward.get(edge.oldPartId) ?? []), edge].sort((a, b) => a.newPartId - b.newPartId));
-    backward.set(edge.newPartId, [...(backward.get(edge.newPartId) ?? []), edge].sort((a, b) => a.oldPartId - b.oldPartId));
+    forward.set(
+      edge.oldPartId,
+      [...(forward.get(edge.oldPartId) ?? []), edge].sort((a, b) => a.newPartId - b.newPartId),
+    );
+    backward.set(
+      edge.newPartId,
+      [...(backward.get(edge.newPartId) ?? []), edge].sort((a, b) => a.oldPartId - b.oldPartId),
+    );
   }
   const seen = new Set([startId]);
   const walked: SupersessionEdge[] = [];
   let loop = false;
 
   const after: number[] = [];
-  for (let current = startId; ; ) {
+  for (let current = startId; ;) {
     const next = forward.get(current)?.[0];
     if (!next) break;
     if (seen.has(next.newPartId)) {
@@ -49,7 +55,7 @@ export function resolveChain(startId: number, edges: SupersessionEdge[]): ChainR
   }
 
   const before: number[] = [];
-  for (let current = startId; ; ) {
+  for (let current = startId; ;) {
     const previous = backward.get(current)?.[0];
     if (!previous) break;
     if (seen.has(previous.oldPartId)) {

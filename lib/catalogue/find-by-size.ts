@@ -16,12 +16,27 @@ export interface SizedPart {
  * Original parts whose documented inner and outer sizes lie within the window of a measurement, so a part with no
  * legible number can still be named. The window is three tolerances each way, as in the standard-size matching.
  */
-export async function findPartsBySize(input: { category: PartCategory; innerMm: number; outerMm: number; toleranceMm: number; limit?: number }): Promise<SizedPart[]> {
+export async function findPartsBySize(input: {
+  category: PartCategory;
+  innerMm: number;
+  outerMm: number;
+  toleranceMm: number;
+  limit?: number;
+}): Promise<SizedPart[]> {
   const w = input.toleranceMm * 3;
-  const rows = await sequelize.query<{ id: number; maker: string; number: string; description: string; inner_mm: number; outer_mm: number; width_mm: number | null }>(
+  const rows = await sequelize.query<{
+    id: number;
+    maker: string;
+    number: string;
+    description: string;
+    inner_mm: number;
+    outer_mm: number;
+    width_mm: number | null;
+  }>(
     `SELECT p.id, m.name AS maker, p.number, p.description, p.inner_mm, p.outer_mm, p.width_mm
      FROM original_parts p JOIN makers m ON m.id = p.maker_id
-     WHERE p.category = :category AND p.inner_mm BETWEEN :innerLo AND :innerHi AND p.outer_mm BETWEEN :outerLo AND :outerHi
+     WHERE p.category = :category AND p.inner_mm BETWEEN :innerLo AND :innerHi AND p.outer_mm BETWEEN :outerLo AND
+       :outerHi
      ORDER BY abs(p.inner_mm - :inner) + abs(p.outer_mm - :outer), p.number
      LIMIT :limit`,
     {
@@ -38,5 +53,13 @@ export async function findPartsBySize(input: { category: PartCategory; innerMm: 
       type: QueryTypes.SELECT,
     },
   );
-  return rows.map((r) => ({ id: r.id, maker: r.maker, number: r.number, description: r.description, innerMm: r.inner_mm, outerMm: r.outer_mm, widthMm: r.width_mm }));
+  return rows.map((r) => ({
+    id: r.id,
+    maker: r.maker,
+    number: r.number,
+    description: r.description,
+    innerMm: r.inner_mm,
+    outerMm: r.outer_mm,
+    widthMm: r.width_mm,
+  }));
 }

@@ -22,7 +22,13 @@ export interface LookupResult {
   /** How many answers the shared ranking has for the part (its own crosses and those of its chain). */
   crossCount: number;
   /** The first answer of the shared ranking: what to ask for at the counter, without opening the part. */
-  best: { label: string; standardPartId: number | null; fit: Fit; confirmations: number; viaNumber: string | null } | null;
+  best: {
+    label: string;
+    standardPartId: number | null;
+    fit: Fit;
+    confirmations: number;
+    viaNumber: string | null;
+  } | null;
   /** The part's documented sizes in millimetres, where the catalogue has them. */
   sizes: { innerMm: number | null; outerMm: number | null; widthMm: number | null; lengthMm: number | null };
 }
@@ -42,7 +48,8 @@ interface PartRow {
   length_mm: number | null;
 }
 
-const COLUMNS = `p.id, p.maker_id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description, p.category,
+const COLUMNS = `p.id, p.maker_id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description,
+  p.category,
   p.inner_mm, p.outer_mm, p.width_mm, p.length_mm`;
 
 let prefixCache: { at: number; prefixes: Array<{ makerId: number; prefix: string }> } | undefined;
@@ -50,8 +57,14 @@ let prefixCache: { at: number; prefixes: Array<{ makerId: number; prefix: string
 /** Every maker's prefixes; makers change rarely, so the list is kept for a minute. */
 async function makerPrefixes(): Promise<Array<{ makerId: number; prefix: string }>> {
   if (prefixCache && Date.now() - prefixCache.at < 60_000) return prefixCache.prefixes;
-  const rows = await sequelize.query<{ id: number; prefix: string }>("SELECT id, unnest(prefixes) AS prefix FROM makers", { type: QueryTypes.SELECT });
-  prefixCache = { at: Date.now(), prefixes: rows.map((r) => ({ makerId: r.id, prefix: normaliseNumber(r.prefix) })).filter((r) => r.prefix !== "") };
+  const rows = await sequelize.query<{ id: number; prefix: string }>(
+    "SELECT id, unnest(prefixes) AS prefix FROM makers",
+    { type: QueryTypes.SELECT },
+  );
+  prefixCache = {
+    at: Date.now(),
+    prefixes: rows.map((r) => ({ makerId: r.id, prefix: normaliseNumber(r.prefix) })).filter((r) => r.prefix !== ""),
+  };
   return prefixCache.prefixes;
 }
 
@@ -64,8 +77,18 @@ const WHY: Record<MatchedBy, string> = {
   words: "Found by the words of its description, assembly, machine or maker",
 };
 
-/** The score bands keep the kinds apart: every exact hit above every prefix hit, above every similar number, above words. */
-const BAND: Record<MatchedBy, number> = { exact: 1, normalised: 0.98, misread: 0.9, prefix: 0.8, similar: 0.7, words: 0.5 };
+/**
+ * The score bands keep the kinds apart: every exact hit above every prefix hit, above every similar number, above
+ * words.
+ */
+const BAND: Record<MatchedBy, number> = {
+  exact: 1,
+  normalised: 0.98,
+  misread: 0.9,
+  prefix: 0.8,
+  similar: 0.7,
+  words: 0.5,
+};
 
 /** Words of three letters or more make a query worth a full-text search (a number like "HM 210 007" has none). */
 const WORDY = /[A-Za-z]{3,}/;
@@ -85,12 +108,17 @@ function wordsQuery(query: string): string | null {
  * PostgreSQL full-text search. When the typed number
  * starts with a maker's prefix, that maker's numbers come before others'. `makerId` keeps the results to one maker.
  */
-export async function lookUpParts(query: string, options: { limit: number; makerId?: number | null }): Promise<LookupResult[]> {
+export async function lookUpParts(
+  query: string,
+  options: { limit: number; makerId?: number | null },
+): Promise<LookupResult[]> {
   const typed = normaliseNumber(query);
   if (typed === "") return [];
   const makerId = options.makerId ?? null;
   const prefixes = await makerPrefixes();
-  const prefixHit = prefixes.filter((p) => typed.startsWith(p.prefix) && /\d/.test(typed.slice(p.prefix.length))).sort((a, b) => b.prefix.length - a.prefix.length);
+  const prefixHit = prefixes
+    .filter((p) => typed.startsWith(p.prefix) && /\d/.test(typed.slice(p.prefix.length)))
+    .sort((a, b) => b.prefix.length - a.prefix.length);
   const stripped = prefixHit.length > 0 ? typed.slice(prefixHit[0].prefix.length) : typed;
   const namedMakers = new Set(prefixHit.filter((p) => p.prefix === prefixHit[0].prefix).map((p) => p.makerId));
   const forms = [...new Set([typed, stripped])];
@@ -108,7 +136,17 @@ export async function lookUpParts(query: string, options: { limit: number; maker
        WHERE (p.number_normalized IN (:forms) OR p.number_key IN (:keys)
               OR (:prefixes AND (p.number_normalized LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter}
        ORDER BY length(p.number_normalized), p.number_normalized LIMIT 200`,
-      { replacements: { forms, keys, prefixes: stripped.length >= 2, like: `${stripped}%`, likeKey: `${key}%`, makerId }, type: QueryTypes.SELECT },
+      {
+        replacements: {
+          forms,
+          keys,
+          prefixes: stripped.length >= 2,
+          like: `${stripped}%`,
+          likeKey: `${key}%`,
+          makerId,
+        },
+        type: QueryTypes.SELECT,
+      },
     ),
     tsquery
       ? sequelize.query<PartRow & { rank: number }>(
@@ -124,12 +162,17 @@ export async function lookUpParts(query: string, options: { limit: number; maker
     if (found.has(row.id)) return;
     // A maker named by the typed prefix goes first within its band.
     const named = namedMakers.size === 0 || namedMakers.has(row.maker_id) ? 0.01 : 0;
-    found.set(row.id, { row, matchedBy, score: Math.round((BAND[matchedBy] - 0.05 + Math.max(0, Math.min(within, 1)) * 0.04 + named) * 1000) / 1000 });
+    found.set(row.id, {
+      row,
+      matchedBy,
+      score: Math.round((BAND[matchedBy] - 0.05 + Math.max(0, Math.min(within, 1)) * 0.04 + named) * 1000) / 1000,
+    });
   };
   const asTyped = query.trim().toUpperCase();
   const isSame = (row: PartRow) => forms.includes(row.number_normalized) || keys.includes(row.number_key);
   for (const row of numberRows.filter(isSame)) {
-    const matchedBy: MatchedBy = row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalized) ? "normalised" : "misread";
+    const matchedBy: MatchedBy =
+      row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalized) ? "normalised" : "misread";
     add(row, matchedBy, 1);
   }
   const hit = found.size > 0;
@@ -142,27 +185,45 @@ export async function lookUpParts(query: string, options: { limit: number; maker
     const half = Math.floor(key.length / 2);
     const near = await sequelize.query<PartRow & { distance: number }>(
       `SELECT ${COLUMNS}, levenshtein(p.number_key, :key) AS distance ${from}
-       WHERE (p.number_key LIKE :head OR reverse(p.number_key) LIKE :tail) AND levenshtein(p.number_key, :key) BETWEEN 1 AND :allowed ${makerFilter}
+       WHERE (p.number_key LIKE :head OR reverse(p.number_key) LIKE :tail) AND levenshtein(p.number_key, :key) BETWEEN
+         1 AND :allowed ${makerFilter}
        ORDER BY levenshtein(p.number_key, :key), p.number_key LIMIT 60`,
       {
-        replacements: { key, head: `${key.slice(0, half)}%`, tail: `${[...key.slice(half)].reverse().join("")}%`, allowed: key.length >= 8 ? 2 : 1, makerId },
+        replacements: {
+          key,
+          head: `${key.slice(0, half)}%`,
+          tail: `${[...key.slice(half)].reverse().join("")}%`,
+          allowed: key.length >= 8 ? 2 : 1,
+          makerId,
+        },
         type: QueryTypes.SELECT,
       },
     );
     for (const row of near) add(row, "similar", 1 - row.distance / key.length);
   } else if (!hit && found.size < options.limit && key.length >= 3) {
     // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
-    const nearRows = await sequelize.query<PartRow>(`SELECT ${COLUMNS} ${from} WHERE p.number_key % :key ${makerFilter} ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`, {
-      replacements: { key, makerId },
-      type: QueryTypes.SELECT,
+    const nearRows = await sequelize.query<PartRow>(
+      `SELECT ${COLUMNS} ${from} WHERE p.number_key % :key ${makerFilter} ` +
+        `ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
+      {
+        replacements: { key, makerId },
+        type: QueryTypes.SELECT,
+      },
+    );
+    const fuse = new Fuse(nearRows, {
+      keys: ["number_key"],
+      includeScore: true,
+      threshold: 0.45,
+      ignoreLocation: true,
     });
-    const fuse = new Fuse(nearRows, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
     for (const hit of fuse.search(key)) add(hit.item, "similar", 1 - (hit.score ?? 1));
   }
   const topRank = Math.max(...wordRows.map((r) => r.rank), 0) || 1;
   for (const row of wordRows) add(row, "words", row.rank / topRank);
 
-  const ranked = [...found.values()].sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number)).slice(0, options.limit);
+  const ranked = [...found.values()]
+    .sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number))
+    .slice(0, options.limit);
   if (ranked.length === 0) return [];
   const ids = ranked.map((r) => r.row.id);
   const [latest, crosses] = await Promise.all([latestNumbers(ids), rankCrosses(ids)]);
@@ -180,7 +241,15 @@ export async function lookUpParts(query: string, options: { limit: number; maker
       score,
       latestNumber: latest.get(row.id) ?? row.number,
       crossCount: crosses.get(row.id)?.length ?? 0,
-      best: cross ? { label: crossLabel(cross), standardPartId: cross.standardPartId, fit: cross.fit, confirmations: cross.confirmations, viaNumber: cross.viaNumber } : null,
+      best: cross
+        ? {
+            label: crossLabel(cross),
+            standardPartId: cross.standardPartId,
+            fit: cross.fit,
+            confirmations: cross.confirmations,
+            viaNumber: cross.viaNumber,
+          }
+        : null,
       sizes: { innerMm: row.inner_mm, outerMm: row.outer_mm, widthMm: row.width_mm, lengthMm: row.length_mm },
     };
   });

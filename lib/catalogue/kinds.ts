@@ -1,7 +1,25 @@
-export const PART_CATEGORIES = ["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other"] as const;
+export const PART_CATEGORIES = [
+  "bearing",
+  "lip_seal",
+  "felt_seal",
+  "v_belt",
+  "key",
+  "gasket",
+  "plug",
+  "other",
+] as const;
 export type PartCategory = (typeof PART_CATEGORIES)[number];
 
-export const STANDARD_KINDS = ["bearing", "lip_seal", "v_belt", "key", "plug", "felt", "sleeve", "gasket_sheet"] as const;
+export const STANDARD_KINDS = [
+  "bearing",
+  "lip_seal",
+  "v_belt",
+  "key",
+  "plug",
+  "felt",
+  "sleeve",
+  "gasket_sheet",
+] as const;
 export type StandardKind = (typeof STANDARD_KINDS)[number];
 
 /** Best first: the order crosses are ranked in. */

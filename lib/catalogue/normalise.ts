@@ -3,12 +3,18 @@
  * sometimes with the maker's prefix in front. The normalised form keeps letters and digits only.
  */
 export function normaliseNumber(input: string): string {
-  return input.normalize("NFKC").toUpperCase().replace(/[^A-Z0-9]/g, "");
+  return input
+    .normalize("NFKC")
+    .toUpperCase()
+    .replace(/[^A-Z0-9]/g, "");
 }
 
 /** The number without a leading maker prefix (`CV-`, `HM`), when what is left still has a digit in it. */
 export function stripPrefix(normalised: string, prefixes: readonly string[]): string {
-  const ordered = prefixes.map(normaliseNumber).filter(Boolean).sort((a, b) => b.length - a.length);
+  const ordered = prefixes
+    .map(normaliseNumber)
+    .filter(Boolean)
+    .sort((a, b) => b.length - a.length);
   for (const prefix of ordered) {
     const rest = normalised.slice(prefix.length);
     if (normalised.startsWith(prefix) && /\d/.test(rest)) return rest;

@@ -21,7 +21,15 @@ export interface RankedCross {
   viaNumber: string | null;
   fit: Fit;
   standardPartId: number | null;
-  standard: { kind: StandardKind; designation: string; innerMm: number | null; outerMm: number | null; widthMm: number | null; lengthMm: number | null; attributes: Record<string, unknown> } | null;
+  standard: {
+    kind: StandardKind;
+    designation: string;
+    innerMm: number | null;
+    outerMm: number | null;
+    widthMm: number | null;
+    lengthMm: number | null;
+    attributes: Record<string, unknown>;
+  } | null;
   repairMethod: string | null;
   notes: string | null;
   origin: string;
@@ -53,7 +61,8 @@ export interface CrossRow {
 }
 
 const fitRank = (fit: Fit) => FITS.indexOf(fit);
-const sameThing = (row: CrossRow) => (row.standard_part_id !== null ? `s${row.standard_part_id}` : `r${(row.repair_method ?? "").trim().toLowerCase()}`);
+const sameThing = (row: CrossRow) =>
+  row.standard_part_id !== null ? `s${row.standard_part_id}` : `r${(row.repair_method ?? "").trim().toLowerCase()}`;
 
 /**
  * Orders one part's crosses: best fit first; of one fit, a standard part one can order before a repair method; then
@@ -66,14 +75,31 @@ export function rankCrossRows(startId: number, rows: CrossRow[]): RankedCross[] 
   for (const row of rows) groups.set(sameThing(row), [...(groups.get(sameThing(row)) ?? []), row]);
   const merged: RankedCross[] = [];
   for (const group of groups.values()) {
-    const pick = [...group].sort((a, b) => Number(b.part_id === startId) - Number(a.part_id === startId) || fitRank(a.fit) - fitRank(b.fit) || Number(b.confirmations) - Number(a.confirmations) || a.id - b.id)[0];
+    const pick = [...group].sort(
+      (a, b) =>
+        Number(b.part_id === startId) - Number(a.part_id === startId) ||
+        fitRank(a.fit) - fitRank(b.fit) ||
+        Number(b.confirmations) - Number(a.confirmations) ||
+        a.id - b.id,
+    )[0];
     merged.push({
       id: pick.id,
       partId: pick.part_id,
       viaNumber: pick.part_id === startId ? null : pick.number,
       fit: pick.fit,
       standardPartId: pick.standard_part_id,
-      standard: pick.kind && pick.designation ? { kind: pick.kind, designation: pick.designation, innerMm: pick.inner_mm, outerMm: pick.outer_mm, widthMm: pick.width_mm, lengthMm: pick.length_mm, attributes: pick.attributes ?? {} } : null,
+      standard:
+        pick.kind && pick.designation
+          ? {
+              kind: pick.kind,
+              designation: pick.designation,
+              innerMm: pick.inner_mm,
+              outerMm: pick.outer_mm,
+              widthMm: pick.width_mm,
+              lengthMm: pick.length_mm,
+              attributes: pick.attributes ?? {},
+            }
+          : null,
       repairMethod: pick.repair_method,
       notes: pick.notes,
       origin: pick.origin,
@@ -94,18 +120,23 @@ export function rankCrossRows(startId: number, rows: CrossRow[]): RankedCross[] 
 }
 
 /** Every part's ranked crosses, for many parts in one query. Parts with none get an empty list. */
-export async function rankCrosses(partIds: readonly number[], options: { photos?: boolean } = {}): Promise<Map<number, RankedCross[]>> {
+export async function rankCrosses(
+  partIds: readonly number[],
+  options: { photos?: boolean } = {},
+): Promise<Map<number, RankedCross[]>> {
   const ids = [...new Set(partIds)];
   const ranked = new Map<number, RankedCross[]>(ids.map((id) => [id, []]));
   if (ids.length === 0) return ranked;
   const photos = options.photos
-    ? `, (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM submissions sub JOIN submission_photos ph ON ph.submission_id = sub.id
+    ? `, (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM submissions sub JOIN submission_photos ph ON
+      ph.submission_id = sub.id
           WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos`
     : "";
   const rows = await sequelize.query<CrossRow>(
     `${walk("fits")},
      sources AS (SELECT DISTINCT start_id, part_id FROM walk)
-     SELECT src.start_id, c.id, c.original_part_id AS part_id, p.number, c.fit, c.standard_part_id, c.repair_method, c.notes, c.origin,
+     SELECT src.start_id, c.id, c.original_part_id AS part_id, p.number, c.fit, c.standard_part_id, c.repair_method,
+       c.notes, c.origin,
             (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations${photos},
             s.kind, s.designation, s.inner_mm, s.outer_mm, s.width_mm, s.length_mm, s.attributes
      FROM sources src
@@ -126,5 +157,8 @@ export async function bestCrosses(partIds: readonly number[]): Promise<Map<numbe
   return new Map([...ranked].map(([id, list]) => [id, list[0] ?? null]));
 }
 
-/** What to ask for at the counter: the standard designation, or the repair method where the answer is work, not a part. */
-export const crossLabel = (cross: Pick<RankedCross, "standard" | "repairMethod">): string => cross.standard?.designation ?? cross.repairMethod ?? "";
+/**
+ * What to ask for at the counter: the standard designation, or the repair method where the answer is work, not a part.
+ */
+export const crossLabel = (cross: Pick<RankedCross, "standard" | "repairMethod">): string =>
+  cross.standard?.designation ?? cross.repairMethod ?? "";

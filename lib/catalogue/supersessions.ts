@@ -17,7 +17,10 @@ export function walk(direction: "newer" | "older" | "both" | "fits"): string {
     newer: "s.old_part_id = w.part_id",
     older: "s.new_part_id = w.part_id",
     both: "s.old_part_id = w.part_id OR s.new_part_id = w.part_id",
-    fits: "(s.old_part_id = w.part_id AND s.kind IN ('interchangeable', 'one_way')) OR (s.new_part_id = w.part_id AND s.kind = 'interchangeable')",
+    fits:
+      "(s.old_part_id = w.part_id AND s.kind IN ('interchangeable', " +
+      "'one_way')) OR (s.new_part_id = w.part_id AND s.kind = " +
+      "'interchangeable')",
   }[direction];
   return `WITH RECURSIVE walk(start_id, part_id, depth, path) AS (
        SELECT id, id, 0, ARRAY[id] FROM original_parts WHERE id IN (:ids)
@@ -46,13 +49,24 @@ export async function latestNumbers(ids: number[]): Promise<Map<number, string>>
 
 /** Every supersession record connected to a part, either way, as far as the chain goes (loop-safe). */
 export async function loadChain(partId: number): Promise<ChainResult> {
-  const rows = await sequelize.query<{ old_part_id: number; new_part_id: number; kind: SupersessionKind; note: string | null }>(
+  const rows = await sequelize.query<{
+    old_part_id: number;
+    new_part_id: number;
+    kind: SupersessionKind;
+    note: string | null;
+  }>(
     `${walk("both")}
      SELECT DISTINCT s.old_part_id, s.new_part_id, s.kind, s.note
-     FROM supersessions s WHERE s.old_part_id IN (SELECT part_id FROM walk) OR s.new_part_id IN (SELECT part_id FROM walk)`,
+     FROM supersessions s WHERE s.old_part_id IN (SELECT part_id FROM walk) OR s.new_part_id IN (SELECT part_id FROM
+       walk)`,
     { replacements: { ids: [partId] }, type: QueryTypes.SELECT },
   );
-  const edges: SupersessionEdge[] = rows.map((r) => ({ oldPartId: r.old_part_id, newPartId: r.new_part_id, kind: r.kind, note: r.note }));
+  const edges: SupersessionEdge[] = rows.map((r) => ({
+    oldPartId: r.old_part_id,
+    newPartId: r.new_part_id,
+    kind: r.kind,
+    note: r.note,
+  }));
   return resolveChain(partId, edges);
 }
 

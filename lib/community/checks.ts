@@ -23,9 +23,19 @@ export interface CheckedStandard extends StandardDims {
 // How far an entered size may sit from the engine's before the two are said to disagree.
 const AGREE_MM = 0.05;
 
-const DIM_WORDS: Record<keyof StandardDims, string> = { innerMm: "a bore", outerMm: "an outside diameter", widthMm: "a width", lengthMm: "a length" };
+const DIM_WORDS: Record<keyof StandardDims, string> = {
+  innerMm: "a bore",
+  outerMm: "an outside diameter",
+  widthMm: "a width",
+  lengthMm: "a length",
+};
 
-function compareEntered(designation: string, engine: Partial<StandardDims>, entered: Partial<StandardDims>, checks: ProposalCheck[]): void {
+function compareEntered(
+  designation: string,
+  engine: Partial<StandardDims>,
+  entered: Partial<StandardDims>,
+  checks: ProposalCheck[],
+): void {
   for (const key of Object.keys(DIM_WORDS) as Array<keyof StandardDims>) {
     const e = engine[key];
     const given = entered[key];
@@ -34,7 +44,9 @@ function compareEntered(designation: string, engine: Partial<StandardDims>, ente
       checks.push({
         level: "warning",
         field: `standard.${key}`,
-        message: `${designation} has ${DIM_WORDS[key]} of ${round(e, 2)} mm, but ${round(given, 2)} mm was entered. One of them is wrong.`,
+        message:
+          `${designation} has ${DIM_WORDS[key]} of ${round(e, 2)} mm, but ` +
+          `${round(given, 2)} mm was entered. One of them is wrong.`,
       });
     }
   }
@@ -44,7 +56,9 @@ function compareEntered(designation: string, engine: Partial<StandardDims>, ente
  * Shaft × bore × width from a seal's designation: `35 × 52 × 7`, `35x52x7 mm`, `1-1/2 × 2.374 × 1/2 in`. Without a
  * unit, three small numbers are inches. Null when it is not three sizes.
  */
-export function readSealSize(designation: string): { innerMm: number; outerMm: number; widthMm: number; inch: boolean } | null {
+export function readSealSize(
+  designation: string,
+): { innerMm: number; outerMm: number; widthMm: number; inch: boolean } | null {
   const unit = /\s*(mm|in\.?|inch(?:es)?|")\s*$/i.exec(designation);
   const body = unit ? designation.slice(0, unit.index) : designation;
   const parts = body.trim().split(/\s*[x×*]\s*/i);
@@ -65,7 +79,12 @@ export function readSealSize(designation: string): { innerMm: number; outerMm: n
  * Nothing here refuses a proposal: the checks are shown to the member and to the moderator who decides.
  */
 export function checkStandard(input: NewStandardInput): CheckedStandard {
-  const entered: StandardDims = { innerMm: input.innerMm ?? null, outerMm: input.outerMm ?? null, widthMm: input.widthMm ?? null, lengthMm: input.lengthMm ?? null };
+  const entered: StandardDims = {
+    innerMm: input.innerMm ?? null,
+    outerMm: input.outerMm ?? null,
+    widthMm: input.widthMm ?? null,
+    lengthMm: input.lengthMm ?? null,
+  };
   const checks: ProposalCheck[] = [];
   const designation = input.designation.trim().replace(/\s+/g, " ");
 
@@ -76,13 +95,26 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
       checks.push({
         level: "ok",
         field: "standard.designation",
-        message: `${decoded.designation}: ${decoded.seriesName}, ${engine.innerMm} × ${engine.outerMm} × ${engine.widthMm} mm, ${decoded.closures.text}.`,
+        message:
+          `${decoded.designation}: ${decoded.seriesName}, ${engine.innerMm} × ` +
+          `${engine.outerMm} × ${engine.widthMm} mm, ${decoded.closures.text}.`,
       });
       compareEntered(decoded.designation, engine, entered, checks);
-      return { kind: "bearing", designation: decoded.designation, ...engine, lengthMm: null, attributes: { closures: decoded.closures.text }, checks };
+      return {
+        kind: "bearing",
+        designation: decoded.designation,
+        ...engine,
+        lengthMm: null,
+        attributes: { closures: decoded.closures.text },
+        checks,
+      };
     } catch (error) {
       if (!(error instanceof StandardsInputError)) throw error;
-      checks.push({ level: "warning", field: "standard.designation", message: `${error.message} The sizes entered are kept as given.` });
+      checks.push({
+        level: "warning",
+        field: "standard.designation",
+        message: `${error.message} The sizes entered are kept as given.`,
+      });
       return { kind: "bearing", designation, ...entered, attributes: {}, checks };
     }
   }
@@ -91,11 +123,16 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
     try {
       const belt = decodeBelt(designation);
       const toMmLen = (v: number) => (belt.unit === "in" ? round(v * MM_PER_INCH, 1) : v);
-      const engine = { widthMm: belt.unit === "in" ? round(belt.topWidth * MM_PER_INCH, 2) : belt.topWidth, lengthMm: toMmLen(belt.pitchLength) };
+      const engine = {
+        widthMm: belt.unit === "in" ? round(belt.topWidth * MM_PER_INCH, 2) : belt.topWidth,
+        lengthMm: toMmLen(belt.pitchLength),
+      };
       checks.push({
         level: "ok",
         field: "standard.designation",
-        message: `${belt.designation}: section ${belt.section}, pitch length ${engine.lengthMm} mm, top width ${engine.widthMm} mm.`,
+        message:
+          `${belt.designation}: section ${belt.section}, pitch length ` +
+          `${engine.lengthMm} mm, top width ${engine.widthMm} mm.`,
       });
       // A belt's length may be given as inside, pitch or outside; only a length that matches none of them disagrees.
       const lengths = [belt.insideLength, belt.pitchLength, belt.outsideLength].map(toMmLen);
@@ -103,14 +140,29 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
         checks.push({
           level: "warning",
           field: "standard.lengthMm",
-          message: `${belt.designation} is ${lengths[0]} mm inside, ${lengths[1]} mm pitch and ${lengths[2]} mm outside; ${entered.lengthMm} mm was entered. One of them is wrong.`,
+          message:
+            `${belt.designation} is ${lengths[0]} mm inside, ${lengths[1]} mm pitch ` +
+            `and ${lengths[2]} mm outside; ${entered.lengthMm} mm was entered. One ` +
+            `of them is wrong.`,
         });
       }
       compareEntered(belt.designation, { widthMm: engine.widthMm }, { widthMm: entered.widthMm }, checks);
-      return { kind: "v_belt", designation: belt.designation, innerMm: null, outerMm: null, ...engine, attributes: { section: belt.section }, checks };
+      return {
+        kind: "v_belt",
+        designation: belt.designation,
+        innerMm: null,
+        outerMm: null,
+        ...engine,
+        attributes: { section: belt.section },
+        checks,
+      };
     } catch (error) {
       if (!(error instanceof StandardsInputError)) throw error;
-      checks.push({ level: "warning", field: "standard.designation", message: `${error.message} The sizes entered are kept as given.` });
+      checks.push({
+        level: "warning",
+        field: "standard.designation",
+        message: `${error.message} The sizes entered are kept as given.`,
+      });
       return { kind: "v_belt", designation, ...entered, attributes: {}, checks };
     }
   }
@@ -122,19 +174,39 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
       const { inch, ...read } = size;
       compareEntered(`${designation}`, read, entered, checks);
       Object.assign(dims, read);
-      const listed = (inch ? INCH_SEALS.map(([a, b, c]) => [a * MM_PER_INCH, b * MM_PER_INCH, c * MM_PER_INCH]) : METRIC_SEALS).some(
-        ([a, b, c]) => Math.abs(a - read.innerMm) < 0.1 && Math.abs(b - read.outerMm) < 0.1 && Math.abs(c - read.widthMm) < 0.1,
+      const listed = (
+        inch ? INCH_SEALS.map(([a, b, c]) => [a * MM_PER_INCH, b * MM_PER_INCH, c * MM_PER_INCH]) : METRIC_SEALS
+      ).some(
+        ([a, b, c]) =>
+          Math.abs(a - read.innerMm) < 0.1 && Math.abs(b - read.outerMm) < 0.1 && Math.abs(c - read.widthMm) < 0.1,
       );
-      const sizes = `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm`;
+      const sizes =
+        `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × ` + `width ${round(read.widthMm, 2)} mm`;
       checks.push(
         listed
           ? { level: "ok", field: "standard.designation", message: `${sizes} is a listed standard seal size.` }
           : inch
-            ? { level: "ok", field: "standard.designation", message: `${sizes}: an inch seal. Inch seals are made for far more bores than our table of common sizes holds; order by these three sizes.` }
-            : { level: "warning", field: "standard.designation", message: `${sizes} is not in our table of common seal sizes; check that it can be bought.` },
+            ? {
+                level: "ok",
+                field: "standard.designation",
+                message:
+                  `${sizes}: an inch seal. Inch seals are made for far more bores than ` +
+                  `our table of common sizes holds; order by these three sizes.`,
+              }
+            : {
+                level: "warning",
+                field: "standard.designation",
+                message: `${sizes} is not in our table of common seal sizes; check that it can be bought.`,
+              },
       );
     } else if (entered.innerMm == null || entered.outerMm == null || entered.widthMm == null) {
-      checks.push({ level: "warning", field: "standard.designation", message: "A lip seal is ordered by shaft × bore × width: write them in the designation (35 × 52 × 7) or enter the three sizes." });
+      checks.push({
+        level: "warning",
+        field: "standard.designation",
+        message:
+          "A lip seal is ordered by shaft × bore × width: write them in the " +
+          "designation (35 × 52 × 7) or enter the three sizes.",
+      });
     }
     return { kind: "lip_seal", designation, ...dims, attributes: {}, checks };
   }
@@ -160,7 +232,13 @@ export function measurementDeviations(measurements: Measurement[], standard: Sta
     const nominal = standard[FOR_DIMENSION[m.dimension]];
     if (nominal == null) continue;
     const measuredMm = round(toMm(m.value, m.unit), 3);
-    out.push({ dimension: m.dimension, label: m.label || m.dimension, measuredMm, nominalMm: nominal, deviationMm: round(measuredMm - nominal, 3) });
+    out.push({
+      dimension: m.dimension,
+      label: m.label || m.dimension,
+      measuredMm,
+      nominalMm: nominal,
+      deviationMm: round(measuredMm - nominal, 3),
+    });
   }
   return out;
 }
@@ -168,7 +246,12 @@ export function measurementDeviations(measurements: Measurement[], standard: Sta
 /** The field of the check that compares a proposal with the worn part's own documented sizes. */
 export const PART_SIZES_FIELD = "original.sizes";
 
-const DIM_NAMES: Record<keyof StandardDims, string> = { innerMm: "bore or shaft", outerMm: "outside diameter", widthMm: "width", lengthMm: "length" };
+const DIM_NAMES: Record<keyof StandardDims, string> = {
+  innerMm: "bore or shaft",
+  outerMm: "outside diameter",
+  widthMm: "width",
+  lengthMm: "length",
+};
 
 /**
  * How far a standard part's size may sit from the worn part's documented one and still be the same size: wear and
@@ -182,14 +265,22 @@ function disagreementMm(key: keyof StandardDims, documentedMm: number, kind: Sta
 }
 
 const sizeText = (d: StandardDims) =>
-  [d.innerMm, d.outerMm, d.widthMm].filter((v): v is number => v != null).map((v) => round(v, 2)).join(" × ") + (d.lengthMm != null ? `${d.innerMm ?? d.outerMm ?? d.widthMm ? ", " : ""}length ${round(d.lengthMm, 0)}` : "") + " mm";
+  [d.innerMm, d.outerMm, d.widthMm]
+    .filter((v): v is number => v != null)
+    .map((v) => round(v, 2))
+    .join(" × ") +
+  (d.lengthMm != null ? `${(d.innerMm ?? d.outerMm ?? d.widthMm) ? ", " : ""}length ${round(d.lengthMm, 0)}` : "") +
+  " mm";
 
 /**
  * A proposed standard part whose sizes disagree with the worn part's documented ones (a 20 × 47 × 14 bearing for a
  * part documented as 15 × 35 × 11) is flagged before it is sent and at the top of its review. Null when they agree or
  * either side has no sizes to compare.
  */
-export function checkAgainstPart(part: StandardDims & { number: string }, standard: StandardDims & { designation: string; kind: StandardKind }): ProposalCheck | null {
+export function checkAgainstPart(
+  part: StandardDims & { number: string },
+  standard: StandardDims & { designation: string; kind: StandardKind },
+): ProposalCheck | null {
   const differences: string[] = [];
   for (const key of Object.keys(DIM_NAMES) as Array<keyof StandardDims>) {
     const documented = part[key];
@@ -204,6 +295,10 @@ export function checkAgainstPart(part: StandardDims & { number: string }, standa
   return {
     level: "warning",
     field: PART_SIZES_FIELD,
-    message: `${part.number} is documented as ${sizeText(part)}, but ${standard.designation} is ${sizeText(standard)}: ${differences.join(", ")}. Check the part and the designation: this is not the same size.`,
+    message:
+      `${part.number} is documented as ${sizeText(part)}, but ` +
+      `${standard.designation} is ${sizeText(standard)}: ` +
+      `${differences.join(", ")}. Check the part and the designation: this is ` +
+      `not the same size.`,
   };
 }

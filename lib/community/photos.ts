@@ -22,22 +22,45 @@ export interface UploadGrant {
  * Grants one photo upload: a row for the photo and a presigned PUT for exactly this type and size. The key is
  * 192 random bits, so nobody can reach a photo by guessing where it is stored.
  */
-export async function grantUpload(userId: string, file: { contentType: PhotoType; size: number; fileName?: string }): Promise<UploadGrant> {
+export async function grantUpload(
+  userId: string,
+  file: { contentType: PhotoType; size: number; fileName?: string },
+): Promise<UploadGrant> {
   const key = `photos/${randomBytes(24).toString("base64url")}.${EXTENSIONS[file.contentType]}`;
   const expiresInSeconds = 600;
   const photo = await sequelize.transaction(async (transaction) => {
     await takeTurn(transaction, `upload:${userId}`);
-    const recent = await SubmissionPhoto.count({ where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } }, transaction });
+    const recent = await SubmissionPhoto.count({
+      where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } },
+      transaction,
+    });
     if (recent >= env.UPLOADS_PER_HOUR) {
-      throw new AppError("rate_limited", `You have uploaded ${env.UPLOADS_PER_HOUR} photos in the last hour. Wait a while before adding more.`, { retryAfterSeconds: 3600 });
+      throw new AppError(
+        "rate_limited",
+        `You have uploaded ${env.UPLOADS_PER_HOUR} photos in the last hour. Wait a while before adding more.`,
+        { retryAfterSeconds: 3600 },
+      );
     }
     return SubmissionPhoto.create(
-      { userId, submissionId: null, objectKey: key, contentType: file.contentType, sizeBytes: file.size, fileName: file.fileName?.slice(0, 200) ?? null },
+      {
+        userId,
+        submissionId: null,
+        objectKey: key,
+        contentType: file.contentType,
+        sizeBytes: file.size,
+        fileName: file.fileName?.slice(0, 200) ?? null,
+      },
       { transaction },
     );
   });
   const uploadUrl = await presignPut(key, file.contentType, file.size, expiresInSeconds);
-  return { photoId: photo.id, uploadUrl, method: "PUT", headers: { "Content-Type": file.contentType }, expiresInSeconds };
+  return {
+    photoId: photo.id,
+    uploadUrl,
+    method: "PUT",
+    headers: { "Content-Type": file.contentType },
+    expiresInSeconds,
+  };
 }
 
 export interface PhotoCheck {
@@ -49,16 +72,23 @@ export interface PhotoCheck {
  * Which of the member's granted photos really are in storage, of an allowed type and size. A photo that is not
  * (the upload failed, or storage cannot be reached) is left out, and the caller says so; the text is saved anyway.
  */
-export async function checkUploadedPhotos(userId: string, photoIds: number[], submissionId: number | null): Promise<PhotoCheck> {
+export async function checkUploadedPhotos(
+  userId: string,
+  photoIds: number[],
+  submissionId: number | null,
+): Promise<PhotoCheck> {
   if (photoIds.length === 0) return { usable: [], missing: [] };
   const rows = await SubmissionPhoto.findAll({ where: { id: photoIds, userId } });
   const foreign = photoIds.filter((id) => !rows.some((r) => r.id === id));
-  if (foreign.length > 0) throw new AppError("validation_failed", "A photo in this proposal is not one you uploaded.", { field: "photoIds" });
+  if (foreign.length > 0)
+    throw new AppError("validation_failed", "A photo in this proposal is not one you uploaded.", { field: "photoIds" });
   const usable: number[] = [];
   const missing: number[] = [];
   for (const row of rows) {
     if (row.submissionId !== null && row.submissionId !== submissionId) {
-      throw new AppError("validation_failed", "A photo in this proposal belongs to another proposal.", { field: "photoIds" });
+      throw new AppError("validation_failed", "A photo in this proposal belongs to another proposal.", {
+        field: "photoIds",
+      });
     }
     let stored: Awaited<ReturnType<typeof headObject>> = null;
     try {
@@ -95,7 +125,9 @@ export async function deleteStoredPhotos(keys: string[]): Promise<void> {
  * database after a day. Run by `npm run jobs:sweep-photos`.
  */
 export async function sweepAbandonedPhotos(olderThanHours = 24): Promise<number> {
-  const abandoned = await SubmissionPhoto.findAll({ where: { submissionId: null, createdAt: { [Op.lt]: new Date(Date.now() - olderThanHours * 3_600_000) } } });
+  const abandoned = await SubmissionPhoto.findAll({
+    where: { submissionId: null, createdAt: { [Op.lt]: new Date(Date.now() - olderThanHours * 3_600_000) } },
+  });
   if (abandoned.length === 0) return 0;
   await deleteStoredPhotos(abandoned.map((p) => p.objectKey));
   await SubmissionPhoto.destroy({ where: { id: abandoned.map((p) => p.id), submissionId: null } });

@@ -41,7 +41,9 @@ export function proposalHref(prefill: ProposalPrefill): string {
  * The proposal form's standard part and measurements from a calculator's link: the standard part entered by its
  * designation, its sizes read by the standards engine, the measurements as typed. Null when the link carries none.
  */
-export function readProposalPrefill(params: Record<string, string | string[] | undefined>): Pick<SubmissionFormValues, "standard" | "measurements"> | null {
+export function readProposalPrefill(
+  params: Record<string, string | string[] | undefined>,
+): Pick<SubmissionFormValues, "standard" | "measurements"> | null {
   const q = prefillQuery.parse({ kind: one(params.kind), designation: one(params.designation), m: one(params.m) });
   if (!q.kind || !q.designation) return null;
   const checked = checkStandard({ kind: q.kind, designation: q.designation });

@@ -1,5 +1,18 @@
 import { Op, QueryTypes, type Transaction } from "sequelize";
-import { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
+import {
+  Assembly,
+  Confirmation,
+  Cross,
+  Machine,
+  Maker,
+  OriginalPart,
+  PartUsage,
+  sequelize,
+  StandardPart,
+  Submission,
+  SubmissionPhoto,
+  User,
+} from "@/db";
 import { recordAudit } from "@/lib/audit/record";
 import { searchForms } from "@/lib/catalogue/normalise";
 import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
@@ -37,13 +50,28 @@ interface ResolvedStandard {
  */
 async function withPartSizeCheck(original: ResolvedOriginal, standard: ResolvedStandard): Promise<ResolvedStandard> {
   if (!original.partId) return standard;
-  const part = await OriginalPart.findByPk(original.partId, { attributes: ["number", "innerMm", "outerMm", "widthMm", "lengthMm"] });
+  const part = await OriginalPart.findByPk(original.partId, {
+    attributes: ["number", "innerMm", "outerMm", "widthMm", "lengthMm"],
+  });
   const known = standard.standardPartId ? await StandardPart.findByPk(standard.standardPartId) : null;
   const proposed = known ?? standard.newStandard;
   if (!part || !proposed) return standard;
   const check = checkAgainstPart(
-    { number: part.number, innerMm: part.innerMm, outerMm: part.outerMm, widthMm: part.widthMm, lengthMm: part.lengthMm },
-    { kind: proposed.kind, designation: proposed.designation, innerMm: proposed.innerMm ?? null, outerMm: proposed.outerMm ?? null, widthMm: proposed.widthMm ?? null, lengthMm: proposed.lengthMm ?? null },
+    {
+      number: part.number,
+      innerMm: part.innerMm,
+      outerMm: part.outerMm,
+      widthMm: part.widthMm,
+      lengthMm: part.lengthMm,
+    },
+    {
+      kind: proposed.kind,
+      designation: proposed.designation,
+      innerMm: proposed.innerMm ?? null,
+      outerMm: proposed.outerMm ?? null,
+      widthMm: proposed.widthMm ?? null,
+      lengthMm: proposed.lengthMm ?? null,
+    },
   );
   return check ? { ...standard, checks: [check, ...standard.checks] } : standard;
 }
@@ -51,20 +79,35 @@ async function withPartSizeCheck(original: ResolvedOriginal, standard: ResolvedS
 async function resolveOriginal(input: SubmissionInput["original"]): Promise<ResolvedOriginal> {
   if (input.mode === "existing") {
     const part = await OriginalPart.findByPk(input.partId!, { attributes: ["id"] });
-    if (!part) throw new AppError("validation_failed", "There is no part with that id in the catalogue.", { field: "original.partId" });
+    if (!part)
+      throw new AppError("validation_failed", "There is no part with that id in the catalogue.", {
+        field: "original.partId",
+      });
     return { partId: part.id, newPart: null };
   }
   const maker = await Maker.findByPk(input.makerId!);
   if (!maker) throw new AppError("validation_failed", "There is no maker with that id.", { field: "original.makerId" });
   if (input.machineId) {
     const machine = await Machine.findByPk(input.machineId);
-    if (!machine || machine.makerId !== maker.id) throw new AppError("validation_failed", `That machine is not one of ${maker.name}'s.`, { field: "original.machineId" });
-    if (!(await Assembly.findByPk(input.assemblyId!))) throw new AppError("validation_failed", "There is no such place on the machine.", { field: "original.assemblyId" });
+    if (!machine || machine.makerId !== maker.id)
+      throw new AppError("validation_failed", `That machine is not one of ${maker.name}'s.`, {
+        field: "original.machineId",
+      });
+    if (!(await Assembly.findByPk(input.assemblyId!)))
+      throw new AppError("validation_failed", "There is no such place on the machine.", {
+        field: "original.assemblyId",
+      });
   }
   const { normalised } = searchForms(input.number!, maker.prefixes);
-  if (normalised.length === 0) throw new AppError("validation_failed", "A factory number needs at least one letter or digit.", { field: "original.number" });
+  if (normalised.length === 0)
+    throw new AppError("validation_failed", "A factory number needs at least one letter or digit.", {
+      field: "original.number",
+    });
   // A "new" part the catalogue already holds is that part: the proposal is about it.
-  const known = await OriginalPart.findOne({ where: { makerId: maker.id, numberNormalized: normalised }, attributes: ["id"] });
+  const known = await OriginalPart.findOne({
+    where: { makerId: maker.id, numberNormalized: normalised },
+    attributes: ["id"],
+  });
   if (known) return { partId: known.id, newPart: null };
   return {
     partId: null,
@@ -83,13 +126,29 @@ async function resolveOriginal(input: SubmissionInput["original"]): Promise<Reso
 async function resolveStandard(input: SubmissionInput["standard"]): Promise<ResolvedStandard> {
   if (input.mode === "existing") {
     const standard = await StandardPart.findByPk(input.standardPartId!, { attributes: ["id"] });
-    if (!standard) throw new AppError("validation_failed", "There is no standard part with that id.", { field: "standard.standardPartId" });
+    if (!standard)
+      throw new AppError("validation_failed", "There is no standard part with that id.", {
+        field: "standard.standardPartId",
+      });
     return { standardPartId: standard.id, newStandard: null, checks: [] };
   }
-  const checked = checkStandard({ kind: input.kind!, designation: input.designation!, innerMm: input.innerMm, outerMm: input.outerMm, widthMm: input.widthMm, lengthMm: input.lengthMm });
+  const checked = checkStandard({
+    kind: input.kind!,
+    designation: input.designation!,
+    innerMm: input.innerMm,
+    outerMm: input.outerMm,
+    widthMm: input.widthMm,
+    lengthMm: input.lengthMm,
+  });
   const { checks, ...standard } = checked;
   const known = await StandardPart.findOne({
-    where: { kind: standard.kind, designation: sequelize.where(sequelize.fn("upper", sequelize.col("designation")), standard.designation.toUpperCase()) as never },
+    where: {
+      kind: standard.kind,
+      designation: sequelize.where(
+        sequelize.fn("upper", sequelize.col("designation")),
+        standard.designation.toUpperCase(),
+      ) as never,
+    },
     attributes: ["id"],
   });
   if (known) return { standardPartId: known.id, newStandard: null, checks };
@@ -97,21 +156,43 @@ async function resolveStandard(input: SubmissionInput["standard"]): Promise<Reso
 }
 
 export type SubmitOutcome =
-  | { outcome: "submitted"; submission: { id: number; status: SubmissionStatus }; checks: ProposalCheck[]; photosMissing: number[] }
+  | {
+      outcome: "submitted";
+      submission: { id: number; status: SubmissionStatus };
+      checks: ProposalCheck[];
+      photosMissing: number[];
+    }
   | { outcome: "confirmed"; crossId: number; partId: number; message: string }
   | { outcome: "confirmed_pending"; submissionId: number; message: string };
 
 /** The open or approved record this proposal repeats, if any. */
-async function findDuplicate(original: ResolvedOriginal, standard: ResolvedStandard, excludeSubmissionId: number | null, transaction?: Transaction) {
+async function findDuplicate(
+  original: ResolvedOriginal,
+  standard: ResolvedStandard,
+  excludeSubmissionId: number | null,
+  transaction?: Transaction,
+) {
   if (original.partId && standard.standardPartId) {
-    const cross = await Cross.findOne({ where: { originalPartId: original.partId, standardPartId: standard.standardPartId, status: "approved" }, attributes: ["id"], transaction });
+    const cross = await Cross.findOne({
+      where: { originalPartId: original.partId, standardPartId: standard.standardPartId, status: "approved" },
+      attributes: ["id"],
+      transaction,
+    });
     if (cross) return { kind: "cross" as const, id: cross.id };
   }
   const [row] = await sequelize.query<{ id: number; user_id: string }>(
     `SELECT id, user_id FROM submissions
      WHERE status IN ('pending', 'changes_requested') AND (:exclude::int IS NULL OR id <> :exclude)
-       AND ${original.partId ? "original_part_id = :partId" : "new_part->>'makerId' = :makerId AND new_part->>'numberNormalized' = :number"}
-       AND ${standard.standardPartId ? "standard_part_id = :standardId" : "new_standard->>'kind' = :kind AND upper(new_standard->>'designation') = :designation"}
+       AND ${
+         original.partId
+           ? "original_part_id = :partId"
+           : "new_part->>'makerId' = :makerId AND new_part->>'numberNormalized' = " + ":number"
+       }
+       AND ${
+         standard.standardPartId
+           ? "standard_part_id = :standardId"
+           : "new_standard->>'kind' = :kind AND upper(new_standard->>'designation') " + "= :designation"
+       }
      ORDER BY id LIMIT 1`,
     {
       replacements: {
@@ -130,11 +211,25 @@ async function findDuplicate(original: ResolvedOriginal, standard: ResolvedStand
   return row ? { kind: "submission" as const, id: row.id, userId: row.user_id } : null;
 }
 
-async function addConfirmation(target: { crossId?: number; submissionId?: number }, userId: string, note: string, transaction?: Transaction): Promise<boolean> {
+async function addConfirmation(
+  target: { crossId?: number; submissionId?: number },
+  userId: string,
+  note: string,
+  transaction?: Transaction,
+): Promise<boolean> {
   const rows = await sequelize.query<{ id: number }>(
     `INSERT INTO confirmations (cross_id, submission_id, user_id, note, created_at, updated_at)
      VALUES (:crossId, :submissionId, :userId, :note, now(), now()) ON CONFLICT DO NOTHING RETURNING id`,
-    { replacements: { crossId: target.crossId ?? null, submissionId: target.submissionId ?? null, userId, note: note || null }, type: QueryTypes.SELECT, transaction },
+    {
+      replacements: {
+        crossId: target.crossId ?? null,
+        submissionId: target.submissionId ?? null,
+        userId,
+        note: note || null,
+      },
+      type: QueryTypes.SELECT,
+      transaction,
+    },
   );
   return rows.length > 0;
 }
@@ -142,9 +237,17 @@ async function addConfirmation(target: { crossId?: number; submissionId?: number
 /** Within the transaction that saves a proposal: the member's proposals take turns, so the count cannot be raced. */
 async function assertSubmissionRate(userId: string, transaction: Transaction): Promise<void> {
   await takeTurn(transaction, `proposal:${userId}`);
-  const recent = await Submission.count({ where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } }, transaction });
+  const recent = await Submission.count({
+    where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } },
+    transaction,
+  });
   if (recent >= env.SUBMISSIONS_PER_HOUR) {
-    throw new AppError("rate_limited", `You have sent ${env.SUBMISSIONS_PER_HOUR} proposals in the last hour. Thank you! Wait a while before sending more.`, { retryAfterSeconds: 3600 });
+    throw new AppError(
+      "rate_limited",
+      `You have sent ${env.SUBMISSIONS_PER_HOUR} proposals in the last hour. ` +
+        `Thank you! Wait a while before sending more.`,
+      { retryAfterSeconds: 3600 },
+    );
   }
 }
 
@@ -205,29 +308,59 @@ export async function createSubmission(user: Actor, input: SubmissionInput): Pro
     }
     if (duplicate?.kind === "submission") {
       if (duplicate.userId === user.id) {
-        throw new AppError("conflict", `You have already proposed this cross (proposal #${duplicate.id}); it is waiting for review.`, { field: "original" });
+        throw new AppError(
+          "conflict",
+          `You have already proposed this cross (proposal #${duplicate.id}); it is waiting for review.`,
+          { field: "original" },
+        );
       }
       const added = await addConfirmation({ submissionId: duplicate.id }, user.id, input.notes, transaction);
       return {
         outcome: "confirmed_pending",
         submissionId: duplicate.id,
         message: added
-          ? "Another member has proposed the same cross and it is waiting for review. Your report was added to it as a confirmation."
+          ? "Another member has proposed the same cross and it is waiting for " +
+            "review. Your report was added to it as a confirmation."
           : "Another member has proposed the same cross, and you have already confirmed it.",
       };
     }
     await assertSubmissionRate(user.id, transaction);
-    const created = await Submission.create({ userId: user.id, ...proposalFields(original, standard, input) }, { transaction });
-    if (photos.usable.length > 0) await SubmissionPhoto.update({ submissionId: created.id }, { where: { id: photos.usable, userId: user.id }, transaction });
-    await recordAudit({ actorId: user.id, action: "submission.create", subjectType: "submission", subjectId: created.id, after: snapshot(created) }, transaction);
-    return { outcome: "submitted", submission: { id: created.id, status: created.status }, checks: standard.checks, photosMissing: photos.missing };
+    const created = await Submission.create(
+      { userId: user.id, ...proposalFields(original, standard, input) },
+      { transaction },
+    );
+    if (photos.usable.length > 0)
+      await SubmissionPhoto.update(
+        { submissionId: created.id },
+        { where: { id: photos.usable, userId: user.id }, transaction },
+      );
+    await recordAudit(
+      {
+        actorId: user.id,
+        action: "submission.create",
+        subjectType: "submission",
+        subjectId: created.id,
+        after: snapshot(created),
+      },
+      transaction,
+    );
+    return {
+      outcome: "submitted",
+      submission: { id: created.id, status: created.status },
+      checks: standard.checks,
+      photosMissing: photos.missing,
+    };
   });
 }
 
 /** What makes two reports the same cross: the worn part (or the new one's maker and number) and the standard part. */
 function crossKey(original: ResolvedOriginal, standard: ResolvedStandard): string {
-  const part = original.partId ? `p${original.partId}` : `n${original.newPart?.makerId}:${original.newPart?.numberNormalized}`;
-  const target = standard.standardPartId ? `s${standard.standardPartId}` : `n${standard.newStandard?.kind}:${standard.newStandard?.designation.toUpperCase()}`;
+  const part = original.partId
+    ? `p${original.partId}`
+    : `n${original.newPart?.makerId}:${original.newPart?.numberNormalized}`;
+  const target = standard.standardPartId
+    ? `s${standard.standardPartId}`
+    : `n${standard.newStandard?.kind}:${standard.newStandard?.designation.toUpperCase()}`;
   return `cross:${part}:${target}`;
 }
 
@@ -236,12 +369,23 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
   const existing = await Submission.findByPk(id);
   if (!existing || existing.userId !== user.id) throw new AppError("not_found", "You have no proposal with that id.");
   if (existing.status !== "changes_requested") {
-    throw new AppError("conflict", existing.status === "pending" ? "This proposal is waiting for review; it can be changed only when a moderator sends it back." : "This proposal has been decided and can no longer be changed.");
+    throw new AppError(
+      "conflict",
+      existing.status === "pending"
+        ? "This proposal is waiting for review; it can be changed only when a moderator sends it back."
+        : "This proposal has been decided and can no longer be changed.",
+    );
   }
   const original = await resolveOriginal(input.original);
   const standard = await withPartSizeCheck(original, await resolveStandard(input.standard));
   const duplicate = await findDuplicate(original, standard, id);
-  if (duplicate?.kind === "cross") throw new AppError("conflict", `That cross is already in the catalogue (cross #${duplicate.id}). Withdraw this proposal and confirm the cross instead.`, { field: "standard" });
+  if (duplicate?.kind === "cross")
+    throw new AppError(
+      "conflict",
+      `That cross is already in the catalogue (cross #${duplicate.id}). ` +
+        `Withdraw this proposal and confirm the cross instead.`,
+      { field: "standard" },
+    );
   const photos = await checkUploadedPhotos(user.id, input.photoIds, id);
 
   const updated = await sequelize.transaction(async (transaction) => {
@@ -255,15 +399,38 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
       },
       { where: { id, status: "changes_requested", version: existing.version }, returning: true, transaction },
     );
-    if (count === 0) throw new AppError("conflict", "This proposal changed while you were editing it. Reload the page and try again.");
-    const removed = await SubmissionPhoto.findAll({ where: { submissionId: id, id: { [Op.notIn]: photos.usable.length ? photos.usable : [0] } }, transaction });
+    if (count === 0)
+      throw new AppError("conflict", "This proposal changed while you were editing it. Reload the page and try again.");
+    const removed = await SubmissionPhoto.findAll({
+      where: { submissionId: id, id: { [Op.notIn]: photos.usable.length ? photos.usable : [0] } },
+      transaction,
+    });
     await SubmissionPhoto.destroy({ where: { id: removed.map((p) => p.id) }, transaction });
-    if (photos.usable.length > 0) await SubmissionPhoto.update({ submissionId: id }, { where: { id: photos.usable, userId: user.id }, transaction });
-    await recordAudit({ actorId: user.id, action: "submission.edit", subjectType: "submission", subjectId: id, before, after: snapshot(rows[0]) }, transaction);
+    if (photos.usable.length > 0)
+      await SubmissionPhoto.update(
+        { submissionId: id },
+        { where: { id: photos.usable, userId: user.id }, transaction },
+      );
+    await recordAudit(
+      {
+        actorId: user.id,
+        action: "submission.edit",
+        subjectType: "submission",
+        subjectId: id,
+        before,
+        after: snapshot(rows[0]),
+      },
+      transaction,
+    );
     return { row: rows[0], removedKeys: removed.map((p) => p.objectKey) };
   });
   await deleteStoredPhotos(updated.removedKeys);
-  return { outcome: "submitted" as const, submission: { id, status: updated.row.status }, checks: standard.checks, photosMissing: photos.missing };
+  return {
+    outcome: "submitted" as const,
+    submission: { id, status: updated.row.status },
+    checks: standard.checks,
+    photosMissing: photos.missing,
+  };
 }
 
 /** A member withdraws a proposal of theirs that has not been decided. */
@@ -271,21 +438,45 @@ export async function deleteSubmission(user: Actor, id: number): Promise<void> {
   const keys = await sequelize.transaction(async (transaction) => {
     const existing = await Submission.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!existing || existing.userId !== user.id) throw new AppError("not_found", "You have no proposal with that id.");
-    if (!OPEN.includes(existing.status)) throw new AppError("conflict", "A decided proposal stays on record and cannot be withdrawn.");
+    if (!OPEN.includes(existing.status))
+      throw new AppError("conflict", "A decided proposal stays on record and cannot be withdrawn.");
     const photos = await SubmissionPhoto.findAll({ where: { submissionId: id }, transaction });
-    await recordAudit({ actorId: user.id, action: "submission.withdraw", subjectType: "submission", subjectId: id, before: snapshot(existing) }, transaction);
+    await recordAudit(
+      {
+        actorId: user.id,
+        action: "submission.withdraw",
+        subjectType: "submission",
+        subjectId: id,
+        before: snapshot(existing),
+      },
+      transaction,
+    );
     await existing.destroy({ transaction });
     return photos.map((p) => p.objectKey);
   });
   await deleteStoredPhotos(keys);
 }
 
-const STATUS_FOR: Record<Decision, SubmissionStatus> = { approve: "approved", reject: "rejected", request_changes: "changes_requested" };
+const STATUS_FOR: Record<Decision, SubmissionStatus> = {
+  approve: "approved",
+  reject: "rejected",
+  request_changes: "changes_requested",
+};
 
-async function numberAndStandard(s: Submission, transaction?: Transaction): Promise<{ partNumber: string; standard: string }> {
-  const part = s.originalPartId ? await OriginalPart.findByPk(s.originalPartId, { attributes: ["number"], transaction }) : null;
-  const standard = s.standardPartId ? await StandardPart.findByPk(s.standardPartId, { attributes: ["designation"], transaction }) : null;
-  return { partNumber: part?.number ?? s.newPart?.number ?? "?", standard: standard?.designation ?? s.newStandard?.designation ?? "?" };
+async function numberAndStandard(
+  s: Submission,
+  transaction?: Transaction,
+): Promise<{ partNumber: string; standard: string }> {
+  const part = s.originalPartId
+    ? await OriginalPart.findByPk(s.originalPartId, { attributes: ["number"], transaction })
+    : null;
+  const standard = s.standardPartId
+    ? await StandardPart.findByPk(s.standardPartId, { attributes: ["designation"], transaction })
+    : null;
+  return {
+    partNumber: part?.number ?? s.newPart?.number ?? "?",
+    standard: standard?.designation ?? s.newStandard?.designation ?? "?",
+  };
 }
 
 /** Puts an approved proposal into the catalogue: the part and standard part if new, and the approved cross. */
@@ -294,7 +485,10 @@ async function landInCatalogue(s: Submission, transaction: Transaction): Promise
   // The database's one-approved-cross rule (migration 0006) stands behind this.
   await takeTurn(
     transaction,
-    crossKey({ partId: s.originalPartId, newPart: s.newPart }, { standardPartId: s.standardPartId, newStandard: s.newStandard as ResolvedStandard["newStandard"], checks: [] }),
+    crossKey(
+      { partId: s.originalPartId, newPart: s.newPart },
+      { standardPartId: s.standardPartId, newStandard: s.newStandard as ResolvedStandard["newStandard"], checks: [] },
+    ),
   );
   let partId = s.originalPartId;
   if (!partId && s.newPart) {
@@ -303,12 +497,28 @@ async function landInCatalogue(s: Submission, transaction: Transaction): Promise
     const { normalised, key } = searchForms(np.number, maker?.prefixes ?? []);
     const [part] = await OriginalPart.findOrCreate({
       where: { makerId: np.makerId, numberNormalized: normalised },
-      defaults: { makerId: np.makerId, number: np.number, numberNormalized: normalised, numberKey: key, description: np.description, category: np.category, innerMm: null, outerMm: null, widthMm: null, lengthMm: null, dimensionsNote: null },
+      defaults: {
+        makerId: np.makerId,
+        number: np.number,
+        numberNormalized: normalised,
+        numberKey: key,
+        description: np.description,
+        category: np.category,
+        innerMm: null,
+        outerMm: null,
+        widthMm: null,
+        lengthMm: null,
+        dimensionsNote: null,
+      },
       transaction,
     });
     partId = part.id;
     if (np.machineId && np.assemblyId) {
-      await PartUsage.findOrCreate({ where: { partId, machineId: np.machineId, assemblyId: np.assemblyId }, defaults: { partId, machineId: np.machineId, assemblyId: np.assemblyId, quantity: 1, serialNote: null }, transaction });
+      await PartUsage.findOrCreate({
+        where: { partId, machineId: np.machineId, assemblyId: np.assemblyId },
+        defaults: { partId, machineId: np.machineId, assemblyId: np.assemblyId, quantity: 1, serialNote: null },
+        transaction,
+      });
     }
   }
   let standardId = s.standardPartId;
@@ -316,14 +526,31 @@ async function landInCatalogue(s: Submission, transaction: Transaction): Promise
     const ns = s.newStandard as NewStandardInput & { attributes?: Record<string, unknown> };
     const [standard] = await StandardPart.findOrCreate({
       where: { kind: ns.kind, designation: ns.designation },
-      defaults: { kind: ns.kind, designation: ns.designation, innerMm: ns.innerMm ?? null, outerMm: ns.outerMm ?? null, widthMm: ns.widthMm ?? null, lengthMm: ns.lengthMm ?? null, attributes: ns.attributes ?? {} },
+      defaults: {
+        kind: ns.kind,
+        designation: ns.designation,
+        innerMm: ns.innerMm ?? null,
+        outerMm: ns.outerMm ?? null,
+        widthMm: ns.widthMm ?? null,
+        lengthMm: ns.lengthMm ?? null,
+        attributes: ns.attributes ?? {},
+      },
       transaction,
     });
     standardId = standard.id;
   }
   const [cross, created] = await Cross.findOrCreate({
     where: { originalPartId: partId!, standardPartId: standardId!, status: "approved" },
-    defaults: { originalPartId: partId!, standardPartId: standardId!, repairMethod: null, fit: s.fit, notes: s.notes, status: "approved", origin: "community", createdBy: s.userId },
+    defaults: {
+      originalPartId: partId!,
+      standardPartId: standardId!,
+      repairMethod: null,
+      fit: s.fit,
+      notes: s.notes,
+      status: "approved",
+      origin: "community",
+      createdBy: s.userId,
+    },
     transaction,
   });
   // Members who confirmed the proposal now confirm the cross; one who had already confirmed it keeps the older one.
@@ -333,7 +560,10 @@ async function landInCatalogue(s: Submission, transaction: Transaction): Promise
     { replacements: { crossId: cross.id, id: s.id }, transaction },
   );
   if (!created) await addConfirmation({ crossId: cross.id }, s.userId, "", transaction);
-  await Submission.update({ originalPartId: partId, standardPartId: standardId, crossId: cross.id }, { where: { id: s.id }, transaction });
+  await Submission.update(
+    { originalPartId: partId, standardPartId: standardId, crossId: cross.id },
+    { where: { id: s.id }, transaction },
+  );
   return { partId: partId!, crossId: cross.id };
 }
 
@@ -341,25 +571,47 @@ async function landInCatalogue(s: Submission, transaction: Transaction): Promise
  * A moderator's decision. It is a conditional update on a pending row (and on its version when one is given), so
  * when two moderators decide at once exactly one wins and the other is told, with nothing written for them.
  */
-export async function decide(moderator: Actor, id: number, decision: { action: Decision; message: string; version?: number }) {
+export async function decide(
+  moderator: Actor,
+  id: number,
+  decision: { action: Decision; message: string; version?: number },
+) {
   const current = await Submission.findByPk(id);
   if (!current) throw new AppError("not_found", "There is no proposal with that id.");
-  if (current.userId === moderator.id) throw new AppError("forbidden", "Another moderator must decide your own proposals.");
+  if (current.userId === moderator.id)
+    throw new AppError("forbidden", "Another moderator must decide your own proposals.");
   if (decision.version !== undefined && decision.version !== current.version) {
     throw new AppError("conflict", "This proposal changed since you opened it. Reload it and decide again.");
   }
 
   const result = await sequelize.transaction(async (transaction) => {
     const [rows] = (await sequelize.query(
-      `UPDATE submissions SET status = :status, version = version + 1, moderator_message = :message, decided_by = :moderator, decided_at = now(), updated_at = now()
+      `UPDATE submissions SET status = :status, version = version + 1, moderator_message = :message, decided_by =
+        :moderator, decided_at = now(), updated_at = now()
        WHERE id = :id AND status = 'pending' AND version = :version RETURNING id`,
-      { replacements: { status: STATUS_FOR[decision.action], message: decision.message || null, moderator: moderator.id, id, version: current.version }, transaction },
+      {
+        replacements: {
+          status: STATUS_FOR[decision.action],
+          message: decision.message || null,
+          moderator: moderator.id,
+          id,
+          version: current.version,
+        },
+        transaction,
+      },
     )) as [Array<{ id: number }>, unknown];
     if (rows.length === 0) return null;
     const landed = decision.action === "approve" ? await landInCatalogue(current, transaction) : null;
     const after = await Submission.findByPk(id, { transaction });
     await recordAudit(
-      { actorId: moderator.id, action: `submission.${decision.action}`, subjectType: "submission", subjectId: id, before: snapshot(current), after: snapshot(after!) },
+      {
+        actorId: moderator.id,
+        action: `submission.${decision.action}`,
+        subjectType: "submission",
+        subjectId: id,
+        before: snapshot(current),
+        after: snapshot(after!),
+      },
       transaction,
     );
     return { submission: after!, landed };
@@ -368,7 +620,11 @@ export async function decide(moderator: Actor, id: number, decision: { action: D
   if (!result) {
     const now = await Submission.findByPk(id);
     if (!now) throw new AppError("not_found", "There is no proposal with that id.");
-    if (now.status !== "pending") throw new AppError("conflict", `This proposal was already decided (${now.status.replace("_", " ")}). Reload the queue.`);
+    if (now.status !== "pending")
+      throw new AppError(
+        "conflict",
+        `This proposal was already decided (${now.status.replace("_", " ")}). Reload the queue.`,
+      );
     throw new AppError("conflict", "This proposal changed since you opened it. Reload it and decide again.");
   }
 
@@ -376,14 +632,24 @@ export async function decide(moderator: Actor, id: number, decision: { action: D
   let mailSent = false;
   if (submitter?.notifyByEmail) {
     const names = await numberAndStandard(result.submission);
-    // Approved: straight to the part page, where the cross now shows. Sent back: to the form. Rejected: the proposal itself.
+    // Approved: straight to the part page, where the cross now shows. Sent back: to the form. Rejected: the proposal
+    // itself.
     const url =
       decision.action === "request_changes"
         ? `${env.APP_URL}/proposals/${id}/edit`
         : result.landed
           ? `${env.APP_URL}/parts/${result.landed.partId}`
           : `${env.APP_URL}/proposals/${id}`;
-    mailSent = await trySend(() => sendMail(decisionMail(submitter.email, { outcome: STATUS_FOR[decision.action] as "approved", ...names, message: decision.message, url })));
+    mailSent = await trySend(() =>
+      sendMail(
+        decisionMail(submitter.email, {
+          outcome: STATUS_FOR[decision.action] as "approved",
+          ...names,
+          message: decision.message,
+          url,
+        }),
+      ),
+    );
   }
   return {
     submission: { id, status: result.submission.status, version: result.submission.version },
@@ -395,10 +661,21 @@ export async function decide(moderator: Actor, id: number, decision: { action: D
 /** A member confirms an approved cross they have fitted; once each. */
 export async function confirmCross(user: Actor, crossId: number, note: string) {
   const cross = await Cross.findByPk(crossId, { attributes: ["id", "status", "originalPartId"] });
-  if (!cross || cross.status !== "approved") throw new AppError("not_found", "There is no cross with that id in the catalogue.");
+  if (!cross || cross.status !== "approved")
+    throw new AppError("not_found", "There is no cross with that id in the catalogue.");
   const added = await sequelize.transaction(async (transaction) => {
     const ok = await addConfirmation({ crossId }, user.id, note, transaction);
-    if (ok) await recordAudit({ actorId: user.id, action: "cross.confirm", subjectType: "cross", subjectId: crossId, after: { note: note || null } }, transaction);
+    if (ok)
+      await recordAudit(
+        {
+          actorId: user.id,
+          action: "cross.confirm",
+          subjectType: "cross",
+          subjectId: crossId,
+          after: { note: note || null },
+        },
+        transaction,
+      );
     return ok;
   });
   if (!added) throw new AppError("conflict", "You have already confirmed this cross.");

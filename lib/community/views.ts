@@ -1,8 +1,24 @@
 import { QueryTypes } from "sequelize";
-import { Maker, Machine, Assembly, OriginalPart, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
+import {
+  Maker,
+  Machine,
+  Assembly,
+  OriginalPart,
+  sequelize,
+  StandardPart,
+  Submission,
+  SubmissionPhoto,
+  User,
+} from "@/db";
 import { hasPermission, type Role } from "@/lib/auth/roles";
 import { CATEGORY_NAMES, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
-import { checkAgainstPart, measurementDeviations, PART_SIZES_FIELD, type MeasurementDeviation, type StandardDims } from "@/lib/community/checks";
+import {
+  checkAgainstPart,
+  measurementDeviations,
+  PART_SIZES_FIELD,
+  type MeasurementDeviation,
+  type StandardDims,
+} from "@/lib/community/checks";
 import type { Measurement, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
 import { AppError } from "@/lib/errors";
 
@@ -28,8 +44,23 @@ export interface SubmissionRow {
 }
 
 interface RawRow {
-  id: number; status: SubmissionStatus; version: number; created_at: Date; updated_at: Date; part_id: number | null; part_number: string; maker: string;
-  category: PartCategory; standard: string; fit: Fit; photos: string; confirmations: string; warnings: number; moderator_message: string | null; submitter: string; cross_id: number | null;
+  id: number;
+  status: SubmissionStatus;
+  version: number;
+  created_at: Date;
+  updated_at: Date;
+  part_id: number | null;
+  part_number: string;
+  maker: string;
+  category: PartCategory;
+  standard: string;
+  fit: Fit;
+  photos: string;
+  confirmations: string;
+  warnings: number;
+  moderator_message: string | null;
+  submitter: string;
+  cross_id: number | null;
 }
 
 // A proposal names its part either by id or, for a part new to the catalogue, in new_part; likewise its standard.
@@ -73,7 +104,10 @@ function toRow(r: RawRow): SubmissionRow {
 }
 
 export async function listMine(userId: string): Promise<SubmissionRow[]> {
-  const rows = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE s.user_id = :userId ORDER BY s.updated_at DESC LIMIT 500`, { replacements: { userId }, type: QueryTypes.SELECT });
+  const rows = await sequelize.query<RawRow>(
+    `${SELECT_ROWS} WHERE s.user_id = :userId ORDER BY s.updated_at DESC LIMIT 500`,
+    { replacements: { userId }, type: QueryTypes.SELECT },
+  );
   return rows.map(toRow);
 }
 
@@ -93,11 +127,22 @@ export async function listQueue(filters: QueueFilters): Promise<{ rows: Submissi
   if (filters.category) where.push("COALESCE(p.category::text, s.new_part->>'category') = :category");
   if (filters.makerId) where.push("mk.id = :makerId");
   if (filters.q) {
-    where.push(`(COALESCE(p.number, s.new_part->>'number') ILIKE :q OR COALESCE(sp.designation, s.new_standard->>'designation') ILIKE :q
+    where.push(`(COALESCE(p.number, s.new_part->>'number') ILIKE :q OR COALESCE(sp.designation,
+      s.new_standard->>'designation') ILIKE :q
       OR (SELECT email FROM users WHERE id = s.user_id) ILIKE :q)`);
   }
-  const replacements = { status: filters.status ?? "pending", category: filters.category ?? null, makerId: filters.makerId ?? null, q: filters.q ? `%${filters.q.replace(/[%_\\]/g, "")}%` : null, limit: filters.limit, offset: filters.offset ?? 0 };
-  const rows = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE ${where.join(" AND ")} ORDER BY s.created_at, s.id LIMIT :limit OFFSET :offset`, { replacements, type: QueryTypes.SELECT });
+  const replacements = {
+    status: filters.status ?? "pending",
+    category: filters.category ?? null,
+    makerId: filters.makerId ?? null,
+    q: filters.q ? `%${filters.q.replace(/[%_\\]/g, "")}%` : null,
+    limit: filters.limit,
+    offset: filters.offset ?? 0,
+  };
+  const rows = await sequelize.query<RawRow>(
+    `${SELECT_ROWS} WHERE ${where.join(" AND ")} ORDER BY s.created_at, s.id LIMIT :limit OFFSET :offset`,
+    { replacements, type: QueryTypes.SELECT },
+  );
   const [{ total }] = await sequelize.query<{ total: string }>(
     `SELECT count(*) AS total FROM submissions s LEFT JOIN original_parts p ON p.id = s.original_part_id
      LEFT JOIN standard_parts sp ON sp.id = s.standard_part_id
@@ -138,18 +183,30 @@ export interface SubmissionDetail extends SubmissionRow {
   /** The proposed standard part disagrees with the worn part's documented sizes: shown first to the reviewer. */
   sizeMismatch: ProposalCheck | null;
   photoList: Array<{ id: number; url: string; fileName: string | null }>;
-  existingCrosses: Array<{ id: number; designation: string | null; repairMethod: string | null; fit: Fit; status: string; origin: string; confirmations: number }>;
+  existingCrosses: Array<{
+    id: number;
+    designation: string | null;
+    repairMethod: string | null;
+    fit: Fit;
+    status: string;
+    origin: string;
+    confirmations: number;
+  }>;
   submitterRecord: { approved: number; rejected: number; open: number };
   decidedAt: string | null;
 }
 
 /** One proposal with all a reviewer needs beside it; the submitter may see their own, reviewers any. */
 export async function getSubmissionDetail(id: number, viewer: { id: string; role: Role }): Promise<SubmissionDetail> {
-  const [raw] = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE s.id = :id`, { replacements: { id }, type: QueryTypes.SELECT });
+  const [raw] = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE s.id = :id`, {
+    replacements: { id },
+    type: QueryTypes.SELECT,
+  });
   const submission = raw ? await Submission.findByPk(id) : null;
   if (!raw || !submission) throw new AppError("not_found", "There is no proposal with that id.");
   const mine = submission.userId === viewer.id;
-  if (!mine && !hasPermission(viewer.role, "proposals:review")) throw new AppError("not_found", "There is no proposal with that id.");
+  if (!mine && !hasPermission(viewer.role, "proposals:review"))
+    throw new AppError("not_found", "There is no proposal with that id.");
 
   const part = submission.originalPartId ? await OriginalPart.findByPk(submission.originalPartId) : null;
   const makerId = part?.makerId ?? submission.newPart!.makerId;
@@ -158,7 +215,16 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
   const assembly = submission.newPart?.assemblyId ? await Assembly.findByPk(submission.newPart.assemblyId) : null;
   const std = submission.standardPartId ? await StandardPart.findByPk(submission.standardPartId) : null;
   const standardPart: StandardView = std
-    ? { id: std.id, kind: std.kind, designation: std.designation, innerMm: std.innerMm, outerMm: std.outerMm, widthMm: std.widthMm, lengthMm: std.lengthMm, isNew: false }
+    ? {
+        id: std.id,
+        kind: std.kind,
+        designation: std.designation,
+        innerMm: std.innerMm,
+        outerMm: std.outerMm,
+        widthMm: std.widthMm,
+        lengthMm: std.lengthMm,
+        isNew: false,
+      }
     : {
         id: null,
         kind: submission.newStandard!.kind,
@@ -171,15 +237,25 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
       };
   const photos = await SubmissionPhoto.findAll({ where: { submissionId: id }, order: [["id", "ASC"]] });
   const existingCrosses = part
-    ? await sequelize.query<{ id: number; designation: string | null; repair_method: string | null; fit: Fit; status: string; origin: string; confirmations: string }>(
-        `SELECT c.id, sp.designation, c.repair_method, c.fit, c.status, c.origin, (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations
+    ? await sequelize.query<{
+        id: number;
+        designation: string | null;
+        repair_method: string | null;
+        fit: Fit;
+        status: string;
+        origin: string;
+        confirmations: string;
+      }>(
+        `SELECT c.id, sp.designation, c.repair_method, c.fit, c.status, c.origin, (SELECT count(*) FROM confirmations f
+          WHERE f.cross_id = c.id) AS confirmations
          FROM crosses c LEFT JOIN standard_parts sp ON sp.id = c.standard_part_id
          WHERE c.original_part_id = :partId AND c.status <> 'rejected' ORDER BY c.status, c.fit, c.id`,
         { replacements: { partId: part.id }, type: QueryTypes.SELECT },
       )
     : [];
   const [record] = await sequelize.query<{ approved: string; rejected: string; open: string }>(
-    `SELECT count(*) FILTER (WHERE status = 'approved') AS approved, count(*) FILTER (WHERE status = 'rejected') AS rejected,
+    `SELECT count(*) FILTER (WHERE status = 'approved') AS approved, count(*) FILTER (WHERE status = 'rejected') AS
+      rejected,
             count(*) FILTER (WHERE status IN ('pending', 'changes_requested')) AS open
      FROM submissions WHERE user_id = :userId`,
     { replacements: { userId: submission.userId }, type: QueryTypes.SELECT },
@@ -202,7 +278,12 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
       machineId: machine?.id ?? null,
       assembly: assembly?.name ?? null,
       assemblyId: assembly?.id ?? null,
-      dims: { innerMm: part?.innerMm ?? null, outerMm: part?.outerMm ?? null, widthMm: part?.widthMm ?? null, lengthMm: part?.lengthMm ?? null },
+      dims: {
+        innerMm: part?.innerMm ?? null,
+        outerMm: part?.outerMm ?? null,
+        widthMm: part?.widthMm ?? null,
+        lengthMm: part?.lengthMm ?? null,
+      },
     },
     standardPart,
     measurements: submission.measurements,
@@ -211,11 +292,32 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
     checks: submission.checks.filter((c) => c.field !== PART_SIZES_FIELD),
     // Worked out afresh, so proposals sent before the check existed are flagged too.
     sizeMismatch: part
-      ? checkAgainstPart({ number: part.number, innerMm: part.innerMm, outerMm: part.outerMm, widthMm: part.widthMm, lengthMm: part.lengthMm }, standardPart)
+      ? checkAgainstPart(
+          {
+            number: part.number,
+            innerMm: part.innerMm,
+            outerMm: part.outerMm,
+            widthMm: part.widthMm,
+            lengthMm: part.lengthMm,
+          },
+          standardPart,
+        )
       : null,
     photoList: photos.map((p) => ({ id: p.id, url: `/api/photos/${p.id}`, fileName: p.fileName })),
-    existingCrosses: existingCrosses.map((c) => ({ id: c.id, designation: c.designation, repairMethod: c.repair_method, fit: c.fit, status: c.status, origin: c.origin, confirmations: Number(c.confirmations) })),
-    submitterRecord: { approved: Number(record.approved), rejected: Number(record.rejected), open: Number(record.open) },
+    existingCrosses: existingCrosses.map((c) => ({
+      id: c.id,
+      designation: c.designation,
+      repairMethod: c.repair_method,
+      fit: c.fit,
+      status: c.status,
+      origin: c.origin,
+      confirmations: Number(c.confirmations),
+    })),
+    submitterRecord: {
+      approved: Number(record.approved),
+      rejected: Number(record.rejected),
+      open: Number(record.open),
+    },
     decidedAt: submission.decidedAt?.toISOString() ?? null,
   };
 }

@@ -22,7 +22,10 @@ async function fromMailFake<T>(path: string): Promise<T | null> {
   try {
     response = await fetch(`${env.MAIL_FAKE_API_URL}${path}`, { cache: "no-store" });
   } catch {
-    throw new AppError("unavailable", `The mail fake does not answer at ${env.MAIL_FAKE_API_URL}. Start the app with npm start or npm run dev.`);
+    throw new AppError(
+      "unavailable",
+      `The mail fake does not answer at ${env.MAIL_FAKE_API_URL}. Start the app with npm start or npm run dev.`,
+    );
   }
   if (response.status === 404) return null;
   if (!response.ok) throw new AppError("unavailable", `The mail fake answered ${response.status}.`);

@@ -29,7 +29,9 @@ async function probe(check: () => Promise<unknown>, timeoutMs = 3_000): Promise<
 }
 
 /** Each service's probe; a test may stand another in for one of them. */
-export async function checkHealth(probes: Partial<Record<"database" | "storage" | "mail", () => Promise<unknown>>> = {}): Promise<HealthReport> {
+export async function checkHealth(
+  probes: Partial<Record<"database" | "storage" | "mail", () => Promise<unknown>>> = {},
+): Promise<HealthReport> {
   const [database, storage, mail] = await Promise.all([
     probe(probes.database ?? (() => sequelize.query("SELECT 1"))),
     probe(probes.storage ?? checkStorage),

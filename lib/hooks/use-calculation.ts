@@ -14,7 +14,9 @@ async function fetchJson<T>(url: string): Promise<T> {
   const response = await fetch(url);
   const body = await response.json().catch(() => null);
   if (!response.ok) {
-    throw new CalculationError(body?.error ? body : { error: "internal", message: "The calculation could not be done just now." });
+    throw new CalculationError(
+      body?.error ? body : { error: "internal", message: "The calculation could not be done just now." },
+    );
   }
   return body as T;
 }
@@ -43,7 +45,11 @@ export function useCalculation<T>(path: string | null) {
 }
 
 /** The query string of the filled-in fields; null while any required one is empty. */
-export function calculationUrl(base: string, params: Record<string, string | boolean | undefined>, required: string[]): string | null {
+export function calculationUrl(
+  base: string,
+  params: Record<string, string | boolean | undefined>,
+  required: string[],
+): string | null {
   if (required.some((name) => !String(params[name] ?? "").trim())) return null;
   const query = new URLSearchParams();
   for (const [name, value] of Object.entries(params)) {

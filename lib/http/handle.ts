@@ -2,7 +2,6 @@ import { ConnectionError, DatabaseError } from "sequelize";
 import { AppError, errorBody, type ErrorBody } from "@/lib/errors";
 import { MAX_BODY_BYTES } from "@/lib/http/origin";
 
-
 /** Reads a JSON body with a size cap, so an oversized or malformed body is a 400 and never reaches the parser whole. */
 export async function readJson(request: Request): Promise<unknown> {
   const declared = Number(request.headers.get("content-length") ?? "0");
@@ -51,7 +50,10 @@ function assertPlainText(value: unknown, path: string[]): void {
     const fault = textFault(value);
     if (fault) {
       const field = path.length > 0 ? path.join(".") : "body";
-      throw new AppError("validation_failed", `This text ${fault}.`, { field, fields: { [field]: `This text ${fault}.` } });
+      throw new AppError("validation_failed", `This text ${fault}.`, {
+        field,
+        fields: { [field]: `This text ${fault}.` },
+      });
     }
   } else if (Array.isArray(value)) {
     value.forEach((item, i) => assertPlainText(item, [...path, String(i)]));
@@ -83,7 +85,9 @@ function isDatabaseUnavailable(error: unknown): boolean {
     if (parent?.code !== undefined && OUTAGE_CODES.has(parent.code)) return true;
     // A pooled connection cut under a query (the server restarted, the network dropped) has no SQLSTATE, only the
     // driver's words or the socket's error code.
-    return /Connection terminated|connection error|not queryable|ECONNRESET|EPIPE|ECONNREFUSED/i.test(`${parent?.code ?? ""} ${parent?.message ?? ""}`);
+    return /Connection terminated|connection error|not queryable|ECONNRESET|EPIPE|ECONNREFUSED/i.test(
+      `${parent?.code ?? ""} ${parent?.message ?? ""}`,
+    );
   }
   return false;
 }
@@ -96,7 +100,10 @@ export function errorResponse(error: unknown): Response {
   }
   if (isDatabaseUnavailable(error)) {
     console.error("[understudy] database unavailable", error instanceof Error ? error.message : error);
-    const body: ErrorBody = { error: "unavailable", message: "The catalogue's database is not answering just now. Please try again in a minute." };
+    const body: ErrorBody = {
+      error: "unavailable",
+      message: "The catalogue's database is not answering just now. Please try again in a minute.",
+    };
     return Response.json(body, { status: 503, headers: { "Retry-After": String(DATABASE_RETRY_SECONDS) } });
   }
   console.error("[understudy] unexpected error", error);

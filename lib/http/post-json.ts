@@ -8,7 +8,11 @@ export async function postJson<T>(url: string, body: unknown): Promise<PostResul
 }
 
 /** The same for PATCH and DELETE. */
-export async function sendJson<T>(method: "POST" | "PATCH" | "DELETE", url: string, body?: unknown): Promise<PostResult<T>> {
+export async function sendJson<T>(
+  method: "POST" | "PATCH" | "DELETE",
+  url: string,
+  body?: unknown,
+): Promise<PostResult<T>> {
   try {
     const response = await fetch(url, {
       method,

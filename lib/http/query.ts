@@ -6,7 +6,11 @@ export function queryOf(request: Request): Record<string, string> {
   const query = Object.fromEntries(new URL(request.url).searchParams);
   for (const [name, value] of Object.entries(query)) {
     const fault = textFault(value) ?? textFault(name);
-    if (fault) throw new AppError("validation_failed", `This text ${fault}.`, { field: name, fields: { [name]: `This text ${fault}.` } });
+    if (fault)
+      throw new AppError("validation_failed", `This text ${fault}.`, {
+        field: name,
+        fields: { [name]: `This text ${fault}.` },
+      });
   }
   return query;
 }

@@ -6,7 +6,13 @@ import { recordAudit } from "@/lib/audit/record";
 import { hasPermission, type Role } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
 import { runPass, type Rejection } from "@/lib/imports/engine";
-import { IMPORT_MAX_BYTES, type ImportCounts, type ImportMappingValue, type ImportStatus, type ImportTarget } from "@/lib/imports/kinds";
+import {
+  IMPORT_MAX_BYTES,
+  type ImportCounts,
+  type ImportMappingValue,
+  type ImportStatus,
+  type ImportTarget,
+} from "@/lib/imports/kinds";
 import { cleanMapping, missingRequired, proposeMapping } from "@/lib/imports/mapping";
 import { detectShape, readSample, type FileShape } from "@/lib/imports/read";
 import { deleteObject, putObject } from "@/lib/storage/s3";
@@ -19,12 +25,21 @@ interface Actor {
 function assertMayImport(actor: Actor, target: ImportTarget): void {
   const permission = target === "catalogue" ? "imports:commit" : "imports:review-queue";
   if (!hasPermission(actor.role, permission)) {
-    throw new AppError("forbidden", target === "catalogue" ? "Only admins import into the catalogue; moderators may import into the review queue." : "Your account's role does not allow imports.");
+    throw new AppError(
+      "forbidden",
+      target === "catalogue"
+        ? "Only admins import into the catalogue; moderators may import into the review queue."
+        : "Your account's role does not allow imports.",
+    );
   }
 }
 
 function shapeOf(row: Import): FileShape {
-  return { encoding: row.encoding as FileShape["encoding"], delimiter: row.delimiter as FileShape["delimiter"], headers: row.headers };
+  return {
+    encoding: row.encoding as FileShape["encoding"],
+    delimiter: row.delimiter as FileShape["delimiter"],
+    headers: row.headers,
+  };
 }
 
 /**
@@ -39,19 +54,31 @@ export function whyNotCsvText(bytes: Uint8Array): string | null {
   const utf16Bom = (bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff);
   if (utf16Bom) return "The file is UTF-16 text. Save it as CSV (UTF-8 or Windows-1252) and upload it again.";
   if (bytes.includes(0)) {
-    return "The file holds binary data, so it is not a CSV file (a workbook or a photo, perhaps). Save it as CSV and upload it again.";
+    return (
+      "The file holds binary data, so it is not a CSV file (a workbook or a " +
+      "photo, perhaps). Save it as CSV and upload it again."
+    );
   }
   return null;
 }
 
-export async function createImport(actor: Actor, file: { name: string; bytes: Uint8Array }, target: ImportTarget, mappingId?: number): Promise<Import> {
+export async function createImport(
+  actor: Actor,
+  file: { name: string; bytes: Uint8Array },
+  target: ImportTarget,
+  mappingId?: number,
+): Promise<Import> {
   assertMayImport(actor, target);
   if (file.bytes.length === 0) throw new AppError("validation_failed", "The file is empty.", { field: "file" });
-  if (file.bytes.length > IMPORT_MAX_BYTES) throw new AppError("validation_failed", `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB.`, { field: "file" });
+  if (file.bytes.length > IMPORT_MAX_BYTES)
+    throw new AppError("validation_failed", `The file is larger than ${IMPORT_MAX_BYTES / 1024 / 1024} MB.`, {
+      field: "file",
+    });
   const notText = whyNotCsvText(file.bytes);
   if (notText) throw new AppError("validation_failed", notText, { field: "file" });
   const saved = mappingId ? await ImportMapping.findByPk(mappingId) : null;
-  if (mappingId && !saved) throw new AppError("validation_failed", "There is no saved column mapping with that id.", { field: "mappingId" });
+  if (mappingId && !saved)
+    throw new AppError("validation_failed", "There is no saved column mapping with that id.", { field: "mappingId" });
 
   const key = `imports/${new Date().toISOString().slice(0, 7)}/${randomBytes(18).toString("base64url")}.csv`;
   await putObject(key, file.bytes, "text/csv");
@@ -76,13 +103,20 @@ export async function createImport(actor: Actor, file: { name: string; bytes: Ui
     await record.update({ status: "failed", errorMessage: error instanceof Error ? error.message : String(error) });
     throw error;
   }
-  await recordAudit({ actorId: actor.id, action: "import.upload", subjectType: "import", subjectId: record.id, after: { fileName: record.fileName, target, sha256: record.sha256 } });
+  await recordAudit({
+    actorId: actor.id,
+    action: "import.upload",
+    subjectType: "import",
+    subjectId: record.id,
+    after: { fileName: record.fileName, target, sha256: record.sha256 },
+  });
   return record;
 }
 
 async function loadFor(actor: Actor, id: number): Promise<Import> {
   const row = await Import.findByPk(id);
-  if (!row || !hasPermission(actor.role, "imports:review-queue")) throw new AppError("not_found", "There is no import with that id.");
+  if (!row || !hasPermission(actor.role, "imports:review-queue"))
+    throw new AppError("not_found", "There is no import with that id.");
   return row;
 }
 
@@ -90,16 +124,33 @@ async function loadFor(actor: Actor, id: number): Promise<Import> {
 export async function setMapping(actor: Actor, id: number, mapping: Record<string, unknown>): Promise<Import> {
   const row = await loadFor(actor, id);
   assertMayImport(actor, row.target);
-  if (!["parsed", "uploaded", "failed"].includes(row.status) || row.committedAt) throw new AppError("conflict", "This import is committed or busy; its mapping can no longer change.");
-  await row.update({ mapping: cleanMapping(mapping, row.headers), status: "uploaded", counts: null, errorMessage: null });
+  if (!["parsed", "uploaded", "failed"].includes(row.status) || row.committedAt)
+    throw new AppError("conflict", "This import is committed or busy; its mapping can no longer change.");
+  await row.update({
+    mapping: cleanMapping(mapping, row.headers),
+    status: "uploaded",
+    counts: null,
+    errorMessage: null,
+  });
   return row;
 }
 
-export async function saveMapping(actor: Actor, name: string, mapping: Record<string, unknown>): Promise<ImportMapping> {
-  if (!hasPermission(actor.role, "imports:review-queue")) throw new AppError("forbidden", "Your account's role does not allow imports.");
-  const clean = cleanMapping(mapping, Object.values(mapping).filter((v): v is string => typeof v === "string"));
+export async function saveMapping(
+  actor: Actor,
+  name: string,
+  mapping: Record<string, unknown>,
+): Promise<ImportMapping> {
+  if (!hasPermission(actor.role, "imports:review-queue"))
+    throw new AppError("forbidden", "Your account's role does not allow imports.");
+  const clean = cleanMapping(
+    mapping,
+    Object.values(mapping).filter((v): v is string => typeof v === "string"),
+  );
   // The name is the mapping's identity: saving under a name already used replaces that mapping.
-  const [saved] = await ImportMapping.upsert({ name, mapping: clean, createdBy: actor.id }, { returning: true, conflictFields: ["name"] });
+  const [saved] = await ImportMapping.upsert(
+    { name, mapping: clean, createdBy: actor.id },
+    { returning: true, conflictFields: ["name"] },
+  );
   return saved;
 }
 
@@ -113,18 +164,30 @@ const progressWriter = (id: number, phase: "parsing" | "committing", totalBytes:
   return async (rows: number, bytes: number) => {
     if (Date.now() - last < 250) return;
     last = Date.now();
-    await sequelize.query("UPDATE imports SET progress = :progress, updated_at = now() WHERE id = :id", { replacements: { id, progress: JSON.stringify({ phase, rows, bytes, totalBytes }) } });
+    await sequelize.query("UPDATE imports SET progress = :progress, updated_at = now() WHERE id = :id", {
+      replacements: { id, progress: JSON.stringify({ phase, rows, bytes, totalBytes }) },
+    });
   };
 };
 
 /** Reads the whole file without changing the catalogue: counts, and every rejected row with its line and reason. */
 export async function dryRun(id: number): Promise<void> {
-  const [claimed] = (await sequelize.query("UPDATE imports SET status = 'parsing', counts = NULL, error_message = NULL, updated_at = now() WHERE id = :id AND status = 'uploaded' RETURNING id", { replacements: { id } })) as [unknown[], unknown];
+  const [claimed] = (await sequelize.query(
+    "UPDATE imports SET status = 'parsing', counts = NULL, error_message = " +
+      "NULL, updated_at = now() WHERE id = :id AND status = 'uploaded' " +
+      "RETURNING id",
+    { replacements: { id } },
+  )) as [unknown[], unknown];
   if (claimed.length === 0) return;
   const row = (await Import.findByPk(id))!;
   const missing = missingRequired(row.mapping);
   if (missing.length > 0) {
-    await row.update({ status: "parsed", counts: null, progress: null, errorMessage: `Choose the columns for: ${missing.join(", ")}.` });
+    await row.update({
+      status: "parsed",
+      counts: null,
+      progress: null,
+      errorMessage: `Choose the columns for: ${missing.join(", ")}.`,
+    });
     return;
   }
   try {
@@ -139,17 +202,30 @@ export async function dryRun(id: number): Promise<void> {
       onRejections: (rejections) => storeRejections(id, rejections),
       onProgress: progressWriter(id, "parsing", row.sizeBytes),
     });
-    await row.update({ status: "parsed", counts, progress: { phase: "parsing", rows: counts.rows, bytes: row.sizeBytes, totalBytes: row.sizeBytes } });
+    await row.update({
+      status: "parsed",
+      counts,
+      progress: { phase: "parsing", rows: counts.rows, bytes: row.sizeBytes, totalBytes: row.sizeBytes },
+    });
   } catch (error) {
     console.error("[understudy] import dry run failed", error);
-    await row.update({ status: "failed", errorMessage: `The file could not be read to the end: ${error instanceof Error ? error.message : String(error)}` });
+    await row.update({
+      status: "failed",
+      errorMessage: `The file could not be read to the end: ${error instanceof Error ? error.message : String(error)}`,
+    });
   }
 }
 
 async function storeRejections(id: number, rejections: Rejection[]): Promise<void> {
   await sequelize.getQueryInterface().bulkInsert(
     "import_rejections",
-    rejections.map((r) => ({ import_id: id, line: r.line, column_name: r.column, reason: r.reason, raw: JSON.stringify(r.raw) })),
+    rejections.map((r) => ({
+      import_id: id,
+      line: r.line,
+      column_name: r.column,
+      reason: r.reason,
+      raw: JSON.stringify(r.raw),
+    })),
   );
 }
 
@@ -157,9 +233,20 @@ async function storeRejections(id: number, rejections: Rejection[]): Promise<voi
 export async function startCommit(actor: Actor, id: number): Promise<Import> {
   const row = await loadFor(actor, id);
   assertMayImport(actor, row.target);
-  if (!row.counts) throw new AppError("conflict", row.errorMessage ?? "Run the dry run first: the import has not been read yet.");
-  const [claimed] = (await sequelize.query("UPDATE imports SET status = 'committing', error_message = NULL, updated_at = now() WHERE id = :id AND status = 'parsed' RETURNING id", { replacements: { id } })) as [unknown[], unknown];
-  if (claimed.length === 0) throw new AppError("conflict", row.status === "committed" ? "This import is already committed." : `This import cannot be committed now (${row.status.replace("_", " ")}).`);
+  if (!row.counts)
+    throw new AppError("conflict", row.errorMessage ?? "Run the dry run first: the import has not been read yet.");
+  const [claimed] = (await sequelize.query(
+    "UPDATE imports SET status = 'committing', error_message = NULL, " +
+      "updated_at = now() WHERE id = :id AND status = 'parsed' RETURNING id",
+    { replacements: { id } },
+  )) as [unknown[], unknown];
+  if (claimed.length === 0)
+    throw new AppError(
+      "conflict",
+      row.status === "committed"
+        ? "This import is already committed."
+        : `This import cannot be committed now (${row.status.replace("_", " ")}).`,
+    );
   await row.reload();
   return row;
 }
@@ -174,7 +261,10 @@ export async function runCommit(actor: Actor, id: number, options: { failAfterRo
     const counts = await sequelize.transaction(async (transaction) => {
       // Held for as long as this commit's transaction lives: when the server dies, PostgreSQL ends the session and
       // the lock with it, which is how a retry knows at once that the commit is dead (recoverStalled).
-      await sequelize.query("SELECT pg_advisory_xact_lock(:space, :id)", { replacements: { space: COMMIT_LOCK_SPACE, id }, transaction });
+      await sequelize.query("SELECT pg_advisory_xact_lock(:space, :id)", {
+        replacements: { space: COMMIT_LOCK_SPACE, id },
+        transaction,
+      });
       const result = await runPass({
         importId: id,
         userId: actor.id,
@@ -186,19 +276,44 @@ export async function runCommit(actor: Actor, id: number, options: { failAfterRo
         onProgress: progressWriter(id, "committing", row.sizeBytes),
         failAfterRows: options.failAfterRows,
       });
-      await recordAudit({ actorId: actor.id, action: "import.commit", subjectType: "import", subjectId: id, after: { counts: result, target: row.target } }, transaction);
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: "import.commit",
+          subjectType: "import",
+          subjectId: id,
+          after: { counts: result, target: row.target },
+        },
+        transaction,
+      );
       return result;
     });
-    await row.update({ status: "committed", committedCounts: counts, committedAt: new Date(), progress: { phase: "committing", rows: counts.rows, bytes: row.sizeBytes, totalBytes: row.sizeBytes } });
+    await row.update({
+      status: "committed",
+      committedCounts: counts,
+      committedAt: new Date(),
+      progress: { phase: "committing", rows: counts.rows, bytes: row.sizeBytes, totalBytes: row.sizeBytes },
+    });
   } catch (error) {
     console.error("[understudy] import commit failed; nothing was written", error);
-    await row.update({ status: "parsed", errorMessage: `The commit failed, so nothing was changed: ${error instanceof Error ? error.message : String(error)}` });
+    await row.update({
+      status: "parsed",
+      errorMessage:
+        `The commit failed, so nothing was changed: ` + `${error instanceof Error ? error.message : String(error)}`,
+    });
   }
 }
 
 const ROLLBACK_ORDER = ["submissions", "crosses", "part_usages", "standard_parts", "original_parts", "makers"];
 const UPDATE_COLUMNS: Record<string, Record<string, string>> = {
-  original_parts: { description: "description", category: "category", innerMm: "inner_mm", outerMm: "outer_mm", widthMm: "width_mm", lengthMm: "length_mm" },
+  original_parts: {
+    description: "description",
+    category: "category",
+    innerMm: "inner_mm",
+    outerMm: "outer_mm",
+    widthMm: "width_mm",
+    lengthMm: "length_mm",
+  },
   crosses: { fit: "fit", notes: "notes", status: "status" },
 };
 
@@ -207,21 +322,43 @@ export async function rollbackImport(actor: Actor, id: number): Promise<{ remove
   const row = await loadFor(actor, id);
   if (!hasPermission(actor.role, "imports:commit")) throw new AppError("forbidden", "Only admins roll imports back.");
   const result = await sequelize.transaction(async (transaction) => {
-    const [claimed] = (await sequelize.query("UPDATE imports SET status = 'rolled_back', rolled_back_at = now(), updated_at = now() WHERE id = :id AND status = 'committed' RETURNING id", { replacements: { id }, transaction })) as [unknown[], unknown];
-    if (claimed.length === 0) throw new AppError("conflict", row.status === "rolled_back" ? "This import is already rolled back." : "Only a committed import can be rolled back.");
-    const changes = await sequelize.query<{ id: number; table_name: string; record_id: number; action: string; before: Record<string, unknown> | null }>(
-      "SELECT id, table_name, record_id, action, before FROM import_changes WHERE import_id = :id ORDER BY id DESC",
-      { replacements: { id }, type: QueryTypes.SELECT, transaction },
-    );
+    const [claimed] = (await sequelize.query(
+      "UPDATE imports SET status = 'rolled_back', rolled_back_at = now(), " +
+        "updated_at = now() WHERE id = :id AND status = 'committed' RETURNING " +
+        "id",
+      { replacements: { id }, transaction },
+    )) as [unknown[], unknown];
+    if (claimed.length === 0)
+      throw new AppError(
+        "conflict",
+        row.status === "rolled_back"
+          ? "This import is already rolled back."
+          : "Only a committed import can be rolled back.",
+      );
+    const changes = await sequelize.query<{
+      id: number;
+      table_name: string;
+      record_id: number;
+      action: string;
+      before: Record<string, unknown> | null;
+    }>("SELECT id, table_name, record_id, action, before FROM import_changes WHERE import_id = :id ORDER BY id DESC", {
+      replacements: { id },
+      type: QueryTypes.SELECT,
+      transaction,
+    });
     let restored = 0;
     for (const change of changes.filter((c) => c.action === "update")) {
       const columns = UPDATE_COLUMNS[change.table_name];
       const sets = Object.keys(change.before ?? {}).filter((k) => columns?.[k]);
       if (sets.length === 0) continue;
-      await sequelize.query(`UPDATE ${change.table_name} SET ${sets.map((k) => `${columns[k]} = :${k}`).join(", ")}, updated_at = now() WHERE id = :recordId`, {
-        replacements: { ...Object.fromEntries(sets.map((k) => [k, change.before![k]])), recordId: change.record_id },
-        transaction,
-      });
+      await sequelize.query(
+        `UPDATE ${change.table_name} SET ${sets.map((k) => `${columns[k]} = :${k}`).join(", ")}, updated_at = now()
+         WHERE id = :recordId`,
+        {
+          replacements: { ...Object.fromEntries(sets.map((k) => [k, change.before![k]])), recordId: change.record_id },
+          transaction,
+        },
+      );
       restored += 1;
     }
     let removed = 0;
@@ -231,7 +368,16 @@ export async function rollbackImport(actor: Actor, id: number): Promise<{ remove
       await sequelize.query(`DELETE FROM ${table} WHERE id IN (:ids)`, { replacements: { ids }, transaction });
       removed += ids.length;
     }
-    await recordAudit({ actorId: actor.id, action: "import.rollback", subjectType: "import", subjectId: id, after: { removed, restored } }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: "import.rollback",
+        subjectType: "import",
+        subjectId: id,
+        after: { removed, restored },
+      },
+      transaction,
+    );
     return { removed, restored };
   });
   return result;
@@ -245,17 +391,29 @@ export async function discardImport(actor: Actor, id: number): Promise<void> {
   const row = await loadFor(actor, id);
   assertMayImport(actor, row.target);
   await recoverStalled(row);
-  const [gone] = (await sequelize.query("DELETE FROM imports WHERE id = :id AND status IN ('uploaded', 'parsed', 'failed') AND committed_at IS NULL RETURNING object_key", {
-    replacements: { id },
-  })) as [Array<{ object_key: string }>, unknown];
+  const [gone] = (await sequelize.query(
+    "DELETE FROM imports WHERE id = :id AND status IN ('uploaded', " +
+      "'parsed', 'failed') AND committed_at IS NULL RETURNING object_key",
+    {
+      replacements: { id },
+    },
+  )) as [Array<{ object_key: string }>, unknown];
   if (gone.length === 0) {
     throw new AppError(
       "conflict",
-      row.status === "committed" || row.status === "rolled_back" ? "A committed import stays on record; roll it back to undo what it did." : "The file is being read or committed; wait for it to finish, then discard it.",
+      row.status === "committed" || row.status === "rolled_back"
+        ? "A committed import stays on record; roll it back to undo what it did."
+        : "The file is being read or committed; wait for it to finish, then discard it.",
     );
   }
   await deleteObject(gone[0].object_key).catch(() => undefined);
-  await recordAudit({ actorId: actor.id, action: "import.discard", subjectType: "import", subjectId: id, before: { fileName: row.fileName, status: row.status } });
+  await recordAudit({
+    actorId: actor.id,
+    action: "import.discard",
+    subjectType: "import",
+    subjectId: id,
+    before: { fileName: row.fileName, status: row.status },
+  });
 }
 
 export interface ImportView {
@@ -304,28 +462,39 @@ async function recoverStalled(row: Import): Promise<void> {
   if (!["uploaded", "parsing", "committing"].includes(row.status)) return;
   const idle = Date.now() - row.updatedAt.getTime();
   // A commit is known dead as soon as nobody holds its lock; reading has no lock and waits out the longer stall.
-  const dead = row.status === "committing" ? idle >= COMMIT_START_GRACE_MS && !(await commitAlive(row.id)) : idle >= STALLED_MS;
+  const dead =
+    row.status === "committing" ? idle >= COMMIT_START_GRACE_MS && !(await commitAlive(row.id)) : idle >= STALLED_MS;
   if (!dead) return;
   const message =
     row.status === "committing"
       ? "The commit was interrupted (the server stopped), so nothing was changed. Commit again."
       : "Reading the file was interrupted (the server stopped). Run the dry run again.";
   const status = row.status === "committing" ? "parsed" : "failed";
-  await sequelize.query("UPDATE imports SET status = :status, error_message = :message, updated_at = now() WHERE id = :id AND status = :was", {
-    replacements: { status, message, id: row.id, was: row.status },
-  });
+  await sequelize.query(
+    "UPDATE imports SET status = :status, error_message = :message, " +
+      "updated_at = now() WHERE id = :id AND status = :was",
+    {
+      replacements: { status, message, id: row.id, was: row.status },
+    },
+  );
   await row.reload();
 }
 
 export async function getImport(actor: Actor, id: number, rejectionLimit = 200): Promise<ImportView> {
   const row = await loadFor(actor, id);
   await recoverStalled(row);
-  const [by] = await sequelize.query<{ email: string }>("SELECT email FROM users WHERE id = :id", { replacements: { id: row.userId ?? "" }, type: QueryTypes.SELECT });
+  const [by] = await sequelize.query<{ email: string }>("SELECT email FROM users WHERE id = :id", {
+    replacements: { id: row.userId ?? "" },
+    type: QueryTypes.SELECT,
+  });
   const rejections = await sequelize.query<{ line: number; column_name: string | null; reason: string }>(
     "SELECT line, column_name, reason FROM import_rejections WHERE import_id = :id ORDER BY line LIMIT :limit",
     { replacements: { id, limit: rejectionLimit }, type: QueryTypes.SELECT },
   );
-  const [{ total }] = await sequelize.query<{ total: string }>("SELECT count(*) AS total FROM import_rejections WHERE import_id = :id", { replacements: { id }, type: QueryTypes.SELECT });
+  const [{ total }] = await sequelize.query<{ total: string }>(
+    "SELECT count(*) AS total FROM import_rejections WHERE import_id = :id",
+    { replacements: { id }, type: QueryTypes.SELECT },
+  );
   return {
     id: row.id,
     target: row.target,
@@ -350,26 +519,62 @@ export async function getImport(actor: Actor, id: number, rejectionLimit = 200):
   };
 }
 
-export async function listImports(actor: Actor): Promise<Array<Pick<ImportView, "id" | "fileName" | "status" | "target" | "createdAt" | "by" | "counts" | "committedCounts">>> {
-  if (!hasPermission(actor.role, "imports:review-queue")) throw new AppError("forbidden", "Your account's role does not allow imports.");
-  const rows = await sequelize.query<{ id: number; file_name: string; status: ImportStatus; target: ImportTarget; created_at: Date; email: string | null; counts: ImportCounts | null; committed_counts: ImportCounts | null }>(
+export async function listImports(
+  actor: Actor,
+): Promise<
+  Array<Pick<ImportView, "id" | "fileName" | "status" | "target" | "createdAt" | "by" | "counts" | "committedCounts">>
+> {
+  if (!hasPermission(actor.role, "imports:review-queue"))
+    throw new AppError("forbidden", "Your account's role does not allow imports.");
+  const rows = await sequelize.query<{
+    id: number;
+    file_name: string;
+    status: ImportStatus;
+    target: ImportTarget;
+    created_at: Date;
+    email: string | null;
+    counts: ImportCounts | null;
+    committed_counts: ImportCounts | null;
+  }>(
     `SELECT i.id, i.file_name, i.status, i.target, i.created_at, u.email, i.counts, i.committed_counts
      FROM imports i LEFT JOIN users u ON u.id = i.user_id ORDER BY i.id DESC LIMIT 100`,
     { type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ id: r.id, fileName: r.file_name, status: r.status, target: r.target, createdAt: r.created_at.toISOString(), by: r.email, counts: r.counts, committedCounts: r.committed_counts }));
+  return rows.map((r) => ({
+    id: r.id,
+    fileName: r.file_name,
+    status: r.status,
+    target: r.target,
+    createdAt: r.created_at.toISOString(),
+    by: r.email,
+    counts: r.counts,
+    committedCounts: r.committed_counts,
+  }));
 }
 
 /** The rejected rows as a CSV: line, column, reason, then the row as it was in the file. */
 export async function rejectedCsv(actor: Actor, id: number): Promise<string> {
   const row = await loadFor(actor, id);
-  const rejections = await sequelize.query<{ line: number; column_name: string | null; reason: string; raw: Record<string, string> }>(
-    "SELECT line, column_name, reason, raw FROM import_rejections WHERE import_id = :id ORDER BY line",
-    { replacements: { id }, type: QueryTypes.SELECT },
-  );
+  const rejections = await sequelize.query<{
+    line: number;
+    column_name: string | null;
+    reason: string;
+    raw: Record<string, string>;
+  }>("SELECT line, column_name, reason, raw FROM import_rejections WHERE import_id = :id ORDER BY line", {
+    replacements: { id },
+    type: QueryTypes.SELECT,
+  });
   const fields = ["line", "column", "reason", ...row.headers.filter(Boolean)];
   return Papa.unparse(
-    { fields, data: rejections.map((r) => [r.line, r.column_name ?? "", r.reason, ...row.headers.filter(Boolean).map((h) => r.raw[h] ?? "")]) },
+    {
+      fields,
+      data: rejections.map((r) => [
+        r.line,
+        r.column_name ?? "",
+        r.reason,
+        ...row.headers.filter(Boolean).map((h) => r.raw[h] ?? ""),
+      ]),
+    },
     // A cell starting with = + - @ is quoted with a leading ' so that a spreadsheet does not run it as a formula.
     { newline: "\r\n", escapeFormulae: true },
   );
@@ -379,9 +584,16 @@ export async function rejectedCsv(actor: Actor, id: number): Promise<string> {
 export async function importChanges(actor: Actor, id: number, limit = 500) {
   await loadFor(actor, id);
   const rows = await sequelize.query<{ line: number; table_name: string; record_id: number; action: string }>(
-    "SELECT line, table_name, record_id, action FROM import_changes WHERE import_id = :id ORDER BY line, id LIMIT :limit",
+    "SELECT line, table_name, record_id, action FROM import_changes WHERE " +
+      "import_id = :id ORDER BY line, id LIMIT :limit",
     { replacements: { id, limit }, type: QueryTypes.SELECT },
   );
-  const [{ total }] = await sequelize.query<{ total: string }>("SELECT count(*) AS total FROM import_changes WHERE import_id = :id", { replacements: { id }, type: QueryTypes.SELECT });
-  return { changes: rows.map((r) => ({ line: r.line, table: r.table_name, recordId: r.record_id, action: r.action })), total: Number(total) };
+  const [{ total }] = await sequelize.query<{ total: string }>(
+    "SELECT count(*) AS total FROM import_changes WHERE import_id = :id",
+    { replacements: { id }, type: QueryTypes.SELECT },
+  );
+  return {
+    changes: rows.map((r) => ({ line: r.line, table: r.table_name, recordId: r.record_id, action: r.action })),
+    total: Number(total),
+  };
 }

@@ -1,11 +1,22 @@
-export const IMPORT_STATUSES = ["uploaded", "parsing", "parsed", "committing", "committed", "failed", "rolled_back"] as const;
+export const IMPORT_STATUSES = [
+  "uploaded",
+  "parsing",
+  "parsed",
+  "committing",
+  "committed",
+  "failed",
+  "rolled_back",
+] as const;
 export type ImportStatus = (typeof IMPORT_STATUSES)[number];
 
 /** Admins import into the catalogue; moderators may import into the review queue, as proposals to be decided. */
 export const IMPORT_TARGETS = ["catalogue", "review_queue"] as const;
 export type ImportTarget = (typeof IMPORT_TARGETS)[number];
 
-export const TARGET_WORDS: Record<ImportTarget, string> = { catalogue: "the catalogue", review_queue: "the review queue" };
+export const TARGET_WORDS: Record<ImportTarget, string> = {
+  catalogue: "the catalogue",
+  review_queue: "the review queue",
+};
 
 export const STATUS_WORDS: Record<ImportStatus, string> = {
   uploaded: "Stored, waiting to be read",
@@ -22,20 +33,91 @@ export const STATUS_WORDS: Record<ImportStatus, string> = {
  * compared in lower case with spaces, dashes, dots and underscores removed.
  */
 export const IMPORT_FIELDS = [
-  { key: "maker", label: "Maker", required: true, names: ["maker", "manufacturer", "make", "brand", "hersteller", "fabricant"] },
-  { key: "number", label: "Factory number", required: true, names: ["factorynumber", "number", "partnumber", "partno", "partnr", "originalnumber", "oldnumber", "teilenummer", "reference", "ref"] },
-  { key: "description", label: "Description", required: false, names: ["description", "desc", "name", "part", "partname", "bezeichnung"] },
-  { key: "category", label: "Kind of part", required: false, names: ["category", "kind", "type", "parttype", "kindofpart"] },
-  { key: "innerMm", label: "Bore / shaft (mm)", required: false, names: ["boremm", "bore", "innerdiameter", "shaft", "shaftmm", "shaftdiameter"] },
-  { key: "outerMm", label: "Outside diameter (mm)", required: false, names: ["odmm", "od", "outerdiameter", "outsidediameter", "outside", "housingbore"] },
+  {
+    key: "maker",
+    label: "Maker",
+    required: true,
+    names: ["maker", "manufacturer", "make", "brand", "hersteller", "fabricant"],
+  },
+  {
+    key: "number",
+    label: "Factory number",
+    required: true,
+    names: [
+      "factorynumber",
+      "number",
+      "partnumber",
+      "partno",
+      "partnr",
+      "originalnumber",
+      "oldnumber",
+      "teilenummer",
+      "reference",
+      "ref",
+    ],
+  },
+  {
+    key: "description",
+    label: "Description",
+    required: false,
+    names: ["description", "desc", "name", "part", "partname", "bezeichnung"],
+  },
+  {
+    key: "category",
+    label: "Kind of part",
+    required: false,
+    names: ["category", "kind", "type", "parttype", "kindofpart"],
+  },
+  {
+    key: "innerMm",
+    label: "Bore / shaft (mm)",
+    required: false,
+    names: ["boremm", "bore", "innerdiameter", "shaft", "shaftmm", "shaftdiameter"],
+  },
+  {
+    key: "outerMm",
+    label: "Outside diameter (mm)",
+    required: false,
+    names: ["odmm", "od", "outerdiameter", "outsidediameter", "outside", "housingbore"],
+  },
   { key: "widthMm", label: "Width (mm)", required: false, names: ["widthmm", "width", "thickness"] },
   { key: "lengthMm", label: "Length (mm)", required: false, names: ["lengthmm", "length"] },
-  { key: "standardKind", label: "Standard part kind", required: false, names: ["standardkind", "standardtype", "stdkind"] },
-  { key: "designation", label: "Standard designation", required: true, names: ["standarddesignation", "designation", "standard", "standardpart", "replacement", "modernpart", "equivalent", "stdpart", "isodesignation"] },
+  {
+    key: "standardKind",
+    label: "Standard part kind",
+    required: false,
+    names: ["standardkind", "standardtype", "stdkind"],
+  },
+  {
+    key: "designation",
+    label: "Standard designation",
+    required: true,
+    names: [
+      "standarddesignation",
+      "designation",
+      "standard",
+      "standardpart",
+      "replacement",
+      "modernpart",
+      "equivalent",
+      "stdpart",
+      "isodesignation",
+    ],
+  },
   { key: "fit", label: "Fit", required: false, names: ["fit", "fits", "interchange", "fitment"] },
   { key: "notes", label: "Notes", required: false, names: ["notes", "note", "remarks", "comment", "comments"] },
-  { key: "machine", label: "Machine model", required: false, names: ["machine", "model", "machinemodel", "tractor", "engine"] },
-  { key: "assembly", label: "Place on the machine", required: false, names: ["assembly", "location", "position", "group", "placeonthemachine"] },
+  {
+    key: "machine",
+    label: "Machine model",
+    required: false,
+    names: ["machine", "model", "machinemodel", "tractor", "engine"],
+  },
+  {
+    key: "assembly",
+    label: "Place on the machine",
+    required: false,
+    names: ["assembly", "location", "position", "group", "placeonthemachine"],
+  },
 ] as const;
 
 export type ImportField = (typeof IMPORT_FIELDS)[number]["key"];
@@ -52,7 +134,9 @@ export interface ImportCounts {
   rejected: number;
   newMakers: number;
   newStandardParts: number;
-  /** The names of the makers and standard parts a commit adds (the first 200 of each), so they can be checked by eye. */
+  /**
+   * The names of the makers and standard parts a commit adds (the first 200 of each), so they can be checked by eye.
+   */
   newMakerNames?: string[];
   newStandardPartNames?: string[];
 }

@@ -1,6 +1,10 @@
 import { IMPORT_FIELDS, type ImportField, type ImportMappingValue } from "@/lib/imports/kinds";
 
-const squash = (title: string) => title.normalize("NFKC").toLowerCase().replace(/[\s\-_.()/]+/g, "");
+const squash = (title: string) =>
+  title
+    .normalize("NFKC")
+    .toLowerCase()
+    .replace(/[\s\-_.()/]+/g, "");
 
 /** Matches a file's column titles to the catalogue's fields by name; each column is used at most once. */
 export function proposeMapping(headers: string[]): ImportMappingValue {

@@ -30,26 +30,43 @@ export function detectShape(sample: Uint8Array): FileShape {
   } catch {
     encoding = "windows-1252";
   }
-  const text = encoding === "utf-8" ? new TextDecoder("utf-8").decode(sample.subarray(start)) : iconv.decode(Buffer.from(sample), "win1252");
+  const text =
+    encoding === "utf-8"
+      ? new TextDecoder("utf-8").decode(sample.subarray(start))
+      : iconv.decode(Buffer.from(sample), "win1252");
   const firstLine = text.split(/\r?\n/, 1)[0] ?? "";
-  if (firstLine.trim() === "") throw new AppError("validation_failed", "The file's first line is empty: it should hold the column titles.", { field: "file" });
+  if (firstLine.trim() === "")
+    throw new AppError("validation_failed", "The file's first line is empty: it should hold the column titles.", {
+      field: "file",
+    });
   const outsideQuotes = firstLine.replace(/"[^"]*"/g, "");
   const counts = ([",", ";", "\t"] as const).map((d) => [d, outsideQuotes.split(d).length - 1] as const);
   const [delimiter] = [...counts].sort((a, b) => b[1] - a[1])[0];
   const headers = (Papa.parse<string[]>(firstLine, { delimiter }).data[0] ?? []).map((h) => h.trim());
   if (headers.length < 2 || headers.every((h) => h === "")) {
-    throw new AppError("validation_failed", "The first line does not look like column titles separated by commas or semicolons.", { field: "file" });
+    throw new AppError(
+      "validation_failed",
+      "The first line does not look like column titles separated by commas or semicolons.",
+      { field: "file" },
+    );
   }
   const seen = new Set<string>();
   for (const h of headers) {
-    if (h && seen.has(h)) throw new AppError("validation_failed", `The column title "${h}" appears twice; give each column its own title.`, { field: "file" });
+    if (h && seen.has(h))
+      throw new AppError(
+        "validation_failed",
+        `The column title "${h}" appears twice; give each column its own title.`,
+        { field: "file" },
+      );
     seen.add(h);
   }
   return { encoding, delimiter, headers };
 }
 
 export async function readSample(key: string, bytes = 65_536): Promise<Uint8Array> {
-  const result = await storageClient().send(new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: key, Range: `bytes=0-${bytes - 1}` }));
+  const result = await storageClient().send(
+    new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: key, Range: `bytes=0-${bytes - 1}` }),
+  );
   return result.Body ? await result.Body.transformToByteArray() : new Uint8Array();
 }
 
@@ -63,7 +80,11 @@ export interface CsvRecord {
  * sits in memory whole. `line` counts the header as line 1 and blank lines too; a quoted cell with line breaks in it
  * counts as one line. `onBytes` reports progress through the file.
  */
-export async function* streamRows(key: string, shape: FileShape, onBytes: (bytes: number) => void): AsyncGenerator<CsvRecord> {
+export async function* streamRows(
+  key: string,
+  shape: FileShape,
+  onBytes: (bytes: number) => void,
+): AsyncGenerator<CsvRecord> {
   const result = await storageClient().send(new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));
   if (!result.Body) throw new Error(`Stored import ${key} has no body`);
   yield* rowsFromStream(result.Body as Readable, shape, onBytes);
@@ -74,7 +95,11 @@ export async function* streamRows(key: string, shape: FileShape, onBytes: (bytes
  * when streaming, it treats repeated cell values in data rows as repeated titles and renames them (`""` becomes
  * `"_1"`), so rows are read as arrays and keyed here.
  */
-export async function* rowsFromStream(bytes: Readable, shape: FileShape, onBytes: (bytes: number) => void = () => {}): AsyncGenerator<CsvRecord> {
+export async function* rowsFromStream(
+  bytes: Readable,
+  shape: FileShape,
+  onBytes: (bytes: number) => void = () => {},
+): AsyncGenerator<CsvRecord> {
   let count = 0;
   const counter = new Transform({
     transform(chunk: Buffer, _encoding, callback) {
@@ -83,7 +108,9 @@ export async function* rowsFromStream(bytes: Readable, shape: FileShape, onBytes
       callback(null, chunk);
     },
   });
-  const decoded = bytes.pipe(counter).pipe(iconv.decodeStream(shape.encoding === "utf-8" ? "utf8" : "win1252", { stripBOM: true }));
+  const decoded = bytes
+    .pipe(counter)
+    .pipe(iconv.decodeStream(shape.encoding === "utf-8" ? "utf8" : "win1252", { stripBOM: true }));
   const parser = Papa.parse(Papa.NODE_STREAM_INPUT, { header: false, delimiter: shape.delimiter });
   const rows = decoded.pipe(parser as unknown as NodeJS.WritableStream) as unknown as Readable;
   let line = 0;

@@ -1,4 +1,13 @@
-import { CATEGORY_NAMES, FITS, PART_CATEGORIES, STANDARD_KIND_NAMES, STANDARD_KINDS, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
+import {
+  CATEGORY_NAMES,
+  FITS,
+  PART_CATEGORIES,
+  STANDARD_KIND_NAMES,
+  STANDARD_KINDS,
+  type Fit,
+  type PartCategory,
+  type StandardKind,
+} from "@/lib/catalogue/kinds";
 import { checkStandard } from "@/lib/community/checks";
 import type { ImportField, ImportMappingValue } from "@/lib/imports/kinds";
 import { StandardsInputError } from "@/lib/standards/errors";
@@ -36,14 +45,29 @@ export interface RowProblem {
 
 export type RowResult = { ok: true; row: ParsedRow } | { ok: false; problem: RowProblem };
 
-const squash = (v: string) => v.normalize("NFKC").toLowerCase().replace(/[\s\-_.]+/g, "");
+const squash = (v: string) =>
+  v
+    .normalize("NFKC")
+    .toLowerCase()
+    .replace(/[\s\-_.]+/g, "");
 
 const CATEGORY_WORDS = new Map<string, PartCategory>();
 for (const c of PART_CATEGORIES) {
   CATEGORY_WORDS.set(squash(c), c);
   CATEGORY_WORDS.set(squash(CATEGORY_NAMES[c]), c);
 }
-for (const [word, c] of [["ballbearing", "bearing"], ["bearings", "bearing"], ["oilseal", "lip_seal"], ["shaftseal", "lip_seal"], ["seal", "lip_seal"], ["felt", "felt_seal"], ["belt", "v_belt"], ["vbelt", "v_belt"], ["fanbelt", "v_belt"], ["woodruffkey", "key"]] as const) {
+for (const [word, c] of [
+  ["ballbearing", "bearing"],
+  ["bearings", "bearing"],
+  ["oilseal", "lip_seal"],
+  ["shaftseal", "lip_seal"],
+  ["seal", "lip_seal"],
+  ["felt", "felt_seal"],
+  ["belt", "v_belt"],
+  ["vbelt", "v_belt"],
+  ["fanbelt", "v_belt"],
+  ["woodruffkey", "key"],
+] as const) {
   CATEGORY_WORDS.set(word, c);
 }
 
@@ -78,7 +102,12 @@ const FIT_WORDS = new Map<string, Fit>([
   ["dimensions", "dimensions_only"],
 ]);
 
-const DIMENSION_WORDS: Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", string> = { innerMm: "bore", outerMm: "outside diameter", widthMm: "width", lengthMm: "length" };
+const DIMENSION_WORDS: Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", string> = {
+  innerMm: "bore",
+  outerMm: "outside diameter",
+  widthMm: "width",
+  lengthMm: "length",
+};
 
 /**
  * Reads one spreadsheet row through the column mapping. The first problem found is returned with the column it is
@@ -90,7 +119,10 @@ export function parseImportRow(record: Record<string, string | undefined>, mappi
     const c = column(field);
     return c ? (record[c] ?? "").trim() : "";
   };
-  const fail = (field: ImportField | null, reason: string): RowResult => ({ ok: false, problem: { column: field ? column(field) : null, reason } });
+  const fail = (field: ImportField | null, reason: string): RowResult => ({
+    ok: false,
+    problem: { column: field ? column(field) : null, reason },
+  });
 
   const maker = text("maker");
   if (!maker) return fail("maker", "The maker is empty.");
@@ -104,10 +136,16 @@ export function parseImportRow(record: Record<string, string | undefined>, mappi
   const categoryText = text("category");
   if (categoryText) {
     category = CATEGORY_WORDS.get(squash(categoryText)) ?? null;
-    if (!category) return fail("category", `Unknown category "${categoryText}". Use one of: ${PART_CATEGORIES.join(", ")}.`);
+    if (!category)
+      return fail("category", `Unknown category "${categoryText}". Use one of: ${PART_CATEGORIES.join(", ")}.`);
   }
 
-  const dims: Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", number | null> = { innerMm: null, outerMm: null, widthMm: null, lengthMm: null };
+  const dims: Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", number | null> = {
+    innerMm: null,
+    outerMm: null,
+    widthMm: null,
+    lengthMm: null,
+  };
   for (const key of ["innerMm", "outerMm", "widthMm", "lengthMm"] as const) {
     const value = text(key);
     if (!value) continue;
@@ -126,11 +164,19 @@ export function parseImportRow(record: Record<string, string | undefined>, mappi
   const kindText = text("standardKind");
   if (kindText) {
     kind = KIND_WORDS.get(squash(kindText)) ?? null;
-    if (!kind) return fail("standardKind", `Unknown standard part kind "${kindText}". Use one of: ${STANDARD_KINDS.join(", ")}.`);
+    if (!kind)
+      return fail(
+        "standardKind",
+        `Unknown standard part kind "${kindText}". Use one of: ${STANDARD_KINDS.join(", ")}.`,
+      );
   } else if (category) {
     kind = KIND_FOR_CATEGORY[category];
   }
-  if (!kind) return fail(kindText ? "standardKind" : "category", "Say what kind of standard part it is: give the category or the standard part kind.");
+  if (!kind)
+    return fail(
+      kindText ? "standardKind" : "category",
+      "Say what kind of standard part it is: give the category or the standard part kind.",
+    );
 
   // The engine reads the designation; sizes in the row that contradict it reject the row.
   const checked = checkStandard({ kind, designation, ...dims });

@@ -4,7 +4,15 @@ import { QueryTypes, type Transaction } from "sequelize";
 import { JobList, JobListLine, Machine, OriginalPart, sequelize } from "@/db";
 import { recordAudit } from "@/lib/audit/record";
 import { lookUpParts, type LookupResult } from "@/lib/catalogue/find-parts";
-import { CATEGORY_NAMES, FIT_NAMES, STANDARD_KIND_NAMES, type CautionKind, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
+import {
+  CATEGORY_NAMES,
+  FIT_NAMES,
+  STANDARD_KIND_NAMES,
+  type CautionKind,
+  type Fit,
+  type PartCategory,
+  type StandardKind,
+} from "@/lib/catalogue/kinds";
 import { rankCrosses, type RankedCross } from "@/lib/catalogue/ranking";
 import { coversSerial, parseSerial, serialRangeText, showSerial } from "@/lib/catalogue/serials";
 import { standardSizes } from "@/lib/catalogue/sizes";
@@ -74,7 +82,13 @@ export interface ListView {
 /** How long a removed line can be put back. */
 export const UNDO_SECONDS = 600;
 
-const CAUTIONS: Partial<Record<PartCategory, CautionKind>> = { bearing: "bearings", v_belt: "belts", lip_seal: "seals", felt_seal: "seals", gasket: "seals" };
+const CAUTIONS: Partial<Record<PartCategory, CautionKind>> = {
+  bearing: "bearings",
+  v_belt: "belts",
+  lip_seal: "seals",
+  felt_seal: "seals",
+  gasket: "seals",
+};
 
 async function ownList(userId: string, id: number, transaction?: Transaction): Promise<JobList> {
   const list = await JobList.findByPk(id, { transaction });
@@ -84,36 +98,74 @@ async function ownList(userId: string, id: number, transaction?: Transaction): P
 }
 
 export async function listLists(userId: string) {
-  const rows = await sequelize.query<{ id: number; title: string; model: string | null; lines: string; quantity: string | null; updated_at: Date; share_token: string | null }>(
+  const rows = await sequelize.query<{
+    id: number;
+    title: string;
+    model: string | null;
+    lines: string;
+    quantity: string | null;
+    updated_at: Date;
+    share_token: string | null;
+  }>(
     `SELECT l.id, l.title, m.model, count(x.id) AS lines, sum(x.quantity) AS quantity, l.updated_at, l.share_token
-     FROM job_lists l LEFT JOIN machines m ON m.id = l.machine_id LEFT JOIN job_list_lines x ON x.list_id = l.id AND x.removed_at IS NULL
+     FROM job_lists l LEFT JOIN machines m ON m.id = l.machine_id LEFT JOIN job_list_lines x ON x.list_id = l.id AND
+       x.removed_at IS NULL
      WHERE l.user_id = :userId GROUP BY l.id, m.model ORDER BY l.updated_at DESC`,
     { replacements: { userId }, type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ id: r.id, title: r.title, machine: r.model, lines: Number(r.lines), quantity: Number(r.quantity ?? 0), updatedAt: r.updated_at.toISOString(), shared: Boolean(r.share_token) }));
+  return rows.map((r) => ({
+    id: r.id,
+    title: r.title,
+    machine: r.model,
+    lines: Number(r.lines),
+    quantity: Number(r.quantity ?? 0),
+    updatedAt: r.updated_at.toISOString(),
+    shared: Boolean(r.share_token),
+  }));
 }
 
 /** The serial as a running number, checked against the machine's own prefix; empty clears it. */
 async function serialFor(machineId: number | null, text: string | null | undefined): Promise<number | null> {
   if (!text) return null;
-  if (!machineId) throw new AppError("validation_failed", "Choose the machine before giving its serial.", { field: "machineSerial" });
+  if (!machineId)
+    throw new AppError("validation_failed", "Choose the machine before giving its serial.", { field: "machineSerial" });
   const machine = await Machine.findByPk(machineId, { attributes: ["serialPrefix"] });
   return parseSerial(text, machine?.serialPrefix ?? null);
 }
 
-export async function createList(userId: string, input: { title: string; machineId?: number | null; machineSerial?: string | null; notes?: string }) {
-  if (input.machineId && !(await Machine.findByPk(input.machineId))) throw new AppError("validation_failed", "There is no machine with that id.", { field: "machineId" });
+export async function createList(
+  userId: string,
+  input: { title: string; machineId?: number | null; machineSerial?: string | null; notes?: string },
+) {
+  if (input.machineId && !(await Machine.findByPk(input.machineId)))
+    throw new AppError("validation_failed", "There is no machine with that id.", { field: "machineId" });
   const machineSerial = await serialFor(input.machineId ?? null, input.machineSerial);
-  const list = await JobList.create({ userId, title: input.title, machineId: input.machineId ?? null, machineSerial, notes: input.notes || null });
+  const list = await JobList.create({
+    userId,
+    title: input.title,
+    machineId: input.machineId ?? null,
+    machineSerial,
+    notes: input.notes || null,
+  });
   return { id: list.id, title: list.title };
 }
 
-export async function updateList(userId: string, id: number, patch: { title?: string; machineId?: number | null; machineSerial?: string | null; notes?: string }) {
+export async function updateList(
+  userId: string,
+  id: number,
+  patch: { title?: string; machineId?: number | null; machineSerial?: string | null; notes?: string },
+) {
   const list = await ownList(userId, id);
-  if (patch.machineId && !(await Machine.findByPk(patch.machineId))) throw new AppError("validation_failed", "There is no machine with that id.", { field: "machineId" });
+  if (patch.machineId && !(await Machine.findByPk(patch.machineId)))
+    throw new AppError("validation_failed", "There is no machine with that id.", { field: "machineId" });
   const machineId = patch.machineId !== undefined ? patch.machineId : list.machineId;
   // Another machine's serial means nothing on this one: changing the machine clears a serial not given again.
-  const machineSerial = patch.machineSerial !== undefined ? await serialFor(machineId, patch.machineSerial) : machineId === list.machineId ? list.machineSerial : null;
+  const machineSerial =
+    patch.machineSerial !== undefined
+      ? await serialFor(machineId, patch.machineSerial)
+      : machineId === list.machineId
+        ? list.machineSerial
+        : null;
   await list.update({
     ...(patch.title !== undefined ? { title: patch.title } : {}),
     ...(patch.machineId !== undefined ? { machineId: patch.machineId } : {}),
@@ -132,18 +184,38 @@ export async function setSharing(userId: string, id: number, enabled: boolean): 
   const list = await ownList(userId, id);
   const token = enabled ? randomBytes(24).toString("base64url") : null;
   await list.update({ shareToken: token });
-  await recordAudit({ actorId: userId, action: enabled ? "list.share" : "list.unshare", subjectType: "job_list", subjectId: id });
+  await recordAudit({
+    actorId: userId,
+    action: enabled ? "list.share" : "list.unshare",
+    subjectType: "job_list",
+    subjectId: id,
+  });
   return token;
 }
 
 /** Each part's standard parts to order, from the shared ranking, and its first answer whatever it is. */
-async function equivalentsFor(partIds: number[]): Promise<Map<number, { options: Equivalent[]; first: RankedCross | null }>> {
+async function equivalentsFor(
+  partIds: number[],
+): Promise<Map<number, { options: Equivalent[]; first: RankedCross | null }>> {
   const ranked = await rankCrosses(partIds);
   const map = new Map<number, { options: Equivalent[]; first: RankedCross | null }>();
   for (const [partId, crosses] of ranked) {
     const options = crosses.flatMap((c): Equivalent[] =>
       c.standard && c.standardPartId !== null
-        ? [{ standardPartId: c.standardPartId, designation: c.standard.designation, kind: c.standard.kind, fit: c.fit, confirmations: c.confirmations, viaNumber: c.viaNumber, innerMm: c.standard.innerMm, outerMm: c.standard.outerMm, widthMm: c.standard.widthMm, lengthMm: c.standard.lengthMm }]
+        ? [
+            {
+              standardPartId: c.standardPartId,
+              designation: c.standard.designation,
+              kind: c.standard.kind,
+              fit: c.fit,
+              confirmations: c.confirmations,
+              viaNumber: c.viaNumber,
+              innerMm: c.standard.innerMm,
+              outerMm: c.standard.outerMm,
+              widthMm: c.standard.widthMm,
+              lengthMm: c.standard.lengthMm,
+            },
+          ]
         : [],
     );
     map.set(partId, { options, first: crosses[0] ?? null });
@@ -162,25 +234,51 @@ function sameToken(stored: string | null, given: string): boolean {
 export async function getList(access: { userId: string } | { token: string }, id: number): Promise<ListView> {
   const list = await JobList.findByPk(id);
   const readOnly = !("userId" in access);
-  const allowed = "userId" in access ? list?.userId === access.userId : sameToken(list?.shareToken ?? null, access.token);
+  const allowed =
+    "userId" in access ? list?.userId === access.userId : sameToken(list?.shareToken ?? null, access.token);
   if (!list || !allowed) throw new AppError("not_found", "There is no job list with that id.");
   const machine = list.machineId
     ? ((
-        await sequelize.query<{ id: number; model: string; maker: string; maker_id: number; serial_prefix: string | null }>(
-          "SELECT m.id, m.model, k.name AS maker, k.id AS maker_id, m.serial_prefix FROM machines m JOIN makers k ON k.id = m.maker_id WHERE m.id = :id",
+        await sequelize.query<{
+          id: number;
+          model: string;
+          maker: string;
+          maker_id: number;
+          serial_prefix: string | null;
+        }>(
+          "SELECT m.id, m.model, k.name AS maker, k.id AS maker_id, " +
+            "m.serial_prefix FROM machines m JOIN makers k ON k.id = m.maker_id " +
+            "WHERE m.id = :id",
           { replacements: { id: list.machineId }, type: QueryTypes.SELECT },
         )
       )[0] ?? null)
     : null;
   const lines = await sequelize.query<{
-    id: number; part_id: number | null; standard_item: StandardItem | null; standard_part_id: number | null; quantity: number; notes: string | null;
-    supplier: string | null; supplier_number: string | null; unit_price: string | null; ordered: boolean;
-    number: string | null; maker: string | null; maker_id: number | null; description: string | null; category: PartCategory | null; has_assembly: boolean; used_by_maker: boolean;
+    id: number;
+    part_id: number | null;
+    standard_item: StandardItem | null;
+    standard_part_id: number | null;
+    quantity: number;
+    notes: string | null;
+    supplier: string | null;
+    supplier_number: string | null;
+    unit_price: string | null;
+    ordered: boolean;
+    number: string | null;
+    maker: string | null;
+    maker_id: number | null;
+    description: string | null;
+    category: PartCategory | null;
+    has_assembly: boolean;
+    used_by_maker: boolean;
   }>(
-    `SELECT x.id, x.part_id, x.standard_item, x.standard_part_id, x.quantity, x.notes, x.supplier, x.supplier_number, x.unit_price::text AS unit_price, x.ordered,
+    `SELECT x.id, x.part_id, x.standard_item, x.standard_part_id, x.quantity, x.notes, x.supplier, x.supplier_number,
+      x.unit_price::text AS unit_price, x.ordered,
             p.number, k.name AS maker, k.id AS maker_id, p.description, p.category,
-            EXISTS (SELECT 1 FROM part_usages u JOIN part_usages o ON o.machine_id = u.machine_id AND o.assembly_id = u.assembly_id AND o.part_id <> u.part_id WHERE u.part_id = p.id) AS has_assembly,
-            EXISTS (SELECT 1 FROM part_usages u JOIN machines ma ON ma.id = u.machine_id WHERE u.part_id = p.id AND ma.maker_id = :makerId) AS used_by_maker
+            EXISTS (SELECT 1 FROM part_usages u JOIN part_usages o ON o.machine_id = u.machine_id AND o.assembly_id =
+              u.assembly_id AND o.part_id <> u.part_id WHERE u.part_id = p.id) AS has_assembly,
+            EXISTS (SELECT 1 FROM part_usages u JOIN machines ma ON ma.id = u.machine_id WHERE u.part_id = p.id AND
+              ma.maker_id = :makerId) AS used_by_maker
      FROM job_list_lines x LEFT JOIN original_parts p ON p.id = x.part_id LEFT JOIN makers k ON k.id = p.maker_id
      WHERE x.list_id = :id AND x.removed_at IS NULL ORDER BY x.id`,
     { replacements: { id, makerId: machine?.maker_id ?? 0 }, type: QueryTypes.SELECT },
@@ -191,14 +289,21 @@ export async function getList(access: { userId: string } | { token: string }, id
     earlierNumbers(partIds),
     machine && list.machineSerial !== null && partIds.length > 0
       ? sequelize.query<{ part_id: number; serial_from: number | null; serial_to: number | null }>(
-          "SELECT part_id, serial_from, serial_to FROM part_usages WHERE machine_id = :machineId AND part_id IN (:partIds)",
+          "SELECT part_id, serial_from, serial_to FROM part_usages WHERE " +
+            "machine_id = :machineId AND part_id IN (:partIds)",
           { replacements: { machineId: machine.id, partIds }, type: QueryTypes.SELECT },
         )
       : Promise.resolve([]),
   ]);
-  const serialText = machine && list.machineSerial !== null ? showSerial(list.machineSerial, machine.serial_prefix) : null;
+  const serialText =
+    machine && list.machineSerial !== null ? showSerial(list.machineSerial, machine.serial_prefix) : null;
   const view: ListLine[] = lines.map((l) => {
-    const order = { supplier: l.supplier, supplierNumber: l.supplier_number, unitPrice: l.unit_price, ordered: l.ordered };
+    const order = {
+      supplier: l.supplier,
+      supplierNumber: l.supplier_number,
+      unitPrice: l.unit_price,
+      ordered: l.ordered,
+    };
     // The table's check constraint: a line has a factory part or a measured item, never both.
     if (l.part_id === null) return { ...measuredLine(l.id, l.standard_item!, l.quantity, l.notes), ...order };
     const { options, first } = equivalents.get(l.part_id) ?? { options: [], first: null };
@@ -206,16 +311,32 @@ export async function getList(access: { userId: string } | { token: string }, id
     const number = l.number!;
     const method = !chosen && first?.repairMethod ? first.repairMethod : null;
     const warnings: string[] = [];
-    if (!chosen) warnings.push(method ? `${number}: no standard part to order; the catalogue's answer is work: ${method}` : `${number}: no approved standard part yet. Measure it, or size it in the calculators.`);
-    else if (chosen.fit === "with_modification") warnings.push(`${number} → ${chosen.designation}: fits with modification. Read the notes on the part's page before ordering.`);
-    else if (chosen.fit === "dimensions_only") warnings.push(`${number} → ${chosen.designation}: a size match only; nobody has reported fitting it yet.`);
+    if (!chosen)
+      warnings.push(
+        method
+          ? `${number}: no standard part to order; the catalogue's answer is work: ${method}`
+          : `${number}: no approved standard part yet. Measure it, or size it in the calculators.`,
+      );
+    else if (chosen.fit === "with_modification")
+      warnings.push(
+        `${number} → ${chosen.designation}: fits with modification. Read the notes on the part's page before ordering.`,
+      );
+    else if (chosen.fit === "dimensions_only")
+      warnings.push(`${number} → ${chosen.designation}: a size match only; nobody has reported fitting it yet.`);
     if (machine && !l.used_by_maker && l.maker_id !== machine.maker_id) {
-      warnings.push(`${number} is a ${l.maker} part that no ${machine.maker} machine uses: check it belongs on this list.`);
+      warnings.push(
+        `${number} is a ${l.maker} part that no ${machine.maker} machine uses: check it belongs on this list.`,
+      );
     }
     if (machine && serialText !== null) {
       const own = ranges.filter((r) => r.part_id === l.part_id);
-      if (own.length > 0 && !own.some((r) => coversSerial({ serialFrom: r.serial_from, serialTo: r.serial_to }, list.machineSerial!))) {
-        const fitted = own.map((r) => serialRangeText({ serialFrom: r.serial_from, serialTo: r.serial_to }, machine.serial_prefix)).join(" and ");
+      if (
+        own.length > 0 &&
+        !own.some((r) => coversSerial({ serialFrom: r.serial_from, serialTo: r.serial_to }, list.machineSerial!))
+      ) {
+        const fitted = own
+          .map((r) => serialRangeText({ serialFrom: r.serial_from, serialTo: r.serial_to }, machine.serial_prefix))
+          .join(" and ");
         warnings.push(`${number} was fitted to the ${machine.model} ${fitted}; this list is for serial ${serialText}.`);
       }
     }
@@ -251,7 +372,8 @@ export async function getList(access: { userId: string } | { token: string }, id
   // The places the parts are fitted carry their own cautions (a water pump: hot coolant under pressure).
   if (partIds.length > 0) {
     const places = await sequelize.query<{ caution: CautionKind }>(
-      "SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id = u.assembly_id WHERE u.part_id IN (:ids) AND a.caution IS NOT NULL",
+      "SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id " +
+        "= u.assembly_id WHERE u.part_id IN (:ids) AND a.caution IS NOT NULL",
       { replacements: { ids: partIds }, type: QueryTypes.SELECT },
     );
     for (const p of places) cautions.add(p.caution);
@@ -260,20 +382,35 @@ export async function getList(access: { userId: string } | { token: string }, id
     id: list.id,
     title: list.title,
     notes: list.notes,
-    machine: machine ? { id: machine.id, model: machine.model, maker: machine.maker, makerId: machine.maker_id, serialPrefix: machine.serial_prefix } : null,
+    machine: machine
+      ? {
+          id: machine.id,
+          model: machine.model,
+          maker: machine.maker,
+          makerId: machine.maker_id,
+          serialPrefix: machine.serial_prefix,
+        }
+      : null,
     machineSerial: serialText,
     readOnly,
     shareToken: readOnly ? null : list.shareToken,
     updatedAt: list.updatedAt.toISOString(),
     lines: view,
-    totals: [...totals.entries()].map(([category, t]) => ({ category, name: CATEGORY_NAMES[category], ...t })).sort((a, b) => a.name.localeCompare(b.name)),
+    totals: [...totals.entries()]
+      .map(([category, t]) => ({ category, name: CATEGORY_NAMES[category], ...t }))
+      .sort((a, b) => a.name.localeCompare(b.name)),
     warnings: view.filter((l) => l.warnings.length > 0).length,
     cautions: [...cautions],
   };
 }
 
 /** A line for a standard part worked out from measurements: what to order is the item itself. */
-function measuredLine(id: number, item: StandardItem, quantity: number, notes: string | null): Omit<ListLine, "supplier" | "supplierNumber" | "unitPrice" | "ordered"> {
+function measuredLine(
+  id: number,
+  item: StandardItem,
+  quantity: number,
+  notes: string | null,
+): Omit<ListLine, "supplier" | "supplierNumber" | "unitPrice" | "ordered"> {
   const category = CATEGORY_OF_KIND[item.kind];
   const chosen: Equivalent = {
     // Not a catalogue row: 0 is no standard part's id, and a measured line offers no other equivalents to pick.
@@ -326,15 +463,32 @@ export interface NumberChoice {
  */
 async function resolveNumber(number: string): Promise<{ id: number; read: string | null }> {
   const results = await lookUpParts(number, { limit: 8 });
-  const choice = (r: LookupResult): NumberChoice => ({ partId: r.id, number: r.number, maker: r.maker, description: r.description });
+  const choice = (r: LookupResult): NumberChoice => ({
+    partId: r.id,
+    number: r.number,
+    maker: r.maker,
+    description: r.description,
+  });
   for (const kinds of [["exact"], ["exact", "normalised"], ["exact", "normalised", "misread"]]) {
     const hits = results.filter((r) => kinds.includes(r.matchedBy));
     if (hits.length === 1) return { id: hits[0].id, read: hits[0].matchedBy === "exact" ? null : hits[0].number };
-    if (hits.length > 1) throw new AppError("validation_failed", `Several parts have that number. Pick one.`, { field: "number", choices: hits.map(choice) });
+    if (hits.length > 1)
+      throw new AppError("validation_failed", `Several parts have that number. Pick one.`, {
+        field: "number",
+        choices: hits.map(choice),
+      });
   }
   const near = results.filter((r) => r.matchedBy !== "words").slice(0, 4);
-  if (near.length > 0) throw new AppError("validation_failed", `No part has exactly that number. Did you mean one of these?`, { field: "number", choices: near.map(choice) });
-  throw new AppError("validation_failed", "No part has that number in the catalogue. Check the stamping, or measure the part.", { field: "number" });
+  if (near.length > 0)
+    throw new AppError("validation_failed", `No part has exactly that number. Did you mean one of these?`, {
+      field: "number",
+      choices: near.map(choice),
+    });
+  throw new AppError(
+    "validation_failed",
+    "No part has that number in the catalogue. Check the stamping, or measure the part.",
+    { field: "number" },
+  );
 }
 
 /**
@@ -344,7 +498,13 @@ async function resolveNumber(number: string): Promise<{ id: number; read: string
 export async function addLine(
   userId: string,
   listId: number,
-  input: { partId?: number; number?: string; standard?: { kind: MeasuredKind; designation: string; note?: string }; quantity: number; notes?: string },
+  input: {
+    partId?: number;
+    number?: string;
+    standard?: { kind: MeasuredKind; designation: string; note?: string };
+    quantity: number;
+    notes?: string;
+  },
 ) {
   await ownList(userId, listId);
   if (input.standard) return addMeasuredLine(listId, toStandardItem(input.standard), input.quantity, input.notes);
@@ -352,7 +512,8 @@ export async function addLine(
   let read: string | null = null;
   let partId: number;
   if (input.partId) {
-    if (!(await OriginalPart.findByPk(input.partId, { attributes: ["id"] }))) throw new AppError("validation_failed", "There is no part with that id.", { field: "partId" });
+    if (!(await OriginalPart.findByPk(input.partId, { attributes: ["id"] })))
+      throw new AppError("validation_failed", "There is no part with that id.", { field: "partId" });
     partId = input.partId;
   } else {
     const resolved = await resolveNumber(input.number!);
@@ -365,7 +526,8 @@ export async function addLine(
   // Read before the transaction: inside it, a query without the transaction would take a second pooled connection
   // while this one holds the list's lock, and a burst of adds would exhaust the pool waiting on each other.
   const best = (await equivalentsFor([latestId])).get(latestId)?.options[0] ?? null;
-  const latestNumber = latestId !== partId ? ((await OriginalPart.findByPk(latestId, { attributes: ["number"] }))?.number ?? null) : null;
+  const latestNumber =
+    latestId !== partId ? ((await OriginalPart.findByPk(latestId, { attributes: ["number"] }))?.number ?? null) : null;
   const result = await sequelize.transaction(async (transaction) => {
     // Adds to one list take turns (the list row is locked), so two quick clicks merge instead of colliding.
     await lockList(listId, transaction);
@@ -376,7 +538,14 @@ export async function addLine(
       return { lineId: existing.id, merged: true };
     }
     const line = await JobListLine.create(
-      { listId, partId: latestId, requestedNumber: requested, standardPartId: best?.standardPartId ?? null, quantity: input.quantity, notes: input.notes || null },
+      {
+        listId,
+        partId: latestId,
+        requestedNumber: requested,
+        standardPartId: best?.standardPartId ?? null,
+        quantity: input.quantity,
+        notes: input.notes || null,
+      },
       { transaction },
     );
     await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
@@ -391,15 +560,43 @@ async function addMeasuredLine(listId: number, item: StandardItem, quantity: num
     await lockList(listId, transaction);
     const [existing] = await sequelize.query<{ id: number; quantity: number }>(
       `SELECT id, quantity FROM job_list_lines
-       WHERE list_id = :listId AND part_id IS NULL AND removed_at IS NULL AND standard_item->>'kind' = :kind AND upper(standard_item->>'designation') = upper(:designation)`,
-      { replacements: { listId, kind: item.kind, designation: item.designation }, type: QueryTypes.SELECT, transaction },
+       WHERE list_id = :listId AND part_id IS NULL AND removed_at IS NULL AND standard_item->>'kind' = :kind AND
+         upper(standard_item->>'designation') = upper(:designation)`,
+      {
+        replacements: { listId, kind: item.kind, designation: item.designation },
+        type: QueryTypes.SELECT,
+        transaction,
+      },
     );
     if (existing) {
-      await JobListLine.update({ quantity: Math.min(existing.quantity + quantity, 9999) }, { where: { id: existing.id }, transaction });
+      await JobListLine.update(
+        { quantity: Math.min(existing.quantity + quantity, 9999) },
+        { where: { id: existing.id }, transaction },
+      );
     }
-    const line = existing ?? (await JobListLine.create({ listId, partId: null, standardItem: item, requestedNumber: null, standardPartId: null, quantity, notes: notes || null }, { transaction }));
+    const line =
+      existing ??
+      (await JobListLine.create(
+        {
+          listId,
+          partId: null,
+          standardItem: item,
+          requestedNumber: null,
+          standardPartId: null,
+          quantity,
+          notes: notes || null,
+        },
+        { transaction },
+      ));
     await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
-    return { lineId: line.id, partId: null, merged: Boolean(existing), superseded: false, read: null, latestNumber: null };
+    return {
+      lineId: line.id,
+      partId: null,
+      merged: Boolean(existing),
+      superseded: false,
+      read: null,
+      latestNumber: null,
+    };
   });
 }
 
@@ -407,7 +604,15 @@ export async function updateLine(
   userId: string,
   listId: number,
   lineId: number,
-  patch: { quantity?: number; notes?: string; standardPartId?: number | null; supplier?: string; supplierNumber?: string; unitPrice?: string | null; ordered?: boolean },
+  patch: {
+    quantity?: number;
+    notes?: string;
+    standardPartId?: number | null;
+    supplier?: string;
+    supplierNumber?: string;
+    unitPrice?: string | null;
+    ordered?: boolean;
+  },
 ) {
   await ownList(userId, listId);
   const line = await JobListLine.findOne({ where: { id: lineId, listId, removedAt: null } });
@@ -415,7 +620,9 @@ export async function updateLine(
   if (patch.standardPartId) {
     const options = line.partId === null ? [] : ((await equivalentsFor([line.partId])).get(line.partId)?.options ?? []);
     if (!options.some((o) => o.standardPartId === patch.standardPartId)) {
-      throw new AppError("validation_failed", "That standard part is not an approved equivalent of this part.", { field: "standardPartId" });
+      throw new AppError("validation_failed", "That standard part is not an approved equivalent of this part.", {
+        field: "standardPartId",
+      });
     }
   }
   await line.update({
@@ -434,14 +641,21 @@ export async function updateLine(
 export async function removeLine(userId: string, listId: number, lineId: number) {
   await ownList(userId, listId);
   await sequelize.transaction(async (transaction) => {
-    const [, removed] = await sequelize.query("UPDATE job_list_lines SET removed_at = now(), updated_at = now() WHERE id = :lineId AND list_id = :listId AND removed_at IS NULL", {
-      replacements: { lineId, listId },
-      type: QueryTypes.UPDATE,
-      transaction,
-    });
+    const [, removed] = await sequelize.query(
+      "UPDATE job_list_lines SET removed_at = now(), updated_at = now() WHERE " +
+        "id = :lineId AND list_id = :listId AND removed_at IS NULL",
+      {
+        replacements: { lineId, listId },
+        type: QueryTypes.UPDATE,
+        transaction,
+      },
+    );
     if (removed === 0) throw new AppError("not_found", "That line is not on this list.");
     // Lines removed long ago are gone for good.
-    await sequelize.query(`DELETE FROM job_list_lines WHERE list_id = :listId AND removed_at < now() - interval '${UNDO_SECONDS} seconds'`, { replacements: { listId }, transaction });
+    await sequelize.query(
+      `DELETE FROM job_list_lines WHERE list_id = :listId AND removed_at < now() - interval '${UNDO_SECONDS} seconds'`,
+      { replacements: { listId }, transaction },
+    );
     await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
   });
   return { undoSeconds: UNDO_SECONDS };
@@ -457,16 +671,31 @@ export async function restoreLine(userId: string, listId: number, lineId: number
     await lockList(listId, transaction);
     const line = await JobListLine.findOne({ where: { id: lineId, listId }, transaction });
     const fresh = line?.removedAt && Date.now() - line.removedAt.getTime() <= UNDO_SECONDS * 1000;
-    if (!line || !line.removedAt) throw new AppError("not_found", "That line is not removed from this list, so there is nothing to undo.");
+    if (!line || !line.removedAt)
+      throw new AppError("not_found", "That line is not removed from this list, so there is nothing to undo.");
     if (!fresh) throw new AppError("conflict", "That removal is too old to undo. Add the part again.");
     const [twin] = await sequelize.query<{ id: number }>(
       line.partId !== null
         ? "SELECT id FROM job_list_lines WHERE list_id = :listId AND part_id = :partId AND removed_at IS NULL"
-        : "SELECT id FROM job_list_lines WHERE list_id = :listId AND part_id IS NULL AND removed_at IS NULL AND standard_item->>'kind' = :kind AND upper(standard_item->>'designation') = upper(:designation)",
-      { replacements: { listId, partId: line.partId, kind: line.standardItem?.kind ?? "", designation: line.standardItem?.designation ?? "" }, type: QueryTypes.SELECT, transaction },
+        : "SELECT id FROM job_list_lines WHERE list_id = :listId AND part_id IS " +
+            "NULL AND removed_at IS NULL AND standard_item->>'kind' = :kind AND " +
+            "upper(standard_item->>'designation') = upper(:designation)",
+      {
+        replacements: {
+          listId,
+          partId: line.partId,
+          kind: line.standardItem?.kind ?? "",
+          designation: line.standardItem?.designation ?? "",
+        },
+        type: QueryTypes.SELECT,
+        transaction,
+      },
     );
     if (twin) {
-      await sequelize.query("UPDATE job_list_lines SET quantity = least(quantity + :quantity, 9999), updated_at = now() WHERE id = :id", { replacements: { id: twin.id, quantity: line.quantity }, transaction });
+      await sequelize.query(
+        "UPDATE job_list_lines SET quantity = least(quantity + :quantity, 9999), updated_at = now() WHERE id = :id",
+        { replacements: { id: twin.id, quantity: line.quantity }, transaction },
+      );
       await line.destroy({ transaction });
     } else {
       await line.update({ removedAt: null }, { transaction });
@@ -498,13 +727,22 @@ type SerialRange = { serialFrom: number | null; serialTo: number | null };
  * the one the line's own serials (`own`) allow, since an early-only bearing means an early machine. Positions where
  * several parts remain and their records say which serials each was for come back `undecided`, to ask about.
  */
-export function planPositions(positions: Map<string, PlaceUsage[]>, latestOf: Map<number, number>, serial: number | null, own: SerialRange) {
+export function planPositions(
+  positions: Map<string, PlaceUsage[]>,
+  latestOf: Map<number, number>,
+  serial: number | null,
+  own: SerialRange,
+) {
   const overlapsOwn = (u: PlaceUsage) =>
-    (u.serial_to === null || own.serialFrom === null || u.serial_to >= own.serialFrom) && (u.serial_from === null || own.serialTo === null || u.serial_from <= own.serialTo);
+    (u.serial_to === null || own.serialFrom === null || u.serial_to >= own.serialFrom) &&
+    (u.serial_from === null || own.serialTo === null || u.serial_from <= own.serialTo);
   const planned: Array<{ partId: number; quantity: number }> = [];
   const undecided: PlaceUsage[][] = [];
   for (const candidates of positions.values()) {
-    const fitting = serial === null ? candidates.filter(overlapsOwn) : candidates.filter((u) => coversSerial({ serialFrom: u.serial_from, serialTo: u.serial_to }, serial));
+    const fitting =
+      serial === null
+        ? candidates.filter(overlapsOwn)
+        : candidates.filter((u) => coversSerial({ serialFrom: u.serial_from, serialTo: u.serial_to }, serial));
     const distinct = [...new Map(fitting.map((u) => [latestOf.get(u.part_id)!, u])).entries()];
     if (distinct.length === 0) continue;
     if (distinct.length > 1 && serial === null && fitting.some((u) => u.serial_from !== null || u.serial_to !== null)) {
@@ -520,14 +758,26 @@ export function planPositions(positions: Map<string, PlaceUsage[]>, latestOf: Ma
 
 /** The ranges the breaks of an assembly's serial-bound parts cut the serials into, each with a serial inside it. */
 function serialChoices(usages: PlaceUsage[], prefix: string | null, within: SerialRange): SerialChoice[] {
-  const inside = (v: number) => (within.serialFrom === null || v > within.serialFrom) && (within.serialTo === null || v <= within.serialTo);
-  const breaks = [...new Set(usages.flatMap((u) => [u.serial_from, u.serial_to === null ? null : u.serial_to + 1]).filter((v): v is number => v !== null && inside(v)))].sort((a, b) => a - b);
+  const inside = (v: number) =>
+    (within.serialFrom === null || v > within.serialFrom) && (within.serialTo === null || v <= within.serialTo);
+  const breaks = [
+    ...new Set(
+      usages
+        .flatMap((u) => [u.serial_from, u.serial_to === null ? null : u.serial_to + 1])
+        .filter((v): v is number => v !== null && inside(v)),
+    ),
+  ].sort((a, b) => a - b);
   const choices: SerialChoice[] = [];
   for (let i = 0; i <= breaks.length; i += 1) {
     const from = i === 0 ? within.serialFrom : breaks[i - 1];
     const to = i === breaks.length ? within.serialTo : breaks[i] - 1;
     const serial = from ?? Math.max(to ?? 1, 1);
-    const label = from === null ? `up to ${showSerial(to!, prefix)}` : to === null ? `${showSerial(from, prefix)} and later` : `${showSerial(from, prefix)} to ${showSerial(to, prefix)}`;
+    const label =
+      from === null
+        ? `up to ${showSerial(to!, prefix)}`
+        : to === null
+          ? `${showSerial(from, prefix)} and later`
+          : `${showSerial(from, prefix)} to ${showSerial(to, prefix)}`;
     choices.push({ serial: showSerial(serial, prefix), label });
   }
   return choices;
@@ -541,22 +791,53 @@ function serialChoices(usages: PlaceUsage[], prefix: string | null, within: Seri
  * one; with neither, nothing is added and the answer lists the serial ranges to choose from. A position the list
  * already fills (by this number, an older or newer one of its chain, or any other part in that position) is skipped.
  */
-export async function addRestOfAssembly(userId: string, listId: number, lineId: number, input: { serial?: string } = {}) {
+export async function addRestOfAssembly(
+  userId: string,
+  listId: number,
+  lineId: number,
+  input: { serial?: string } = {},
+) {
   const list = await ownList(userId, listId);
   const line = await JobListLine.findOne({ where: { id: lineId, listId, removedAt: null } });
   if (!line) throw new AppError("not_found", "That line is not on this list.");
-  if (line.partId === null) throw new AppError("validation_failed", "This line is a standard part sized from measurements; it belongs to no assembly.", { field: "lineId" });
+  if (line.partId === null)
+    throw new AppError(
+      "validation_failed",
+      "This line is a standard part sized from measurements; it belongs to no assembly.",
+      { field: "lineId" },
+    );
   const chain = (await chainMembers([line.partId])).get(line.partId)!;
-  const usages = await sequelize.query<{ machine_id: number; assembly_id: number; model: string; assembly: string; position: string; serial_prefix: string | null; serial_from: number | null; serial_to: number | null }>(
-    `SELECT u.machine_id, u.assembly_id, m.model, a.name AS assembly, coalesce(u.position, p.description) AS position, m.serial_prefix, u.serial_from, u.serial_to
-     FROM part_usages u JOIN machines m ON m.id = u.machine_id JOIN assemblies a ON a.id = u.assembly_id JOIN original_parts p ON p.id = u.part_id
-     WHERE u.part_id IN (:chain) ORDER BY (u.machine_id = :machineId) DESC, (u.part_id = :partId) DESC, m.model, a.name`,
+  const usages = await sequelize.query<{
+    machine_id: number;
+    assembly_id: number;
+    model: string;
+    assembly: string;
+    position: string;
+    serial_prefix: string | null;
+    serial_from: number | null;
+    serial_to: number | null;
+  }>(
+    `SELECT u.machine_id, u.assembly_id, m.model, a.name AS assembly, coalesce(u.position, p.description) AS position,
+      m.serial_prefix, u.serial_from, u.serial_to
+     FROM part_usages u JOIN machines m ON m.id = u.machine_id JOIN assemblies a ON a.id = u.assembly_id JOIN
+       original_parts p ON p.id = u.part_id
+     WHERE u.part_id IN (:chain) ORDER BY (u.machine_id = :machineId) DESC, (u.part_id = :partId) DESC, m.model,
+       a.name`,
     { replacements: { chain, partId: line.partId, machineId: list.machineId ?? 0 }, type: QueryTypes.SELECT },
   );
   const usage = usages[0];
-  if (!usage) throw new AppError("validation_failed", "The catalogue does not say where this part is fitted, so it has no assembly to add.", { field: "lineId" });
+  if (!usage)
+    throw new AppError(
+      "validation_failed",
+      "The catalogue does not say where this part is fitted, so it has no assembly to add.",
+      { field: "lineId" },
+    );
   const onListMachine = usage.machine_id === list.machineId;
-  const serial = input.serial ? parseSerial(input.serial, usage.serial_prefix, "serial") : onListMachine ? list.machineSerial : null;
+  const serial = input.serial
+    ? parseSerial(input.serial, usage.serial_prefix, "serial")
+    : onListMachine
+      ? list.machineSerial
+      : null;
 
   const place = await sequelize.query<PlaceUsage>(
     `SELECT u.part_id, coalesce(u.position, p.description) AS position, u.quantity, u.serial_from, u.serial_to
@@ -565,14 +846,19 @@ export async function addRestOfAssembly(userId: string, listId: number, lineId: 
     { replacements: { machineId: usage.machine_id, assemblyId: usage.assembly_id }, type: QueryTypes.SELECT },
   );
   // What the list already holds, with every number of each line's chain: a position any of them sits in is filled.
-  const listed = (await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"] })).flatMap((l) => (l.partId === null ? [] : [l.partId]));
+  const listed = (await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"] })).flatMap(
+    (l) => (l.partId === null ? [] : [l.partId]),
+  );
   const listedChains = await chainMembers(listed);
   const onList = new Set([...listedChains.values()].flat());
   const filled = new Set([usage.position, ...place.filter((u) => onList.has(u.part_id)).map((u) => u.position)]);
 
   const positions = new Map<string, PlaceUsage[]>();
-  for (const u of place) if (!filled.has(u.position)) positions.set(u.position, [...(positions.get(u.position) ?? []), u]);
-  const latest = await Promise.all([...new Set(place.map((u) => u.part_id))].map(async (id) => [id, (await loadChain(id)).latestId] as const));
+  for (const u of place)
+    if (!filled.has(u.position)) positions.set(u.position, [...(positions.get(u.position) ?? []), u]);
+  const latest = await Promise.all(
+    [...new Set(place.map((u) => u.part_id))].map(async (id) => [id, (await loadChain(id)).latestId] as const),
+  );
   const latestOf = new Map(latest);
 
   const own = { serialFrom: usage.serial_from, serialTo: usage.serial_to };
@@ -580,23 +866,40 @@ export async function addRestOfAssembly(userId: string, listId: number, lineId: 
   if (undecided.length > 0) {
     const choices = serialChoices(undecided.flat(), usage.serial_prefix, own);
     if (choices.length > 1) {
-      throw new AppError("validation_failed", `Parts of the ${usage.model} ${usage.assembly.toLowerCase()} changed with the serial number. Which serial is the machine?`, {
-        field: "serial",
-        choices,
-      });
+      throw new AppError(
+        "validation_failed",
+        `Parts of the ${usage.model} ${usage.assembly.toLowerCase()} changed ` +
+          `with the serial number. Which serial is the machine?`,
+        {
+          field: "serial",
+          choices,
+        },
+      );
     }
     // Records that overlap with no serial between them to tell them apart: the earliest-listed part of each.
-    for (const fitting of undecided) planned.push({ partId: latestOf.get(fitting[0].part_id)!, quantity: fitting[0].quantity });
+    for (const fitting of undecided)
+      planned.push({ partId: latestOf.get(fitting[0].part_id)!, quantity: fitting[0].quantity });
   }
 
   const best = await equivalentsFor(planned.map((p) => p.partId));
   // Work out every line first (reads), then write them all in one transaction: all of the assembly lands, or none.
   const added = await sequelize.transaction(async (transaction) => {
     await lockList(listId, transaction);
-    const now = new Set((await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"], transaction })).map((l) => l.partId));
+    const now = new Set(
+      (await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"], transaction })).map(
+        (l) => l.partId,
+      ),
+    );
     const rows = planned
       .filter((p) => !now.has(p.partId))
-      .map((p) => ({ listId, partId: p.partId, requestedNumber: null, quantity: p.quantity, standardPartId: best.get(p.partId)?.options[0]?.standardPartId ?? null, notes: null }));
+      .map((p) => ({
+        listId,
+        partId: p.partId,
+        requestedNumber: null,
+        quantity: p.quantity,
+        standardPartId: best.get(p.partId)?.options[0]?.standardPartId ?? null,
+        notes: null,
+      }));
     await JobListLine.bulkCreate(rows, { transaction });
     await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
     return rows.length;
@@ -645,7 +948,13 @@ export function listCsv(view: ListView): string {
     l.chosen?.designation ?? "",
     l.chosen ? STANDARD_KIND_NAMES[l.chosen.kind] : l.categoryName,
     l.chosen ? standardSizes(l.chosen) : "",
-    l.measured ? "sized from measurements" : l.chosen ? FIT_NAMES[l.chosen.fit].word : l.method ? `no standard part: ${l.method}` : "no approved standard part",
+    l.measured
+      ? "sized from measurements"
+      : l.chosen
+        ? FIT_NAMES[l.chosen.fit].word
+        : l.method
+          ? `no standard part: ${l.method}`
+          : "no approved standard part",
     l.quantity,
     l.supplier ?? "",
     l.supplierNumber ?? "",
@@ -657,6 +966,11 @@ export function listCsv(view: ListView): string {
 }
 
 export function csvFileName(view: ListView): string {
-  const slug = view.title.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "job-list";
+  const slug =
+    view.title
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 60) || "job-list";
   return `${slug}.csv`;
 }

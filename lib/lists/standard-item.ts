@@ -6,7 +6,11 @@ import { round } from "@/lib/standards/units";
 export const MEASURED_KINDS = ["bearing", "lip_seal", "v_belt"] as const;
 export type MeasuredKind = (typeof MEASURED_KINDS)[number];
 
-export const CATEGORY_OF_KIND: Record<MeasuredKind, PartCategory> = { bearing: "bearing", lip_seal: "lip_seal", v_belt: "v_belt" };
+export const CATEGORY_OF_KIND: Record<MeasuredKind, PartCategory> = {
+  bearing: "bearing",
+  lip_seal: "lip_seal",
+  v_belt: "v_belt",
+};
 
 /** A standard part on a job list by its designation and sizes, worked out from measurements, with no factory part. */
 export interface StandardItem {

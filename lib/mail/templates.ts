@@ -13,17 +13,23 @@ interface Letter {
   after?: string[];
 }
 
+const BUTTON_STYLE =
+  "background:#8a5d12;color:#fff;padding:12px 18px;border-radius:6px;text-decoration:none;font-weight:bold";
+const NOTE_STYLE = "margin:0 0 14px;font-size:13px;color:#555";
+const BODY_STYLE = "font-family:Arial,sans-serif;background:#f6f2ea;color:#23262b;padding:24px";
+
 function compose(to: string, letter: Letter): OutgoingMail {
   const textParts = [letter.greeting, ...letter.paragraphs];
   if (letter.action) textParts.push(`${letter.action.label}:\n${letter.action.url}`);
   textParts.push(...(letter.after ?? []), "— Understudy, the standard-part catalogue for old machines");
 
   const p = (s: string) => `<p style="margin:0 0 14px;white-space:pre-line">${escapeHtml(s)}</p>`;
+  const url = letter.action ? escapeHtml(letter.action.url) : "";
   const button = letter.action
-    ? `<p style="margin:20px 0"><a href="${escapeHtml(letter.action.url)}" style="background:#8a5d12;color:#fff;padding:12px 18px;border-radius:6px;text-decoration:none;font-weight:bold">${escapeHtml(letter.action.label)}</a></p>
-       <p style="margin:0 0 14px;font-size:13px;color:#555">If the button does not work, copy this address into your browser:<br>${escapeHtml(letter.action.url)}</p>`
+    ? `<p style="margin:20px 0"><a href="${url}" style="${BUTTON_STYLE}">${escapeHtml(letter.action.label)}</a></p>
+       <p style="${NOTE_STYLE}">If the button does not work, copy this address into your browser:<br>${url}</p>`
     : "";
-  const html = `<!doctype html><html><body style="font-family:Arial,sans-serif;background:#f6f2ea;color:#23262b;padding:24px">
+  const html = `<!doctype html><html><body style="${BODY_STYLE}">
 <div style="max-width:560px;margin:0 auto;background:#fffdf8;border:1px solid #d9d1c3;border-radius:8px;padding:24px">
 <p style="margin:0 0 18px;font-weight:bold;letter-spacing:.04em">UNDERSTUDY</p>
 ${p(letter.greeting)}${letter.paragraphs.map(p).join("")}${button}${(letter.after ?? []).map(p).join("")}
@@ -39,7 +45,8 @@ export function verifyEmailMail(to: string, url: string): OutgoingMail {
     greeting: "Hello,",
     paragraphs: [
       "Someone, we hope you, opened an Understudy account with this address.",
-      "Confirm the address to sign in, propose crosses you have fitted and keep job lists. The link works for 48 hours.",
+      "Confirm the address to sign in, propose crosses you have fitted and " +
+        "keep job lists. The link works for 48 hours.",
     ],
     action: { label: "Confirm my e-mail", url },
     after: ["If you did not ask for this, ignore this message: no account is used until the address is confirmed."],
@@ -82,7 +89,10 @@ export function decisionMail(to: string, letter: DecisionLetter): OutgoingMail {
   const byOutcome = {
     approved: {
       subject: `Your cross is in the catalogue: ${what}`,
-      paragraphs: [`A moderator checked your proposal ${what} and it is now in the catalogue, where other restorers will find it.`, "Thank you for taking the time to write it up."],
+      paragraphs: [
+        `A moderator checked your proposal ${what} and it is now in the catalogue, where other restorers will find it.`,
+        "Thank you for taking the time to write it up.",
+      ],
       label: "See it on the part's page",
     },
     rejected: {
@@ -92,7 +102,10 @@ export function decisionMail(to: string, letter: DecisionLetter): OutgoingMail {
     },
     changes_requested: {
       subject: `Your proposal needs a change: ${what}`,
-      paragraphs: [`A moderator checked your proposal ${what} and sent it back to you. Change it and send it again; it keeps its place.`],
+      paragraphs: [
+        `A moderator checked your proposal ${what} and sent it back to you. ` +
+          `Change it and send it again; it keeps its place.`,
+      ],
       label: "Change the proposal",
     },
   }[letter.outcome];
@@ -120,7 +133,9 @@ export function digestMail(to: string, items: DigestItem[], queueUrl: string, wa
     subject: `${items.length} new ${items.length === 1 ? "proposal" : "proposals"} to review`,
     greeting: "Hello,",
     paragraphs: [
-      `Members sent ${items.length} new ${items.length === 1 ? "proposal" : "proposals"} since the last summary; ${waitingTotal} in all are waiting in the review queue.`,
+      `Members sent ${items.length} new ` +
+        `${items.length === 1 ? "proposal" : "proposals"} since the last ` +
+        `summary; ${waitingTotal} in all are waiting in the review queue.`,
       lines.join("\n"),
     ],
     action: { label: "Open the review queue", url: queueUrl },

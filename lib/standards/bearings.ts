@@ -1,5 +1,11 @@
 import { StandardsInputError } from "@/lib/standards/errors";
-import { DEEP_GROOVE, R_SERIES, SAME_ENVELOPE, SERIES_INFO, type DeepGrooveSeries } from "@/lib/standards/bearing-tables";
+import {
+  DEEP_GROOVE,
+  R_SERIES,
+  SAME_ENVELOPE,
+  SERIES_INFO,
+  type DeepGrooveSeries,
+} from "@/lib/standards/bearing-tables";
 import { byScore, describeDeviations, scoreDimensions, type Deviation } from "@/lib/standards/match";
 import { nearMiss } from "@/lib/standards/nominal";
 import { MM_PER_INCH, round, type LengthUnit } from "@/lib/standards/units";
@@ -18,16 +24,17 @@ export interface StandardBearing {
 
 /** Every bearing the engine knows, built once from the tables. */
 export const ALL_BEARINGS: StandardBearing[] = [
-  ...(Object.entries(DEEP_GROOVE) as Array<[DeepGrooveSeries, Array<[string, number, number, number]>]>).flatMap(([series, rows]) =>
-    rows.map(([boreCode, d, D, B]) => ({
-      designation: `${series}${boreCode}`,
-      series,
-      boreCode,
-      boreMm: d,
-      outsideDiameterMm: D,
-      widthMm: B,
-      system: "metric" as const,
-    })),
+  ...(Object.entries(DEEP_GROOVE) as Array<[DeepGrooveSeries, Array<[string, number, number, number]>]>).flatMap(
+    ([series, rows]) =>
+      rows.map(([boreCode, d, D, B]) => ({
+        designation: `${series}${boreCode}`,
+        series,
+        boreCode,
+        boreMm: d,
+        outsideDiameterMm: D,
+        widthMm: B,
+        system: "metric" as const,
+      })),
   ),
   ...R_SERIES.map(([designation, d, D, B, closed]) => ({
     designation,
@@ -43,7 +50,9 @@ export const ALL_BEARINGS: StandardBearing[] = [
 
 /** What the matcher compares a measurement with: each size once, and the wider closed form as a size of its own. */
 const MATCHABLE: StandardBearing[] = ALL_BEARINGS.flatMap((b) =>
-  b.closedWidthMm === undefined ? [b] : [b, { ...b, designation: `${b.designation}-2RS`, widthMm: b.closedWidthMm, closedWidthMm: undefined }],
+  b.closedWidthMm === undefined
+    ? [b]
+    : [b, { ...b, designation: `${b.designation}-2RS`, widthMm: b.closedWidthMm, closedWidthMm: undefined }],
 );
 
 const byDesignation = new Map(ALL_BEARINGS.map((b) => [b.designation, b]));
@@ -117,7 +126,12 @@ const CLEARANCE_TEXT: Record<string, string> = {
 };
 
 function readSuffixes(text: string): SuffixState {
-  const state: SuffixState = { closure: { kind: "open", sides: 0 }, snap: { groove: false, ring: false }, clearance: "CN", unknown: [] };
+  const state: SuffixState = {
+    closure: { kind: "open", sides: 0 },
+    snap: { groove: false, ring: false },
+    clearance: "CN",
+    unknown: [],
+  };
   for (const chunk of text.split(/[\s\-./]+/).filter(Boolean)) {
     let rest = chunk;
     while (rest.length > 0) {
@@ -135,7 +149,9 @@ function readSuffixes(text: string): SuffixState {
 
 /** The designation in one consistent trade form: 6205-2RS N C3. */
 function writeDesignation(base: string, s: SuffixState): string {
-  const closure = { shield: ["", "-Z", "-2Z"], "contact seal": ["", "-RS", "-2RS"], open: ["", "", ""] }[s.closure.kind][s.closure.sides];
+  const closure = { shield: ["", "-Z", "-2Z"], "contact seal": ["", "-RS", "-2RS"], open: ["", "", ""] }[
+    s.closure.kind
+  ][s.closure.sides];
   const snap = s.snap.ring ? " NR" : s.snap.groove ? " N" : "";
   const clearance = s.clearance === "CN" ? "" : ` ${s.clearance}`;
   return `${base}${closure}${snap}${clearance}`;
@@ -174,7 +190,8 @@ export function decodeBearing(input: string): DecodedBearing {
       throw new DesignationError(
         bore === null
           ? `"${metric[2]}" is not a bore code. Codes are 00, 01, 02, 03, then 04 and up (× 5 mm).`
-          : `Series ${metric[1]} has no ${bore} mm bore in the tables (bore code ${metric[2]}). Check the number, or measure the bearing.`,
+          : `Series ${metric[1]} has no ${bore} mm bore in the tables (bore code ` +
+              `${metric[2]}). Check the number, or measure the bearing.`,
       );
     }
   } else if (old) {
@@ -182,21 +199,41 @@ export function decodeBearing(input: string): DecodedBearing {
     rest = old[3];
     if (base) {
       notes.push(
-        `"${old[1]}${old[2]}" is read as ${base.designation}: older numbering often left out the leading 6 of deep groove ball bearings. This is common practice, not a standard; check the size.`,
+        `"${old[1]}${old[2]}" is read as ${base.designation}: older numbering ` +
+          `often left out the leading 6 of deep groove ball bearings. This is ` +
+          `common practice, not a standard; check the size.`,
       );
     }
   }
   if (!base) {
-    throw new DesignationError(`"${input.trim()}" is not a deep groove ball bearing designation we can read. Try a form like 6205-2RS, 62/22 or R8.`);
+    throw new DesignationError(
+      `"${input.trim()}" is not a deep groove ball bearing designation we can ` +
+        `read. Try a form like 6205-2RS, 62/22 or R8.`,
+    );
   }
 
   const suffixes = readSuffixes(rest);
   if (suffixes.unknown.length > 0) {
-    notes.push(`Not decoded: ${suffixes.unknown.join(", ")}. Makers add their own suffix letters (cage, grease, noise grade); keep them when ordering and ask what they mean.`);
+    notes.push(
+      `Not decoded: ${suffixes.unknown.join(", ")}. Makers add their own ` +
+        `suffix letters (cage, grease, noise grade); keep them when ordering ` +
+        `and ask what they mean.`,
+    );
   }
-  if (suffixes.closure.kind === "shield") notes.push("Shields do not touch the inner ring: low drag, but they keep out only coarse dirt. For wet or muddy places a sealed bearing is usual.");
-  if (suffixes.closure.kind === "contact seal") notes.push("Rubbing seals keep out water and grit better than shields, at the cost of a little drag and a lower speed limit.");
-  if (suffixes.snap.groove && !suffixes.snap.ring) notes.push("N: a snap-ring groove in the outer ring; the ring itself is ordered separately or comes with the NR form.");
+  if (suffixes.closure.kind === "shield")
+    notes.push(
+      "Shields do not touch the inner ring: low drag, but they keep out only " +
+        "coarse dirt. For wet or muddy places a sealed bearing is usual.",
+    );
+  if (suffixes.closure.kind === "contact seal")
+    notes.push(
+      "Rubbing seals keep out water and grit better than shields, at the cost " +
+        "of a little drag and a lower speed limit.",
+    );
+  if (suffixes.snap.groove && !suffixes.snap.ring)
+    notes.push(
+      "N: a snap-ring groove in the outer ring; the ring itself is ordered separately or comes with the NR form.",
+    );
   const envelope = SAME_ENVELOPE[base.series as DeepGrooveSeries];
   if (envelope) notes.push(`Same boundary dimensions, different bearings: ${envelope.join("; ")}.`);
 
@@ -204,7 +241,8 @@ export function decodeBearing(input: string): DecodedBearing {
     designation: writeDesignation(base.designation, suffixes),
     input: input.trim(),
     series: base.series,
-    seriesName: base.series === "R" ? "inch radial ball bearing, R series" : SERIES_INFO[base.series as DeepGrooveSeries].name,
+    seriesName:
+      base.series === "R" ? "inch radial ball bearing, R series" : SERIES_INFO[base.series as DeepGrooveSeries].name,
     boreCode: base.boreCode,
     boreMm: base.boreMm,
     outsideDiameterMm: base.outsideDiameterMm,
@@ -214,7 +252,11 @@ export function decodeBearing(input: string): DecodedBearing {
     clearance: { group: suffixes.clearance, text: CLEARANCE_TEXT[suffixes.clearance] },
     snapRing: {
       ...suffixes.snap,
-      text: suffixes.snap.ring ? "snap-ring groove with the snap ring fitted" : suffixes.snap.groove ? "snap-ring groove, no ring" : "no snap-ring groove",
+      text: suffixes.snap.ring
+        ? "snap-ring groove with the snap ring fitted"
+        : suffixes.snap.groove
+          ? "snap-ring groove, no ring"
+          : "no snap-ring groove",
     },
     unknownSuffixes: suffixes.unknown,
     notes,
@@ -248,20 +290,46 @@ export interface BearingMatchInput {
  */
 export function matchBearing(input: BearingMatchInput): { candidates: BearingCandidate[]; warnings: string[] } {
   const measured = [
-    { name: "bore", label: "bore", measuredMm: input.boreMm, toleranceMm: input.toleranceMm, surface: "housing" as const },
-    { name: "od", label: "OD", measuredMm: input.outsideDiameterMm, toleranceMm: input.toleranceMm, surface: "shaft" as const },
-    ...(input.widthMm ? [{ name: "width", label: "width", measuredMm: input.widthMm, toleranceMm: input.toleranceMm }] : []),
+    {
+      name: "bore",
+      label: "bore",
+      measuredMm: input.boreMm,
+      toleranceMm: input.toleranceMm,
+      surface: "housing" as const,
+    },
+    {
+      name: "od",
+      label: "OD",
+      measuredMm: input.outsideDiameterMm,
+      toleranceMm: input.toleranceMm,
+      surface: "shaft" as const,
+    },
+    ...(input.widthMm
+      ? [{ name: "width", label: "width", measuredMm: input.widthMm, toleranceMm: input.toleranceMm }]
+      : []),
   ];
   const candidates: BearingCandidate[] = [];
   for (const bearing of MATCHABLE) {
-    const scored = scoreDimensions(measured, { bore: bearing.boreMm, od: bearing.outsideDiameterMm, width: bearing.widthMm }, input.unit);
+    const scored = scoreDimensions(
+      measured,
+      { bore: bearing.boreMm, od: bearing.outsideDiameterMm, width: bearing.widthMm },
+      input.unit,
+    );
     if (!scored) continue;
     const warnings: string[] = [];
-    if (!scored.withinTolerance) warnings.push("Outside the tolerance you gave on at least one dimension: a possible match only.");
+    if (!scored.withinTolerance)
+      warnings.push("Outside the tolerance you gave on at least one dimension: a possible match only.");
     const envelope = SAME_ENVELOPE[bearing.series as DeepGrooveSeries];
-    if (envelope) warnings.push(`Same size is not the same part: ${envelope[0]} share these dimensions. Check the rolling elements.`);
+    if (envelope)
+      warnings.push(
+        `Same size is not the same part: ${envelope[0]} share these dimensions. Check the rolling elements.`,
+      );
     if (bearing.closedWidthMm !== undefined) {
-      warnings.push(`The open ${bearing.designation} is narrower than its shielded or sealed form (${round(bearing.closedWidthMm / MM_PER_INCH, 3)} in wide as ${bearing.designation}-2RS or -ZZ).`);
+      warnings.push(
+        `The open ${bearing.designation} is narrower than its shielded or ` +
+          `sealed form (${round(bearing.closedWidthMm / MM_PER_INCH, 3)} in wide ` +
+          `as ${bearing.designation}-2RS or -ZZ).`,
+      );
     } else if (bearing.series === "R" && bearing.designation.endsWith("-2RS")) {
       warnings.push("This width is the shielded or sealed form's: ask for -2RS (rubber seals) or -ZZ (metal shields).");
     }
@@ -284,7 +352,9 @@ export function matchBearing(input: BearingMatchInput): { candidates: BearingCan
   const warnings: string[] = [];
   if (!candidates.some((c) => c.deviations.every((d) => d.withinTolerance))) {
     warnings.push(
-      "No standard deep groove ball bearing fits these three sizes within your tolerance. Re-measure; the part may be worn, misread (inch against metric), or a special made for the machine.",
+      "No standard deep groove ball bearing fits these three sizes within " +
+        "your tolerance. Re-measure; the part may be worn, misread (inch " +
+        "against metric), or a special made for the machine.",
     );
   }
   return { candidates: candidates.slice(0, 10), warnings };
@@ -296,9 +366,12 @@ function addCrossSystemWarnings(candidates: BearingCandidate[]): void {
   const metric = candidates.filter((c) => c.system === "metric");
   for (const i of inch) {
     for (const m of metric) {
-      const miss = nearMiss(i.boreMm / MM_PER_INCH, m.boreMm) ?? nearMiss(i.outsideDiameterMm / MM_PER_INCH, m.outsideDiameterMm);
+      const miss =
+        nearMiss(i.boreMm / MM_PER_INCH, m.boreMm) ?? nearMiss(i.outsideDiameterMm / MM_PER_INCH, m.outsideDiameterMm);
       if (!miss) continue;
-      const text = `${i.designation} (inch) and ${m.designation} (metric) are close in size but not interchangeable: ${miss.message}`;
+      const text =
+        `${i.designation} (inch) and ${m.designation} (metric) are close in ` +
+        `size but not interchangeable: ${miss.message}`;
       i.warnings.push(text);
       m.warnings.push(text);
     }

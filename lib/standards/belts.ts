@@ -1,5 +1,11 @@
 import { StandardsInputError } from "@/lib/standards/errors";
-import { BELT_SECTIONS, METRIC_CLASSICAL, R40, type BeltSection, type LengthBasis } from "@/lib/standards/belt-sections";
+import {
+  BELT_SECTIONS,
+  METRIC_CLASSICAL,
+  R40,
+  type BeltSection,
+  type LengthBasis,
+} from "@/lib/standards/belt-sections";
 import { byScore, describeDeviations, scoreDimensions, type Deviation } from "@/lib/standards/match";
 import { fromMm, round, toMm, type LengthUnit } from "@/lib/standards/units";
 
@@ -9,7 +15,12 @@ export class BeltError extends StandardsInputError {}
 
 export function findSection(section: string): BeltSection {
   const found = bySection.get(section.trim().toUpperCase()) ?? bySection.get(section.trim());
-  if (!found) throw new BeltError(`"${section}" is not a belt section we know. Known: ${BELT_SECTIONS.filter((s) => s.family !== "automotive").map((s) => s.section).join(", ")}.`);
+  if (!found)
+    throw new BeltError(
+      `"${section}" is not a belt section we know. Known: ${BELT_SECTIONS.filter((s) => s.family !== "automotive")
+        .map((s) => s.section)
+        .join(", ")}.`,
+    );
   return found;
 }
 
@@ -22,7 +33,9 @@ export interface BeltLengths {
 /** The three lengths of one belt, from any one of them, in the section's own unit. */
 export function beltLengths(section: BeltSection, basis: LengthBasis | "pitch", length: number): BeltLengths {
   if (section.height === null || section.pitchOffset === null) {
-    throw new BeltError(`${section.section} belts are sold by top width and outside length; their lengths are not converted.`);
+    throw new BeltError(
+      `${section.section} belts are sold by top width and outside length; their lengths are not converted.`,
+    );
   }
   const toOutside = 2 * Math.PI * section.height;
   const long = section.long;
@@ -30,7 +43,9 @@ export function beltLengths(section: BeltSection, basis: LengthBasis | "pitch", 
   if (basis === "inside") inside = length;
   else if (basis === "outside") inside = length - toOutside;
   // A datum length long enough to be a long belt's is read with the long offset (B225 = 225.3 in datum, not 226.8).
-  else inside = long && length - long.pitchOffset >= long.fromInside ? length - long.pitchOffset : length - section.pitchOffset;
+  else
+    inside =
+      long && length - long.pitchOffset >= long.fromInside ? length - long.pitchOffset : length - section.pitchOffset;
   const offset = long && inside >= long.fromInside ? long.pitchOffset : section.pitchOffset;
   return { inside, pitch: inside + offset, outside: inside + toOutside };
 }
@@ -54,27 +69,43 @@ export interface DecodedBelt {
 // a larger number is a metric length in millimetres written without its Li/Ld/La.
 const LONGEST_INCH: Record<string, number> = { A: 200, B: 400, C: 450, D: 700, E: 700 };
 
-const METRIC_BASIS: Record<string, LengthBasis> = { LI: "inside", LD: "datum", LW: "datum", LP: "datum", LA: "outside" };
+const METRIC_BASIS: Record<string, LengthBasis> = {
+  LI: "inside",
+  LD: "datum",
+  LW: "datum",
+  LP: "datum",
+  LA: "outside",
+};
 
 /**
  * Decodes `B60`, `B-60`, `4L380`, `5V800`, `SPA1250`, `spa 1250`, and metric classical belts by their marked length in
  * millimetres: `B 1600 Li` (inside), `B 1640 Ld` (datum), `B 1669 La` (outside), also `Z 800 Li` and `SPA 1232 Li`.
  */
 export function decodeBelt(input: string): DecodedBelt {
-  const text = input.trim().toUpperCase().replace(/[\s-]+/g, "");
+  const text = input
+    .trim()
+    .toUpperCase()
+    .replace(/[\s-]+/g, "");
   const metric = /^(SPZ|SPA|SPB|SPC|[ZA-E])(\d+(?:\.\d+)?)(LI|LD|LW|LP|LA)$/.exec(text);
   if (metric) return decodeMetricBelt(input, metric[1], Number(metric[2]), METRIC_BASIS[metric[3]]);
   const m = /^(SPZ|SPA|SPB|SPC|[2-5]L|[358]V|[A-E])(\d+(?:\.\d+)?)$/.exec(text);
-  if (!m) throw new BeltError(`"${input.trim()}" is not a V-belt designation we can read. Try B60, 4L380, 5V800, SPA1250 or B 1600 Li.`);
+  if (!m)
+    throw new BeltError(
+      `"${input.trim()}" is not a V-belt designation we can read. Try B60, 4L380, 5V800, SPA1250 or B 1600 Li.`,
+    );
   if (/^[A-E]$/.test(m[1]) && Number(m[2]) > LONGEST_INCH[m[1]]) {
     throw new BeltError(
-      `${m[1]}${m[2]} would be ${m[2]} in long. A metric belt is marked with its length in millimetres and what was measured: ${m[1]} ${m[2]} Li (inside), Ld (datum) or La (outside).`,
+      `${m[1]}${m[2]} would be ${m[2]} in long. A metric belt is marked with ` +
+        `its length in millimetres and what was measured: ${m[1]} ${m[2]} Li ` +
+        `(inside), Ld (datum) or La (outside).`,
     );
   }
   const section = findSection(m[1]);
   const number = Number(m[2]);
   if (section.designationScale === 10 && !Number.isInteger(number)) {
-    throw new BeltError(`${section.section} lengths are written in tenths of an inch without a point: 4L380 is 38.0 in.`);
+    throw new BeltError(
+      `${section.section} lengths are written in tenths of an inch without a point: 4L380 is 38.0 in.`,
+    );
   }
   const length = number / section.designationScale;
   const lengths = beltLengths(section, section.designatedBy, length);
@@ -87,8 +118,17 @@ export function decodeBelt(input: string): DecodedBelt {
       datum: `The number is the datum (pitch) length in millimetres.`,
     }[section.designatedBy],
   ];
-  if (section.section === "4L") notes.push("A 4L belt has the same section as an A belt but is made for light duty; on a tractor or engine drive use an A belt of the same pitch length (about 2 in shorter by number).");
-  if (section.section === "5L") notes.push("A 5L belt matches a B belt's section but is light-duty; use a B belt of the same pitch length on a working drive.");
+  if (section.section === "4L")
+    notes.push(
+      "A 4L belt has the same section as an A belt but is made for light " +
+        "duty; on a tractor or engine drive use an A belt of the same pitch " +
+        "length (about 2 in shorter by number).",
+    );
+  if (section.section === "5L")
+    notes.push(
+      "A 5L belt matches a B belt's section but is light-duty; use a B belt " +
+        "of the same pitch length on a working drive.",
+    );
   return {
     designation: `${section.section}${m[2]}`,
     section: section.section,
@@ -118,15 +158,23 @@ function decodeMetricBelt(input: string, sectionName: string, length: number, ba
   const notes = [
     `The number is the ${basis === "datum" ? "datum (pitch)" : basis} length in millimetres (ISO 4184 ${word}).`,
     classical
-      ? `For a metric ${sectionName} belt: datum = inside + ${datumOffset} mm, outside = inside + ${Math.round(toOutside)} mm (ISO 4184).`
+      ? `For a metric ${sectionName} belt: datum = inside + ${datumOffset} mm, ` +
+        `outside = inside + ${Math.round(toOutside)} mm (ISO 4184).`
       : `ISO narrow belts are sold by datum length: ask for ${sectionName}${Math.round(inside + datumOffset)}.`,
   ];
-  const inch = classical && sectionName !== "Z" ? BELT_SECTIONS.find((s) => s.section === sectionName && s.family === "classical") : undefined;
+  const inch =
+    classical && sectionName !== "Z"
+      ? BELT_SECTIONS.find((s) => s.section === sectionName && s.family === "classical")
+      : undefined;
   if (inch) {
     // The same belt by the inch numbering: the inch belt of the nearest datum length.
     const pitchIn = (inside + datumOffset) / 25.4;
     const inchInside = Math.round(beltLengths(inch, "pitch", pitchIn).inside);
-    notes.push(`By inch numbering, the nearest is ${sectionName}${inchInside} (${round(beltLengths(inch, "inside", inchInside).pitch, 1)} in datum length).`);
+    notes.push(
+      `By inch numbering, the nearest is ${sectionName}${inchInside} ` +
+        `(${round(beltLengths(inch, "inside", inchInside).pitch, 1)} in datum ` +
+        `length).`,
+    );
   }
   return {
     designation: `${sectionName} ${round(length, 0)} ${word}`,
@@ -145,10 +193,16 @@ function decodeMetricBelt(input: string, sectionName: string, length: number, ba
 }
 
 /** Nearby standard lengths in the section's designation basis, nearest first. */
-export function nearestStandardLengths(section: BeltSection, designatedLength: number, count = 3): Array<{ designation: string; length: number; nearest: boolean }> {
+export function nearestStandardLengths(
+  section: BeltSection,
+  designatedLength: number,
+  count = 3,
+): Array<{ designation: string; length: number; nearest: boolean }> {
   let lengths: number[];
-  if (section.family === "narrow") lengths = [10, 100].flatMap((k) => R40.map((n) => (n * k) / 100)); // 25.0 … 950 in, tenths below
-  else if (section.family === "iso-narrow") lengths = [1, 10].flatMap((k) => R40.map((n) => n * k)); // 100 … 9500 mm
+  if (section.family === "narrow")
+    lengths = [10, 100].flatMap((k) => R40.map((n) => (n * k) / 100)); // 25.0 … 950 in, tenths below
+  else if (section.family === "iso-narrow")
+    lengths = [1, 10].flatMap((k) => R40.map((n) => n * k)); // 100 … 9500 mm
   else {
     // Classical and light-duty belts are commonly stocked in whole-inch steps: common practice (no published source).
     const centre = Math.round(designatedLength);
@@ -159,7 +213,11 @@ export function nearestStandardLengths(section: BeltSection, designatedLength: n
     .sort((a, b) => a.distance - b.distance)
     .slice(0, count);
   return nearest
-    .map(({ length }) => ({ designation: `${section.section}${round(length * section.designationScale, 1)}`, length, nearest: length === nearest[0]?.length }))
+    .map(({ length }) => ({
+      designation: `${section.section}${round(length * section.designationScale, 1)}`,
+      length,
+      nearest: length === nearest[0]?.length,
+    }))
     .sort((a, b) => a.length - b.length);
 }
 
@@ -180,11 +238,24 @@ export interface SectionCandidate {
  * The likely section from a measured top width and (optionally) thickness. A used belt has worn narrower at the top,
  * which is forgiven; sections of similar width but different depth or angle are pointed out.
  */
-export function identifySection(input: { topWidthMm: number; heightMm?: number; unit: LengthUnit; toleranceMm?: number }): SectionCandidate[] {
+export function identifySection(input: {
+  topWidthMm: number;
+  heightMm?: number;
+  unit: LengthUnit;
+  toleranceMm?: number;
+}): SectionCandidate[] {
   const tolerance = input.toleranceMm ?? Math.max(0.5, input.topWidthMm * 0.04);
   const measured = [
-    { name: "top", label: "top width", measuredMm: input.topWidthMm, toleranceMm: tolerance, surface: "belt-width" as const },
-    ...(input.heightMm ? [{ name: "height", label: "thickness", measuredMm: input.heightMm, toleranceMm: tolerance }] : []),
+    {
+      name: "top",
+      label: "top width",
+      measuredMm: input.topWidthMm,
+      toleranceMm: tolerance,
+      surface: "belt-width" as const,
+    },
+    ...(input.heightMm
+      ? [{ name: "height", label: "thickness", measuredMm: input.heightMm, toleranceMm: tolerance }]
+      : []),
   ];
   const out: SectionCandidate[] = [];
   for (const s of BELT_SECTIONS) {
@@ -218,14 +289,35 @@ export function identifySection(input: { topWidthMm: number; heightMm?: number; 
       const topDiff = Math.abs(toMm(s.topWidth, s.unit) - toMm(bestSection.topWidth, bestSection.unit));
       const depthDiff = Math.abs(toMm(s.height, s.unit) - toMm(bestSection.height, bestSection.unit));
       if (topDiff <= 1 && depthDiff > 1) {
-        best.warnings.push(`${s.section} has nearly the same top width but is ${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} ${toMm(s.height, s.unit) > toMm(bestSection.height, bestSection.unit) ? "deeper" : "shallower"}: it rides at another height in the groove. Measure the thickness to be sure.`);
+        best.warnings.push(
+          `${s.section} has nearly the same top width but is ` +
+            `${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} ` +
+            `${toMm(s.height, s.unit) > toMm(bestSection.height, bestSection.unit) ? "deeper" : "shallower"}: ` +
+            "it rides at another height in the groove. Measure the thickness to be sure.",
+        );
       }
     }
     for (const other of out.slice(1)) {
-      if (other.angleDeg !== best.angleDeg) other.warnings.push(`Section angle ${other.angleDeg}° against ${best.angleDeg}°: it will not seat the same in the pulley groove.`);
-      const depthDiff = other.height !== null && best.height !== null ? Math.abs(toMm(other.height, other.unit) - toMm(best.height, best.unit)) : 0;
-      if (depthDiff > 1) other.warnings.push(`Similar top width to ${best.section} but ${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} different in depth: it sits at a different height in the groove and changes the drive ratio and tension.`);
-      if (other.family === "light-duty" && best.family === "classical") other.warnings.push("Light-duty belts are for fractional-horsepower drives; on an engine or tractor drive use the classical section.");
+      if (other.angleDeg !== best.angleDeg)
+        other.warnings.push(
+          `Section angle ${other.angleDeg}° against ${best.angleDeg}°: it will not seat the same in the pulley groove.`,
+        );
+      const depthDiff =
+        other.height !== null && best.height !== null
+          ? Math.abs(toMm(other.height, other.unit) - toMm(best.height, best.unit))
+          : 0;
+      if (depthDiff > 1)
+        other.warnings.push(
+          `Similar top width to ${best.section} but ` +
+            `${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} different in ` +
+            `depth: it sits at a different height in the groove and changes the ` +
+            `drive ratio and tension.`,
+        );
+      if (other.family === "light-duty" && best.family === "classical")
+        other.warnings.push(
+          "Light-duty belts are for fractional-horsepower drives; on an engine or " +
+            "tractor drive use the classical section.",
+        );
     }
   }
   return out.slice(0, 6);
@@ -234,10 +326,12 @@ export function identifySection(input: { topWidthMm: number; heightMm?: number; 
 /** A belt's measured length, from the ways people measure an old one, as a pitch length. */
 export const BELT_MEASURING_NOTES = [
   "A used belt has stretched: it measures longer than it was new, often by 1 % or more.",
-  "A broken belt laid flat and measured along its middle reads between its inside and outside length, near the pitch length.",
-  "With the pulleys in hand, the surest figure is a string run round both pulleys at the depth the belt rode, at the centre distance the belt was set to.",
+  "A broken belt laid flat and measured along its middle reads between " +
+    "its inside and outside length, near the pitch length.",
+  "With the pulleys in hand, the surest figure is a string run round both " +
+    "pulleys at the depth the belt rode, at the centre distance the belt " +
+    "was set to.",
 ];
-
 
 /** Standard belts of a section near a drive's pitch length, named as they are sold (B60, 4L380, SPA1250). */
 export function standardLengthsForPitch(section: BeltSection, pitchMm: number) {

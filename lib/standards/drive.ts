@@ -16,11 +16,20 @@ function check(large: number, small: number): void {
 export function beltPitchLength(large: number, small: number, centre: number): number {
   check(large, small);
   const half = (large - small) / 2;
-  if (centre <= half) throw new DriveError("The centre distance is too short for these pulleys: the small one would sit inside the large one.");
-  return 2 * Math.sqrt(centre ** 2 - half ** 2) + (Math.PI * (large + small)) / 2 + (large - small) * Math.asin(half / centre);
+  if (centre <= half)
+    throw new DriveError(
+      "The centre distance is too short for these pulleys: the small one would sit inside the large one.",
+    );
+  return (
+    2 * Math.sqrt(centre ** 2 - half ** 2) +
+    (Math.PI * (large + small)) / 2 +
+    (large - small) * Math.asin(half / centre)
+  );
 }
 
-/** The centre distance at which a belt of this pitch length fits; L grows steadily with C, so bisection is exact enough. */
+/**
+ * The centre distance at which a belt of this pitch length fits; L grows steadily with C, so bisection is exact enough.
+ */
 export function centreDistance(large: number, small: number, length: number): number {
   check(large, small);
   const minimum = (large - small) / 2;
@@ -47,7 +56,10 @@ export function wrapAngleSmallDeg(large: number, small: number, centre: number):
   return 180 - (2 * Math.asin((large - small) / (2 * centre)) * 180) / Math.PI;
 }
 
-/** Tensioning target: 1/64 in of deflection per inch of span (in any unit, span/64). Common practice (no published source). */
+/**
+ * Tensioning target: 1/64 in of deflection per inch of span (in any unit, span/64). Common practice (no published
+ * source).
+ */
 export function deflectionTarget(span: number): number {
   return span / 64;
 }
@@ -64,12 +76,14 @@ export interface DriveResult {
 
 export function solveDrive(input: { large: number; small: number; center?: number; length?: number }): DriveResult {
   const center = input.center ?? centreDistance(input.large, input.small, input.length ?? Number.NaN);
-  const pitchLength = input.center !== undefined ? beltPitchLength(input.large, input.small, center) : (input.length as number);
+  const pitchLength =
+    input.center !== undefined ? beltPitchLength(input.large, input.small, center) : (input.length as number);
   const span = spanLength(input.large, input.small, center);
   const wrap = wrapAngleSmallDeg(input.large, input.small, center);
   const warnings: string[] = [];
   if (center < (input.large + input.small) / 2) warnings.push("The pulleys would overlap at this centre distance.");
-  if (wrap < 120) warnings.push(`Only ${round(wrap, 0)}° of wrap on the small pulley: a V-belt is likely to slip below about 120°.`);
+  if (wrap < 120)
+    warnings.push(`Only ${round(wrap, 0)}° of wrap on the small pulley: a V-belt is likely to slip below about 120°.`);
   return {
     pitchLength: round(pitchLength, 3),
     center: round(center, 3),
@@ -85,15 +99,25 @@ export function solveDrive(input: { large: number; small: number; center?: numbe
  * An adjustable (split-flange) pulley changes its pitch diameter as its halves are screwed apart: the belt lengths the
  * drive can take run from the length at its smallest diameter to the length at its largest.
  */
-export function adjustablePulleyRange(input: { fixed: number; adjustableMin: number; adjustableMax: number; center: number }) {
+export function adjustablePulleyRange(input: {
+  fixed: number;
+  adjustableMin: number;
+  adjustableMax: number;
+  center: number;
+}) {
   if (!(input.adjustableMin > 0 && input.adjustableMax >= input.adjustableMin)) {
-    throw new DriveError("The adjustable pulley's smallest pitch diameter must be above zero and not above its largest.");
+    throw new DriveError(
+      "The adjustable pulley's smallest pitch diameter must be above zero and not above its largest.",
+    );
   }
   const lengthAt = (d: number) => beltPitchLength(Math.max(input.fixed, d), Math.min(input.fixed, d), input.center);
   return { shortest: round(lengthAt(input.adjustableMin), 3), longest: round(lengthAt(input.adjustableMax), 3) };
 }
 
-/** A drive's answer at the trade's precision for the unit it was worked in: lengths to 0.001 in or 0.01 mm, angles whole. */
+/**
+ * A drive's answer at the trade's precision for the unit it was worked in: lengths to 0.001 in or 0.01 mm, angles
+ * whole.
+ */
 export function atTradePrecision(drive: DriveResult, unit: LengthUnit): DriveResult {
   return {
     ...drive,

@@ -36,7 +36,11 @@ const CUTOFF = 3;
  * in the direction wear would move it counts half. Score 1 is exact; a candidate more than three tolerances off on
  * any dimension is dropped (null).
  */
-export function scoreDimensions(measured: MeasuredDimension[], nominalMm: Record<string, number>, unit: LengthUnit): Scored | null {
+export function scoreDimensions(
+  measured: MeasuredDimension[],
+  nominalMm: Record<string, number>,
+  unit: LengthUnit,
+): Scored | null {
   let total = 0;
   const deviations: Deviation[] = [];
   for (const dim of measured) {
@@ -58,7 +62,12 @@ export function scoreDimensions(measured: MeasuredDimension[], nominalMm: Record
  * One measured dimension against one nominal size, in the unit asked for. Nominal sizes keep their exact decimal
  * (5/32 in is 0.15625 in); readings and deviations are at the trade's precision.
  */
-export function deviationOf(dim: MeasuredDimension, nominalMm: number, unit: LengthUnit, withinTolerance: boolean): Deviation {
+export function deviationOf(
+  dim: MeasuredDimension,
+  nominalMm: number,
+  unit: LengthUnit,
+  withinTolerance: boolean,
+): Deviation {
   return {
     name: dim.name,
     label: dim.label,

@@ -62,14 +62,20 @@ function plausibility(
   const distance = Math.abs(deviation) / allowance;
   const score = Math.max(0, 1 - 0.35 * distance - stepPenalty - (against ? 0.4 : 0));
   let reason = `${round(Math.abs(deviation), 2)} mm ${deviation >= 0 ? "over" : "under"} nominal`;
-  if (against) reason += surface === "shaft" ? "; a worn shaft should read small, not large" : "; wear should not make it read this way";
+  if (against)
+    reason +=
+      surface === "shaft" ? "; a worn shaft should read small, not large" : "; wear should not make it read this way";
   else if (direction !== 0 && Math.abs(deviation) > allowance / 4) reason += ", as wear would make it";
   return { score: round(score, 3), reason, fits: !against && distance <= 1 };
 }
 
 /** Sizes a designer would have chosen: sixteenths of an inch or coarser, whole millimetres (halves below 10 mm). */
 function isUsual(c: NominalCandidate): boolean {
-  return c.system === "metric" ? c.nominal >= 10 ? Number.isInteger(c.nominal) : true : denominatorOf(Math.round(c.nominal * 64)) <= 16;
+  return c.system === "metric"
+    ? c.nominal >= 10
+      ? Number.isInteger(c.nominal)
+      : true
+    : denominatorOf(Math.round(c.nominal * 64)) <= 16;
 }
 
 /**
@@ -80,7 +86,12 @@ function isUsual(c: NominalCandidate): boolean {
  * system lies within the wear allowance, it comes first even if a size of the other system happens to lie nearer
  * (1.497 in on a worn shaft is 1-1/2 in, not 38 mm). The near miss between the two is still reported.
  */
-export function nominalCandidates(measuredMm: number, unit: LengthUnit, surface: Surface = "none", limit = 4): NominalCandidate[] {
+export function nominalCandidates(
+  measuredMm: number,
+  unit: LengthUnit,
+  surface: Surface = "none",
+  limit = 4,
+): NominalCandidate[] {
   const candidates: Array<NominalCandidate & { fits: boolean }> = [];
   const measuredIn = measuredMm / MM_PER_INCH;
   const base = Math.round(measuredIn * 64);
@@ -89,7 +100,10 @@ export function nominalCandidates(measuredMm: number, unit: LengthUnit, surface:
     const nominalIn = n / 64;
     const nominalMm = nominalIn * MM_PER_INCH;
     const { score, reason, fits } = plausibility(measuredMm, nominalMm, surface, inchStepPenalty[denominatorOf(n)]);
-    candidates.push({ ...candidate("inch", nominalIn, nominalMm, inchLabel(nominalIn), measuredMm, unit, score, reason), fits });
+    candidates.push({
+      ...candidate("inch", nominalIn, nominalMm, inchLabel(nominalIn), measuredMm, unit, score, reason),
+      fits,
+    });
   }
   const metricStep = measuredMm < 10 ? 0.5 : 1;
   const nearest = Math.round(measuredMm / metricStep) * metricStep;
@@ -97,13 +111,20 @@ export function nominalCandidates(measuredMm: number, unit: LengthUnit, surface:
     if (nominalMm <= 0) continue;
     const half = nominalMm % 1 !== 0 ? 0.15 : 0;
     const { score, reason, fits } = plausibility(measuredMm, nominalMm, surface, half);
-    candidates.push({ ...candidate("metric", nominalMm, nominalMm, `${round(nominalMm, 1)} mm`, measuredMm, unit, score, reason), fits });
+    candidates.push({
+      ...candidate("metric", nominalMm, nominalMm, `${round(nominalMm, 1)} mm`, measuredMm, unit, score, reason),
+      fits,
+    });
   }
   const measuredSystem = unit === "in" ? "inch" : "metric";
   const preferred = (c: NominalCandidate & { fits: boolean }) => c.fits && c.system === measuredSystem && isUsual(c);
-  for (const c of candidates) if (preferred(c)) c.reason += `; measured in ${unit === "in" ? "inches" : "millimetres"}, so the ${c.system} size comes first`;
+  for (const c of candidates)
+    if (preferred(c))
+      c.reason += `; measured in ${unit === "in" ? "inches" : "millimetres"}, so the ${c.system} size comes first`;
   candidates.sort((a, b) => Number(preferred(b)) - Number(preferred(a)) || b.plausibility - a.plausibility);
-  const plausible: NominalCandidate[] = candidates.filter((c) => c.plausibility >= 0.2).map(({ fits: _fits, ...c }) => c);
+  const plausible: NominalCandidate[] = candidates
+    .filter((c) => c.plausibility >= 0.2)
+    .map(({ fits: _fits, ...c }) => c);
   // The other system is always answered too. When no inch reading is plausible, the one worth showing is the nearest
   // size a designer would have chosen (sixteenths or coarser), not an odd 64th that happens to score a little higher.
   for (const system of ["inch", "metric"] as const) {
@@ -164,7 +185,10 @@ export function nearMiss(inchNominalIn: number, metricNominalMm: number): NearMi
     inchLabel: inch,
     metricLabel: metric,
     differenceMm: round(difference, 3),
-    message: `${inch} (${round(inchMm, 2)} mm) and ${metric} differ by only ${round(difference, 2)} mm: easy to confuse with calipers, but not interchangeable. Check which system the machine was built to.`,
+    message:
+      `${inch} (${round(inchMm, 2)} mm) and ${metric} differ by only ` +
+      `${round(difference, 2)} mm: easy to confuse with calipers, but not ` +
+      `interchangeable. Check which system the machine was built to.`,
   };
 }
 

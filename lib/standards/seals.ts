@@ -1,4 +1,11 @@
-import { byScore, describeDeviations, deviationOf, scoreDimensions, type Deviation, type MeasuredDimension } from "@/lib/standards/match";
+import {
+  byScore,
+  describeDeviations,
+  deviationOf,
+  scoreDimensions,
+  type Deviation,
+  type MeasuredDimension,
+} from "@/lib/standards/match";
 import { nearMiss, nearMissFor, nominalCandidates } from "@/lib/standards/nominal";
 import {
   INCH_PRESS_FIT,
@@ -9,7 +16,16 @@ import {
   OD_ALLOWANCE,
   OD_ALLOWANCE_SOURCE,
 } from "@/lib/standards/seal-sizes";
-import { fromMm, inchLabel, MM_PER_INCH, round, showDeviation, showLength, tradeRound, type LengthUnit } from "@/lib/standards/units";
+import {
+  fromMm,
+  inchLabel,
+  MM_PER_INCH,
+  round,
+  showDeviation,
+  showLength,
+  tradeRound,
+  type LengthUnit,
+} from "@/lib/standards/units";
 
 export interface StandardSeal {
   system: "metric" | "inch";
@@ -19,10 +35,17 @@ export interface StandardSeal {
   size: string;
 }
 
-const inchSize = (d: number, D: number, b: number) => `${inchLabel(d).replace(" in", "")} × ${inchLabel(D).replace(" in", "")} × ${inchLabel(b)}`;
+const inchSize = (d: number, D: number, b: number) =>
+  `${inchLabel(d).replace(" in", "")} × ${inchLabel(D).replace(" in", "")} × ${inchLabel(b)}`;
 
 export const ALL_SEALS: StandardSeal[] = [
-  ...METRIC_SEALS.map(([d, D, b]) => ({ system: "metric" as const, shaftMm: d, boreMm: D, widthMm: b, size: `${d} × ${D} × ${b} mm` })),
+  ...METRIC_SEALS.map(([d, D, b]) => ({
+    system: "metric" as const,
+    shaftMm: d,
+    boreMm: D,
+    widthMm: b,
+    size: `${d} × ${D} × ${b} mm`,
+  })),
   ...INCH_SEALS.map(([d, D, b]) => ({
     system: "inch" as const,
     shaftMm: round(d * MM_PER_INCH, 4),
@@ -68,30 +91,73 @@ export interface SealMatchInput {
 }
 
 export const GROOVE_REMEDIES = [
-  "Fit a thin-wall shaft repair sleeve over the worn band: it restores a fresh running surface and keeps the same seal size.",
-  "Or set the new seal a few millimetres deeper or shallower in its bore (a spacer or shim behind it, or pressed short of the shoulder) so the lip runs on unworn shaft.",
+  "Fit a thin-wall shaft repair sleeve over the worn band: it restores a " +
+    "fresh running surface and keeps the same seal size.",
+  "Or set the new seal a few millimetres deeper or shallower in its bore " +
+    "(a spacer or shim behind it, or pressed short of the shoulder) so the " +
+    "lip runs on unworn shaft.",
   "Or have the shaft metal-sprayed or sleeved and ground back to size by a machine shop.",
 ];
 
 /** Ranks standard lip seals by shaft, housing bore and width; a worn shaft reads small, which is forgiven. */
-export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[]; warnings: string[]; remedies: string[] } {
+export function matchSeal(input: SealMatchInput): {
+  candidates: SealCandidate[];
+  warnings: string[];
+  remedies: string[];
+} {
   const measured = [
-    { name: "shaft", label: "shaft", measuredMm: input.shaftMm, toleranceMm: input.toleranceMm, surface: "shaft" as const },
-    { name: "bore", label: "bore", measuredMm: input.boreMm, toleranceMm: input.toleranceMm, surface: "housing" as const },
+    {
+      name: "shaft",
+      label: "shaft",
+      measuredMm: input.shaftMm,
+      toleranceMm: input.toleranceMm,
+      surface: "shaft" as const,
+    },
+    {
+      name: "bore",
+      label: "bore",
+      measuredMm: input.boreMm,
+      toleranceMm: input.toleranceMm,
+      surface: "housing" as const,
+    },
     // Width matters least: a slightly narrower seal usually fits its seat; a wider one may not.
-    ...(input.widthMm ? [{ name: "width", label: "width", measuredMm: input.widthMm, toleranceMm: Math.max(input.toleranceMm * 4, 0.5) }] : []),
+    ...(input.widthMm
+      ? [
+          {
+            name: "width",
+            label: "width",
+            measuredMm: input.widthMm,
+            toleranceMm: Math.max(input.toleranceMm * 4, 0.5),
+          },
+        ]
+      : []),
   ];
   const orderAs = describeAttributes(input.attributes ?? {});
   const candidates: SealCandidate[] = [];
   for (const seal of ALL_SEALS) {
-    const scored = scoreDimensions(measured, { shaft: seal.shaftMm, bore: seal.boreMm, width: seal.widthMm }, input.unit);
+    const scored = scoreDimensions(
+      measured,
+      { shaft: seal.shaftMm, bore: seal.boreMm, width: seal.widthMm },
+      input.unit,
+    );
     if (!scored) continue;
     const warnings: string[] = [];
-    if (input.widthMm && seal.widthMm > input.widthMm + 0.3) warnings.push("Wider than the old seal: check the seat is deep enough.");
-    candidates.push({ ...seal, score: scored.score, deviations: scored.deviations, explanation: describeDeviations(scored.deviations, input.unit), orderAs, warnings });
+    if (input.widthMm && seal.widthMm > input.widthMm + 0.3)
+      warnings.push("Wider than the old seal: check the seat is deep enough.");
+    candidates.push({
+      ...seal,
+      score: scored.score,
+      deviations: scored.deviations,
+      explanation: describeDeviations(scored.deviations, input.unit),
+      orderAs,
+      warnings,
+    });
   }
   candidates.sort(byScore);
-  if (candidates.length === 0) candidates.push(...nearestSeals(measured, input.unit, orderAs, nominalCandidates(input.shaftMm, input.unit, "shaft")[0].system));
+  if (candidates.length === 0)
+    candidates.push(
+      ...nearestSeals(measured, input.unit, orderAs, nominalCandidates(input.shaftMm, input.unit, "shaft")[0].system),
+    );
   for (const inch of candidates.filter((c) => c.system === "inch")) {
     for (const metric of candidates.filter((c) => c.system === "metric")) {
       const miss = nearMiss(inch.shaftMm / MM_PER_INCH, metric.shaftMm);
@@ -104,7 +170,8 @@ export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[];
 
   const warnings: string[] = [];
   const remedies = input.grooved ? GROOVE_REMEDIES : [];
-  if (input.grooved) warnings.push("The old lip has worn a groove in the shaft. A new seal running on the same line will leak.");
+  if (input.grooved)
+    warnings.push("The old lip has worn a groove in the shaft. A new seal running on the same line will leak.");
   return { candidates: candidates.slice(0, 8), warnings, remedies };
 }
 
@@ -112,10 +179,23 @@ export function matchSeal(input: SealMatchInput): { candidates: SealCandidate[];
  * The tabulated sizes nearest a measurement that none of them matches: shown as "sizes nearby", never as a match, so a
  * person sees what the tables hold while ordering by the worked-out size.
  */
-function nearestSeals(measured: MeasuredDimension[], unit: LengthUnit, orderAs: string, system: "inch" | "metric"): SealCandidate[] {
-  const nominalOf = (seal: StandardSeal): Record<string, number> => ({ shaft: seal.shaftMm, bore: seal.boreMm, width: seal.widthMm });
+function nearestSeals(
+  measured: MeasuredDimension[],
+  unit: LengthUnit,
+  orderAs: string,
+  system: "inch" | "metric",
+): SealCandidate[] {
+  const nominalOf = (seal: StandardSeal): Record<string, number> => ({
+    shaft: seal.shaftMm,
+    bore: seal.boreMm,
+    width: seal.widthMm,
+  });
   // Width counts a quarter: a seat takes a seal a little narrower, and width is the size least often known.
-  const distance = (seal: StandardSeal) => measured.reduce((sum, dim) => sum + Math.abs(nominalOf(seal)[dim.name] - dim.measuredMm) * (dim.name === "width" ? 0.25 : 1), 0);
+  const distance = (seal: StandardSeal) =>
+    measured.reduce(
+      (sum, dim) => sum + Math.abs(nominalOf(seal)[dim.name] - dim.measuredMm) * (dim.name === "width" ? 0.25 : 1),
+      0,
+    );
   return [...ALL_SEALS]
     .sort((a, b) => Number(b.system === system) - Number(a.system === system) || distance(a) - distance(b))
     .slice(0, 3)
@@ -127,7 +207,9 @@ function nearestSeals(measured: MeasuredDimension[], unit: LengthUnit, orderAs: 
         deviations,
         explanation: describeDeviations(deviations, unit),
         orderAs,
-        warnings: ["Not this size: the nearest in the table, shown for comparison. Order by the sizes worked out above."],
+        warnings: [
+          "Not this size: the nearest in the table, shown for comparison. Order by the sizes worked out above.",
+        ],
       };
     });
 }
@@ -152,12 +234,20 @@ export interface PressFit {
  * inch press-fit table; metric ones the DIN 3760 allowances, less the housing's H8 tolerance at the low end (a bore at
  * the top of H8 with a seal at the bottom of its allowance still holds).
  */
-export function sealOdRange(boreMm: number, outside: "metal" | "rubber", system: "inch" | "metric"): { minMm: number; maxMm: number; source: string } {
+export function sealOdRange(
+  boreMm: number,
+  outside: "metal" | "rubber",
+  system: "inch" | "metric",
+): { minMm: number; maxMm: number; source: string } {
   if (system === "inch") {
     const boreIn = boreMm / MM_PER_INCH;
     const row = INCH_PRESS_FIT.find((r) => boreIn <= r.upToIn) ?? INCH_PRESS_FIT[INCH_PRESS_FIT.length - 1];
     const { fit, plus, minus } = row[outside];
-    return { minMm: boreMm + (fit - minus) * MM_PER_INCH, maxMm: boreMm + (fit + plus) * MM_PER_INCH, source: INCH_PRESS_FIT_SOURCE };
+    return {
+      minMm: boreMm + (fit - minus) * MM_PER_INCH,
+      maxMm: boreMm + (fit + plus) * MM_PER_INCH,
+      source: INCH_PRESS_FIT_SOURCE,
+    };
   }
   const row = OD_ALLOWANCE.find((r) => boreMm <= r.upToMm) ?? OD_ALLOWANCE[OD_ALLOWANCE.length - 1];
   const [low, high] = row[outside];
@@ -169,7 +259,12 @@ export function sealOdRange(boreMm: number, outside: "metal" | "rubber", system:
 }
 
 /** The press fit of a seal in its housing: interference = seal OD − bore, against the range for that bore. */
-export function checkPressFit(input: { boreMm: number; sealOdMm: number; outside: "metal" | "rubber"; unit: LengthUnit }): PressFit {
+export function checkPressFit(input: {
+  boreMm: number;
+  sealOdMm: number;
+  outside: "metal" | "rubber";
+  unit: LengthUnit;
+}): PressFit {
   const range = sealOdRange(input.boreMm, input.outside, input.unit === "in" ? "inch" : "metric");
   const minMm = range.minMm - input.boreMm;
   const maxMm = range.maxMm - input.boreMm;
@@ -181,15 +276,33 @@ export function checkPressFit(input: { boreMm: number; sealOdMm: number; outside
   const verdict = interference < recommendedMin ? "loose" : interference > recommendedMax ? "tight" : "ok";
   const show = (value: number) => `${value} ${input.unit}`;
   const message = {
-    ok: `Interference ${show(interference)} is within the recommended ${show(recommendedMin)} to ${show(recommendedMax)}: the seal should stay put without distorting.`,
-    loose: `Interference ${show(interference)} is below the recommended ${show(recommendedMin)}: the seal may turn or weep round its OD. ${
-      input.outside === "metal"
-        ? "A worn or oversize bore can take a seal with a rubber-covered OD, or a thin coat of sealant on the metal OD."
-        : "Check the bore for wear; an oversize bore may need sleeving, or a seal with a larger OD."
-    }`,
-    tight: `Interference ${show(interference)} is above the recommended ${show(recommendedMax)}: the case may buckle or the lip be squeezed onto the shaft. Check both measurements.`,
+    ok:
+      `Interference ${show(interference)} is within the recommended ` +
+      `${show(recommendedMin)} to ${show(recommendedMax)}: the seal should ` +
+      `stay put without distorting.`,
+    loose:
+      `Interference ${show(interference)} is below the recommended ${show(recommendedMin)}: ` +
+      `the seal may turn or weep round its OD. ${
+        input.outside === "metal"
+          ? "A worn or oversize bore can take a seal with a rubber-covered OD, " +
+            "or a thin coat of sealant on the metal OD."
+          : "Check the bore for wear; an oversize bore may need sleeving, or a seal with a larger OD."
+      }`,
+    tight:
+      `Interference ${show(interference)} is above the recommended ` +
+      `${show(recommendedMax)}: the case may buckle or the lip be squeezed ` +
+      `onto the shaft. Check both measurements.`,
   }[verdict];
-  return { interference, recommendedMin, recommendedMax, verdict, unit: input.unit, outside: input.outside, message, source: range.source };
+  return {
+    interference,
+    recommendedMin,
+    recommendedMax,
+    verdict,
+    unit: input.unit,
+    outside: input.outside,
+    message,
+    source: range.source,
+  };
 }
 
 export interface ShaftCheck {
@@ -219,7 +332,13 @@ export function checkShaft(input: { shaftMm: number; unit: LengthUnit; grooved: 
         : `The shaft reads above ${nominal.label}: re-measure, or check whether it is a different nominal size.`,
   ];
   if (needsSleeve) parts.push("A repair sleeve of the same seal size is the usual remedy.");
-  return { nominalLabel: nominal.label, lowestInTolerance: tradeRound(fromMm(lowest, input.unit), input.unit), verdict, needsSleeve, message: parts.join(" ") };
+  return {
+    nominalLabel: nominal.label,
+    lowestInTolerance: tradeRound(fromMm(lowest, input.unit), input.unit),
+    verdict,
+    needsSleeve,
+    message: parts.join(" "),
+  };
 }
 
 export interface SealOrder {
@@ -268,7 +387,14 @@ function orderWidth(widthMm: number, system: "inch" | "metric"): number {
  * The lip seal to order for a measured shaft, housing bore and (optionally) width, whatever the tables hold: inch seals
  * are made for far more bores than any list. The system is the shaft's: the unit measured in leads where both fit.
  */
-export function sealOrder(input: { shaftMm: number; boreMm: number; widthMm?: number; unit: LengthUnit; grooved?: boolean; attributes?: SealAttributes }): SealOrder {
+export function sealOrder(input: {
+  shaftMm: number;
+  boreMm: number;
+  widthMm?: number;
+  unit: LengthUnit;
+  grooved?: boolean;
+  attributes?: SealAttributes;
+}): SealOrder {
   const shaftCandidates = nominalCandidates(input.shaftMm, input.unit, "shaft");
   const shaftNominal = shaftCandidates[0];
   const system = shaftNominal.system;
@@ -296,25 +422,62 @@ export function sealOrder(input: { shaftMm: number; boreMm: number; widthMm?: nu
   const notes = [
     tradeRound(shaftWear, unit) === 0
       ? `Shaft ${shaftReading}: ${shaftNominal.label} exactly.`
-      : `Shaft ${shaftReading}: ${shaftNominal.label}, ${showDeviation(shaftWear, unit)} from nominal${shaftWear < 0 ? ", as a worn shaft reads" : ""}.`,
+      : `Shaft ${shaftReading}: ${shaftNominal.label}, ` +
+        `${showDeviation(shaftWear, unit)} from ` +
+        `nominal${shaftWear < 0 ? ", as a worn shaft reads" : ""}.`,
     system === "inch"
-      ? `Housing bore ${bore.toFixed(3)} in: inch seals are made for bores in thousandths, so ask for exactly this bore.`
-      : `Housing bore ${bore} mm${Number.isInteger(bore) && metricBores.has(bore) ? ", a standard ISO 6194-1 bore" : ": not a standard bore, so ask for a seal made for it or measure again"}.`,
-    `A new seal's outside diameter should be ${showLength(sealOd.min, unit)} to ${showLength(sealOd.max, unit)} for its press fit in this bore (${outside === "metal" ? "metal case" : "rubber-covered"}): check it with calipers before fitting.`,
+      ? `Housing bore ${bore.toFixed(3)} in: inch seals are made for bores in ` +
+        `thousandths, so ask for exactly this bore.`
+      : `Housing bore ${bore} mm${
+          Number.isInteger(bore) && metricBores.has(bore)
+            ? ", a standard ISO 6194-1 bore"
+            : ": not a standard bore, so ask for a seal made for it or measure again"
+        }.`,
+    `A new seal's outside diameter should be ` +
+      `${showLength(sealOd.min, unit)} to ${showLength(sealOd.max, unit)} for ` +
+      `its press fit in this bore ` +
+      `(${outside === "metal" ? "metal case" : "rubber-covered"}): check it ` +
+      `with calipers before fitting.`,
   ];
-  if (width === null) notes.push("Width not measured: give the depth of the seal's seat when you ask, or take the old seal along.");
+  if (width === null)
+    notes.push("Width not measured: give the depth of the seal's seat when you ask, or take the old seal along.");
   else if (Math.abs(fromMm(input.widthMm ?? 0, unit) - width) > (system === "inch" ? 0.01 : 0.2)) {
-    notes.push(`Width measured ${showLength(fromMm(input.widthMm ?? 0, unit), unit)}; seals come in ${system === "inch" ? "1/16 in" : "whole-millimetre"} steps. A slightly narrower seal fits a plain seat; a wider one needs the depth.`);
+    notes.push(
+      `Width measured ${showLength(fromMm(input.widthMm ?? 0, unit), unit)}; ` +
+        `seals come in ${system === "inch" ? "1/16 in" : "whole-millimetre"} ` +
+        `steps. A slightly narrower seal fits a plain seat; a wider one needs ` +
+        `the depth.`,
+    );
   }
   if (input.unit !== unit) {
     notes.push(
-      `Measured in ${input.unit === "in" ? "inches" : "millimetres"}, but the shaft is ${system === "inch" ? "an inch" : "a metric"} size: order ${system === "inch" ? "an inch" : "a metric"} seal. In ${input.unit}: shaft ${showLength(fromMm(shaftNominal.nominalMm, input.unit), input.unit)}, bore ${showLength(fromMm(boreMm, input.unit), input.unit)}.`,
+      `Measured in ${input.unit === "in" ? "inches" : "millimetres"}, but the ` +
+        `shaft is ${system === "inch" ? "an inch" : "a metric"} size: order ` +
+        `${system === "inch" ? "an inch" : "a metric"} seal. In ${input.unit}: ` +
+        `shaft ` +
+        `${showLength(fromMm(shaftNominal.nominalMm, input.unit), input.unit)}, ` +
+        `bore ${showLength(fromMm(boreMm, input.unit), input.unit)}.`,
     );
   }
   const miss = nearMissFor(shaftCandidates);
   if (miss) notes.push(miss.message);
-  if (input.grooved) notes.push("The old lip has worn a groove: fit a repair sleeve of the same seal size, or set the new lip on unworn shaft.");
-  return { system, unit, shaft, shaftLabel: shaftNominal.label, bore, width, label, sealOd, askFor, notes, source: range.source };
+  if (input.grooved)
+    notes.push(
+      "The old lip has worn a groove: fit a repair sleeve of the same seal size, or set the new lip on unworn shaft.",
+    );
+  return {
+    system,
+    unit,
+    shaft,
+    shaftLabel: shaftNominal.label,
+    bore,
+    width,
+    label,
+    sealOd,
+    askFor,
+    notes,
+    source: range.source,
+  };
 }
 
 /** Everything the seal calculator answers for one measurement: the seal to order first, then the sizes nearby. */

@@ -142,14 +142,22 @@ export function convertTyped(text: string, from: LengthUnit, to: LengthUnit): st
 }
 
 /** The typed sizes of a form, each converted with convertTyped. */
-export function convertTypedSizes<T extends Record<string, string>>(sizes: T, names: Array<keyof T>, from: LengthUnit, to: LengthUnit): T {
+export function convertTypedSizes<T extends Record<string, string>>(
+  sizes: T,
+  names: Array<keyof T>,
+  from: LengthUnit,
+  to: LengthUnit,
+): T {
   const next = { ...sizes };
   for (const name of names) next[name] = convertTyped(sizes[name], from, to) as T[keyof T];
   return next;
 }
 
 /** Typed sizes as measured values (value in the unit it was typed in), leaving out what is empty or unreadable. */
-export function measuredValues<D extends string>(typed: Array<[D, string]>, defaultUnit: LengthUnit): Array<{ dimension: D; value: number; unit: LengthUnit }> {
+export function measuredValues<D extends string>(
+  typed: Array<[D, string]>,
+  defaultUnit: LengthUnit,
+): Array<{ dimension: D; value: number; unit: LengthUnit }> {
   return typed.flatMap(([dimension, text]) => {
     try {
       const parsed = parseLength(text, defaultUnit);

@@ -41,7 +41,11 @@ export async function ensureBucket(): Promise<void> {
   await s3.send(
     new PutBucketCorsCommand({
       Bucket: env.S3_BUCKET,
-      CORSConfiguration: { CORSRules: [{ AllowedOrigins: origins, AllowedMethods: ["PUT", "GET"], AllowedHeaders: ["*"], MaxAgeSeconds: 3600 }] },
+      CORSConfiguration: {
+        CORSRules: [
+          { AllowedOrigins: origins, AllowedMethods: ["PUT", "GET"], AllowedHeaders: ["*"], MaxAgeSeconds: 3600 },
+        ],
+      },
     }),
   );
 }
@@ -51,7 +55,9 @@ export async function checkStorage(): Promise<void> {
 }
 
 export async function putObject(key: string, body: Uint8Array | string, contentType: string): Promise<void> {
-  await storageClient().send(new PutObjectCommand({ Bucket: env.S3_BUCKET, Key: key, Body: body, ContentType: contentType }));
+  await storageClient().send(
+    new PutObjectCommand({ Bucket: env.S3_BUCKET, Key: key, Body: body, ContentType: contentType }),
+  );
 }
 
 export async function getObject(key: string): Promise<{ body: Uint8Array; contentType: string | undefined }> {
@@ -65,11 +71,20 @@ export async function deleteObject(key: string): Promise<void> {
 }
 
 /** A URL the browser can PUT one object to, for a few minutes, with exactly this type and size. */
-export async function presignPut(key: string, contentType: string, size: number, expiresInSeconds = 600): Promise<string> {
-  return getSignedUrl(storageClient(), new PutObjectCommand({ Bucket: env.S3_BUCKET, Key: key, ContentType: contentType, ContentLength: size }), {
-    expiresIn: expiresInSeconds,
-    signableHeaders: new Set(["content-type", "content-length"]),
-  });
+export async function presignPut(
+  key: string,
+  contentType: string,
+  size: number,
+  expiresInSeconds = 600,
+): Promise<string> {
+  return getSignedUrl(
+    storageClient(),
+    new PutObjectCommand({ Bucket: env.S3_BUCKET, Key: key, ContentType: contentType, ContentLength: size }),
+    {
+      expiresIn: expiresInSeconds,
+      signableHeaders: new Set(["content-type", "content-length"]),
+    },
+  );
 }
 
 /** The stored object's type and size, or null when nothing is stored under the key. */

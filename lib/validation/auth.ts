@@ -19,7 +19,10 @@ const currentPassword = z
   .min(1, "Enter your password.")
   .max(200, "Use at most 200 characters.");
 
-const token = z.string({ error: "The link is missing its code." }).min(16, "The link is incomplete.").max(128, "The link is not valid.");
+const token = z
+  .string({ error: "The link is missing its code." })
+  .min(16, "The link is incomplete.")
+  .max(128, "The link is not valid.");
 
 export const signUpBody = z.object({ email, password: newPassword });
 export const signInBody = z.object({ email, password: currentPassword });

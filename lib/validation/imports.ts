@@ -3,13 +3,24 @@ import { IMPORT_TARGETS } from "@/lib/imports/kinds";
 
 export const importUploadFields = z.object({
   target: z.enum(IMPORT_TARGETS, { error: "target is catalogue or review_queue." }).optional(),
-  mappingId: z.coerce.number({ error: "mappingId is a saved mapping's id." }).int("mappingId is a saved mapping's id.").positive("mappingId is a saved mapping's id.").max(2_147_483_647, "No mapping has that id.").optional(),
+  mappingId: z.coerce
+    .number({ error: "mappingId is a saved mapping's id." })
+    .int("mappingId is a saved mapping's id.")
+    .positive("mappingId is a saved mapping's id.")
+    .max(2_147_483_647, "No mapping has that id.")
+    .optional(),
 });
 
 export const mappingBody = z.object({
-  mapping: z.record(z.string(), z.string().max(200).nullable(), { error: "mapping is an object of field → column title." }),
+  mapping: z.record(z.string(), z.string().max(200).nullable(), {
+    error: "mapping is an object of field → column title.",
+  }),
 });
 
 export const savedMappingBody = mappingBody.extend({
-  name: z.string({ error: "Give the mapping a name." }).trim().min(2, "Give the mapping a name.").max(80, "A name is at most 80 characters."),
+  name: z
+    .string({ error: "Give the mapping a name." })
+    .trim()
+    .min(2, "Give the mapping a name.")
+    .max(80, "A name is at most 80 characters."),
 });

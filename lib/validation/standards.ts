@@ -7,10 +7,25 @@ import { parseLength, type LengthUnit } from "@/lib/standards/units";
 // Query strings of the calculator routes. Sizes stay strings here so that 1-1/2, 1 1/2" and 38.1 mm all arrive
 // intact; readSize() turns each into millimetres with the reason when it cannot.
 const unit = z.enum(["mm", "in"], { error: "Choose mm or in." }).default("mm");
-const size = (what: string) => z.string({ error: `Enter the ${what}.` }).trim().min(1, `Enter the ${what}.`).max(40, `The ${what} is too long.`);
-const optionalSize = (what: string) => size(what).optional().or(z.literal("").transform(() => undefined));
-const flag = z.enum(["1", "0", "true", "false", "yes", "no"]).transform((v) => ["1", "true", "yes"].includes(v)).optional();
-const designation = z.string({ error: "Enter a designation." }).trim().min(1, "Enter a designation.").max(40, "A designation is at most 40 characters.");
+const size = (what: string) =>
+  z
+    .string({ error: `Enter the ${what}.` })
+    .trim()
+    .min(1, `Enter the ${what}.`)
+    .max(40, `The ${what} is too long.`);
+const optionalSize = (what: string) =>
+  size(what)
+    .optional()
+    .or(z.literal("").transform(() => undefined));
+const flag = z
+  .enum(["1", "0", "true", "false", "yes", "no"])
+  .transform((v) => ["1", "true", "yes"].includes(v))
+  .optional();
+const designation = z
+  .string({ error: "Enter a designation." })
+  .trim()
+  .min(1, "Enter a designation.")
+  .max(40, "A designation is at most 40 characters.");
 
 export const bearingDecodeQuery = z.object({ designation });
 export const beltDecodeQuery = z.object({ designation });
@@ -66,7 +81,9 @@ export const beltIdentifyQuery = z.object({ top: size("top width"), height: opti
 export const nominalQuery = z.object({
   value: size("measured value"),
   unit,
-  surface: z.enum(SURFACES as [string, ...string[]], { error: `Choose one of: ${SURFACES.join(", ")}.` }).default("none"),
+  surface: z
+    .enum(SURFACES as [string, ...string[]], { error: `Choose one of: ${SURFACES.join(", ")}.` })
+    .default("none"),
 });
 
 /** Runs engine code on a field's input; the engine's refusal becomes a 400 naming that field. */
@@ -74,7 +91,8 @@ export function forField<T>(field: string, run: () => T): T {
   try {
     return run();
   } catch (error) {
-    if (error instanceof StandardsInputError) throw new AppError("validation_failed", error.message, { field, fields: { [field]: error.message } });
+    if (error instanceof StandardsInputError)
+      throw new AppError("validation_failed", error.message, { field, fields: { [field]: error.message } });
     throw error;
   }
 }
@@ -84,7 +102,11 @@ export function readSize(field: string, value: string, defaultUnit: LengthUnit):
   return forField(field, () => parseLength(value, defaultUnit).mm);
 }
 
-export function readOptionalSize(field: string, value: string | undefined, defaultUnit: LengthUnit): number | undefined {
+export function readOptionalSize(
+  field: string,
+  value: string | undefined,
+  defaultUnit: LengthUnit,
+): number | undefined {
   return value === undefined ? undefined : readSize(field, value, defaultUnit);
 }
 
@@ -92,6 +114,9 @@ export function readOptionalSize(field: string, value: string | undefined, defau
 export function readTolerance(value: string | undefined, unit: LengthUnit): number {
   if (value === undefined) return unit === "in" ? 0.1016 : 0.1;
   const mm = readSize("tolerance", value, unit);
-  if (mm > 5) throw new AppError("validation_failed", "A tolerance over 5 mm would match almost anything.", { field: "tolerance" });
+  if (mm > 5)
+    throw new AppError("validation_failed", "A tolerance over 5 mm would match almost anything.", {
+      field: "tolerance",
+    });
   return mm;
 }

@@ -1,7 +1,13 @@
 import { z } from "zod";
 import { FITS, PART_CATEGORIES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
 import { positiveId } from "@/lib/validation/ids";
-import { DECISIONS, MEASURED_DIMENSIONS, PHOTO_MAX_BYTES, PHOTO_TYPES, PHOTOS_PER_SUBMISSION } from "@/lib/community/kinds";
+import {
+  DECISIONS,
+  MEASURED_DIMENSIONS,
+  PHOTO_MAX_BYTES,
+  PHOTO_TYPES,
+  PHOTOS_PER_SUBMISSION,
+} from "@/lib/community/kinds";
 
 // One schema for the proposal form in the browser and for POST/PATCH /api/submissions on the server.
 
@@ -26,14 +32,23 @@ const original = z
   })
   .superRefine((value, ctx) => {
     if (value.mode === "existing") {
-      if (!value.partId) ctx.addIssue({ code: "custom", path: ["partId"], message: "Pick the part from the catalogue." });
+      if (!value.partId)
+        ctx.addIssue({ code: "custom", path: ["partId"], message: "Pick the part from the catalogue." });
       return;
     }
     if (!value.makerId) ctx.addIssue({ code: "custom", path: ["makerId"], message: "Choose the maker." });
-    if (!value.number || value.number.length < 2) ctx.addIssue({ code: "custom", path: ["number"], message: "Type the factory number as stamped." });
-    if (!value.description || value.description.length < 3) ctx.addIssue({ code: "custom", path: ["description"], message: "Say what the part is, e.g. “fan shaft bearing, front”." });
-    if (!value.category) ctx.addIssue({ code: "custom", path: ["category"], message: "Choose what kind of part it is." });
-    if (value.machineId && !value.assemblyId) ctx.addIssue({ code: "custom", path: ["assemblyId"], message: "Say where on the machine it sits." });
+    if (!value.number || value.number.length < 2)
+      ctx.addIssue({ code: "custom", path: ["number"], message: "Type the factory number as stamped." });
+    if (!value.description || value.description.length < 3)
+      ctx.addIssue({
+        code: "custom",
+        path: ["description"],
+        message: "Say what the part is, e.g. “fan shaft bearing, front”.",
+      });
+    if (!value.category)
+      ctx.addIssue({ code: "custom", path: ["category"], message: "Choose what kind of part it is." });
+    if (value.machineId && !value.assemblyId)
+      ctx.addIssue({ code: "custom", path: ["assemblyId"], message: "Say where on the machine it sits." });
   });
 
 const standard = z
@@ -49,19 +64,27 @@ const standard = z
   })
   .superRefine((value, ctx) => {
     if (value.mode === "existing") {
-      if (!value.standardPartId) ctx.addIssue({ code: "custom", path: ["standardPartId"], message: "Pick the standard part." });
+      if (!value.standardPartId)
+        ctx.addIssue({ code: "custom", path: ["standardPartId"], message: "Pick the standard part." });
       return;
     }
     if (!value.kind) ctx.addIssue({ code: "custom", path: ["kind"], message: "Choose the kind of standard part." });
     if (!value.designation || value.designation.length < 2) {
-      ctx.addIssue({ code: "custom", path: ["designation"], message: "Type the designation, e.g. 6205-2RS, 35 × 52 × 7 or B43." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["designation"],
+        message: "Type the designation, e.g. 6205-2RS, 35 × 52 × 7 or B43.",
+      });
     }
   });
 
 export const measurementSchema = z.object({
   dimension: z.enum(MEASURED_DIMENSIONS, { error: "Say which size this is." }),
   label: z.string().trim().max(60, "A label is at most 60 characters.").optional(),
-  value: z.number({ error: "A measurement is a number." }).positive("A measurement is more than 0.").max(5000, "A measurement is at most 5000."),
+  value: z
+    .number({ error: "A measurement is a number." })
+    .positive("A measurement is more than 0.")
+    .max(5000, "A measurement is at most 5000."),
   unit: z.enum(["mm", "in"], { error: "The unit is mm or in." }),
 });
 
@@ -71,7 +94,10 @@ export const submissionInput = z.object({
   fit: z.enum(FITS, { error: "Choose how it fitted." }),
   measurements: z.array(measurementSchema).max(12, "At most 12 measurements.").default([]),
   notes: z.string().trim().max(2000, "Notes are at most 2000 characters.").default(""),
-  photoIds: z.array(positiveId("the photo")).max(PHOTOS_PER_SUBMISSION, `At most ${PHOTOS_PER_SUBMISSION} photos.`).default([]),
+  photoIds: z
+    .array(positiveId("the photo"))
+    .max(PHOTOS_PER_SUBMISSION, `At most ${PHOTOS_PER_SUBMISSION} photos.`)
+    .default([]),
 });
 export type SubmissionInput = z.output<typeof submissionInput>;
 export type SubmissionFormValues = z.input<typeof submissionInput>;
@@ -110,10 +136,25 @@ export const submissionsQuery = z.object({
   mine: z.enum(["1", "true"]).optional(),
   status: z.enum(["pending", "changes_requested", "approved", "rejected"]).optional(),
   category: z.enum(PART_CATEGORIES).optional(),
-  maker: z.coerce.number({ error: "maker is a maker's id." }).int("maker is a maker's id.").positive("maker is a maker's id.").max(2_147_483_647, "No maker has that id.").optional(),
+  maker: z.coerce
+    .number({ error: "maker is a maker's id." })
+    .int("maker is a maker's id.")
+    .positive("maker is a maker's id.")
+    .max(2_147_483_647, "No maker has that id.")
+    .optional(),
   q: z.string().trim().max(80, "q is at most 80 characters.").optional(),
-  limit: z.coerce.number({ error: "limit must be a number." }).int("limit must be a whole number.").min(1, "limit is at least 1.").max(200, "limit is at most 200.").default(100),
-  offset: z.coerce.number({ error: "offset must be a number." }).int("offset must be a whole number.").min(0, "offset is at least 0.").max(1_000_000, "offset is at most 1000000.").default(0),
+  limit: z.coerce
+    .number({ error: "limit must be a number." })
+    .int("limit must be a whole number.")
+    .min(1, "limit is at least 1.")
+    .max(200, "limit is at most 200.")
+    .default(100),
+  offset: z.coerce
+    .number({ error: "offset must be a number." })
+    .int("offset must be a whole number.")
+    .min(0, "offset is at least 0.")
+    .max(1_000_000, "offset is at most 1000000.")
+    .default(0),
 });
 
 export const notificationsInput = z.object({

@@ -13,7 +13,12 @@ afterAll(() => sequelize.close());
 // lib/auth/roles.ts, never written here: anonymous → 401 (pages: to the sign-in page), a role without the
 // permission → 403, a role with it → past the door (any answer but 401/403, and never a 5xx).
 type Identity = "anonymous" | "member" | "otherMember" | "moderator" | "admin";
-const ROLE_OF: Record<Exclude<Identity, "anonymous">, Role> = { member: "member", otherMember: "member", moderator: "moderator", admin: "admin" };
+const ROLE_OF: Record<Exclude<Identity, "anonymous">, Role> = {
+  member: "member",
+  otherMember: "member",
+  moderator: "moderator",
+  admin: "admin",
+};
 const cookies: Partial<Record<Identity, string>> = {};
 let listId = 0;
 
@@ -48,7 +53,12 @@ function routeFiles(dir = "app/api", prefix = ""): string[] {
 
 beforeAll(async () => {
   const [member, otherMember, moderator, admin] = await Promise.all(
-    ["club.member6@understudy.test", "club.member7@understudy.test", "moderator@understudy.test", "admin@understudy.test"].map((email) => signIn(email)),
+    [
+      "club.member6@understudy.test",
+      "club.member7@understudy.test",
+      "moderator@understudy.test",
+      "admin@understudy.test",
+    ].map((email) => signIn(email)),
   );
   Object.assign(cookies, { member, otherMember, moderator, admin });
   listId = (await send("post", "/api/lists", { title: "Access matrix list" }, { cookie: member })).body.id;
@@ -63,7 +73,9 @@ describe("the route × role matrix", () => {
     for (const endpoint of endpoints) {
       it(`${endpoint.method.toUpperCase()} /api/${route} (${endpoint.door})`, async () => {
         for (const who of ["anonymous", "member", "otherMember", "moderator", "admin"] as const) {
-          const response = await send(endpoint.method, endpoint.path(listId), endpoint.body, { cookie: cookies[who as Exclude<Identity, "anonymous">] });
+          const response = await send(endpoint.method, endpoint.path(listId), endpoint.body, {
+            cookie: cookies[who as Exclude<Identity, "anonymous">],
+          });
           const want = expected(endpoint.door, who);
           const context = `${who}: ${response.status} ${JSON.stringify(response.body).slice(0, 160)}`;
           expect(response.status, context).toBeLessThan(500);

@@ -81,7 +81,9 @@ describe("password reset by e-mailed link", () => {
 
     const asked = await send("post", "/api/auth/password-reset/request", { email });
     expect(asked.status).toBe(200);
-    const token = new URLSearchParams(linkTo(await waitForMail(email, "Set a new"), "/reset-password").split("?")[1]).get("token");
+    const token = new URLSearchParams(
+      linkTo(await waitForMail(email, "Set a new"), "/reset-password").split("?")[1],
+    ).get("token");
 
     const newPassword = "magneto-points-0.015in";
     const reset = await send("post", "/api/auth/password-reset/confirm", { token, password: newPassword });
@@ -107,44 +109,72 @@ describe("password reset by e-mailed link", () => {
 describe("failed sign-ins", () => {
   it("gives a wrong password the same 401 and message as an unknown e-mail", async () => {
     const address = uniqueAddress();
-    const wrong = await send("post", "/api/auth/sign-in", { email: "moderator@understudy.test", password: "not-the-password" }, { address });
-    const unknown = await send("post", "/api/auth/sign-in", { email: uniqueEmail("ghost"), password: "not-the-password" }, { address });
+    const wrong = await send(
+      "post",
+      "/api/auth/sign-in",
+      { email: "moderator@understudy.test", password: "not-the-password" },
+      { address },
+    );
+    const unknown = await send(
+      "post",
+      "/api/auth/sign-in",
+      { email: uniqueEmail("ghost"), password: "not-the-password" },
+      { address },
+    );
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);
   });
 
-  it("refuses the sixth failure on one account from one address, even with the right password, but not its owner elsewhere", async () => {
-    const email = uniqueEmail("hammered");
-    await send("post", "/api/auth/sign-up", { email, password });
-    const stranger = uniqueAddress();
-    for (let attempt = 1; attempt <= 5; attempt += 1) {
-      const response = await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: stranger });
-      expect(response.status).toBe(401);
-    }
-    const sixth = await send("post", "/api/auth/sign-in", { email, password: "guess-6" }, { address: stranger });
-    expect(sixth.status).toBe(429);
-    expect(Number(sixth.headers["retry-after"])).toBeGreaterThan(0);
-    expect((await send("post", "/api/auth/sign-in", { email, password }, { address: stranger })).status).toBe(429);
-    // The owner, from their own address, is not locked out by the stranger's guesses (the account is not confirmed
-    // yet, so the right password answers 403, not 429).
-    expect((await send("post", "/api/auth/sign-in", { email, password }, { address: uniqueAddress() })).status).toBe(403);
-  });
+  it(
+    "refuses the sixth failure on one account from one address, even with " +
+      "the right password, but not its owner elsewhere",
+    async () => {
+      const email = uniqueEmail("hammered");
+      await send("post", "/api/auth/sign-up", { email, password });
+      const stranger = uniqueAddress();
+      for (let attempt = 1; attempt <= 5; attempt += 1) {
+        const response = await send(
+          "post",
+          "/api/auth/sign-in",
+          { email, password: `guess-${attempt}` },
+          { address: stranger },
+        );
+        expect(response.status).toBe(401);
+      }
+      const sixth = await send("post", "/api/auth/sign-in", { email, password: "guess-6" }, { address: stranger });
+      expect(sixth.status).toBe(429);
+      expect(Number(sixth.headers["retry-after"])).toBeGreaterThan(0);
+      expect((await send("post", "/api/auth/sign-in", { email, password }, { address: stranger })).status).toBe(429);
+      // The owner, from their own address, is not locked out by the stranger's guesses (the account is not confirmed
+      // yet, so the right password answers 403, not 429).
+      expect((await send("post", "/api/auth/sign-in", { email, password }, { address: uniqueAddress() })).status).toBe(
+        403,
+      );
+    },
+  );
 
   it("slows guessing spread over many addresses with the account-wide limit", async () => {
     const email = uniqueEmail("spread");
     const limit = Number(process.env.AUTH_MAX_FAILURES_ACCOUNT_WIDE ?? 12);
     for (let attempt = 1; attempt <= limit; attempt += 1) {
-      expect((await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: uniqueAddress() })).status).toBe(401);
+      expect(
+        (await send("post", "/api/auth/sign-in", { email, password: `guess-${attempt}` }, { address: uniqueAddress() }))
+          .status,
+      ).toBe(401);
     }
-    expect((await send("post", "/api/auth/sign-in", { email, password: "guess" }, { address: uniqueAddress() })).status).toBe(429);
+    expect(
+      (await send("post", "/api/auth/sign-in", { email, password: "guess" }, { address: uniqueAddress() })).status,
+    ).toBe(429);
   });
 
   it("checks no more than the limit of forty wrong passwords sent at once", async () => {
     const address = uniqueAddress();
     const email = uniqueEmail("flood");
     const responses = await Promise.all(
-      Array.from({ length: 40 }, (_, i) => send("post", "/api/auth/sign-in", { email, password: `guess-${i}` }, { address })),
+      Array.from({ length: 40 }, (_, i) =>
+        send("post", "/api/auth/sign-in", { email, password: `guess-${i}` }, { address }),
+      ),
     );
     const checked = responses.filter((r) => r.status === 401).length;
     expect(responses.every((r) => r.status === 401 || r.status === 429)).toBe(true);
@@ -155,10 +185,20 @@ describe("failed sign-ins", () => {
     const address = uniqueAddress();
     const limit = Number(process.env.AUTH_MAX_FAILURES_PER_ADDRESS ?? 20);
     for (let attempt = 1; attempt <= limit; attempt += 1) {
-      const response = await send("post", "/api/auth/sign-in", { email: uniqueEmail("sprayed"), password: "guess" }, { address });
+      const response = await send(
+        "post",
+        "/api/auth/sign-in",
+        { email: uniqueEmail("sprayed"), password: "guess" },
+        { address },
+      );
       expect(response.status).toBe(401);
     }
-    const next = await send("post", "/api/auth/sign-in", { email: uniqueEmail("sprayed"), password: "guess" }, { address });
+    const next = await send(
+      "post",
+      "/api/auth/sign-in",
+      { email: uniqueEmail("sprayed"), password: "guess" },
+      { address },
+    );
     expect(next.status).toBe(429);
   });
 });
@@ -221,7 +261,11 @@ describe("POST /api/auth/sign-up with a bad body", () => {
 describe("POST /api/auth/sign-up under concurrency", () => {
   it("answers five sign-ups of one address at once alike, and makes one account", async () => {
     const email = uniqueEmail("twice");
-    const responses = await Promise.all(Array.from({ length: 5 }, () => send("post", "/api/auth/sign-up", { email, password: "grease gun on the fan hub" })));
+    const responses = await Promise.all(
+      Array.from({ length: 5 }, () =>
+        send("post", "/api/auth/sign-up", { email, password: "grease gun on the fan hub" }),
+      ),
+    );
     expect(responses.map((r) => r.status).filter((s) => s >= 500)).toEqual([]);
     expect(new Set(responses.map((r) => r.status)).size).toBe(1);
     expect(await User.count({ where: { email } })).toBe(1);
@@ -232,13 +276,19 @@ describe("sessions at rest", () => {
   it("keeps only a SHA-256 of the session token in the database, and the token still signs in", async () => {
     const cookie = await signIn("club.member2@understudy.test");
     const token = cookie.split("=")[1];
-    const [stored] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM sessions WHERE id = :token", { replacements: { token }, type: "SELECT" as never });
-    expect(Number(stored.n)).toBe(0);
-    // SHA-256 (FIPS 180-4) of the token, in hex, as PostgreSQL's own sha256() computes it.
-    const [hashed] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM sessions WHERE id = encode(sha256(convert_to(:token, 'UTF8')), 'hex')", {
+    const [stored] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM sessions WHERE id = :token", {
       replacements: { token },
       type: "SELECT" as never,
     });
+    expect(Number(stored.n)).toBe(0);
+    // SHA-256 (FIPS 180-4) of the token, in hex, as PostgreSQL's own sha256() computes it.
+    const [hashed] = await sequelize.query<{ n: string }>(
+      "SELECT count(*) AS n FROM sessions WHERE id = encode(sha256(convert_to(:token, 'UTF8')), 'hex')",
+      {
+        replacements: { token },
+        type: "SELECT" as never,
+      },
+    );
     expect(Number(hashed.n)).toBe(1);
     const me = await send("get", "/api/auth/me", undefined, { cookie });
     expect(me.body.user.email).toBe("club.member2@understudy.test");
@@ -252,7 +302,10 @@ describe("who has an account does not show in response times", () => {
       // answer, so the two medians stay within a few milliseconds instead of the ~100 ms an SMTP hand-off takes.
       const timings = { known: [] as number[], unknown: [] as number[] };
       for (let i = 0; i < 7; i += 1) {
-        for (const [kind, email] of [["known", "club.member3@understudy.test"], ["unknown", uniqueEmail("nobody")]] as const) {
+        for (const [kind, email] of [
+          ["known", "club.member3@understudy.test"],
+          ["unknown", uniqueEmail("nobody")],
+        ] as const) {
           const started = performance.now();
           const response = await send("post", path, { email });
           timings[kind].push(performance.now() - started);

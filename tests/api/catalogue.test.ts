@@ -21,8 +21,29 @@ describe("GET /api/parts/lookup", () => {
   it("finds a number typed exactly, first, and says why", async () => {
     const { status, body } = await lookup("CV-3003-A");
     expect(status).toBe(200);
-    expect(body.results[0]).toMatchObject({ number: "CV-3003-A", maker: "Corvane Tractor Works", matchedBy: "exact", score: 1 });
-    expect(Object.keys(body.results[0]).sort()).toEqual(["best", "category", "crossCount", "description", "id", "latestNumber", "maker", "makerId", "matchedBy", "number", "score", "sizes", "why"].sort());
+    expect(body.results[0]).toMatchObject({
+      number: "CV-3003-A",
+      maker: "Corvane Tractor Works",
+      matchedBy: "exact",
+      score: 1,
+    });
+    expect(Object.keys(body.results[0]).sort()).toEqual(
+      [
+        "best",
+        "category",
+        "crossCount",
+        "description",
+        "id",
+        "latestNumber",
+        "maker",
+        "makerId",
+        "matchedBy",
+        "number",
+        "score",
+        "sizes",
+        "why",
+      ].sort(),
+    );
   });
 
   it("finds it typed sloppily: case, spaces, no dashes", async () => {
@@ -44,7 +65,12 @@ describe("GET /api/parts/lookup", () => {
 
   it("reports the latest number of a superseded part", async () => {
     let key = chainStart.key;
-    for (let next = demo.supersessions.find((s) => s.oldKey === key); next; next = demo.supersessions.find((s) => s.oldKey === key)) key = next.newKey;
+    for (
+      let next = demo.supersessions.find((s) => s.oldKey === key);
+      next;
+      next = demo.supersessions.find((s) => s.oldKey === key)
+    )
+      key = next.newKey;
     const latest = demo.parts.find((p) => p.key === key)!;
     const { body } = await lookup(chainStart.number);
     expect(body.results[0]).toMatchObject({ number: chainStart.number, latestNumber: latest.number });
@@ -81,7 +107,11 @@ describe("GET /api/parts/{id}", () => {
     expect(status).toBe(200);
     expect(body).toMatchObject({ number: "CV-3003-A", category: "bearing", maker: { name: "Corvane Tractor Works" } });
     expect(body.chain.after.length).toBeGreaterThan(0);
-    expect(body.crosses[0].standard).toMatchObject({ kind: "bearing", innerMm: expect.any(Number), outerMm: expect.any(Number) });
+    expect(body.crosses[0].standard).toMatchObject({
+      kind: "bearing",
+      innerMm: expect.any(Number),
+      outerMm: expect.any(Number),
+    });
     expect(body.whereUsed.length).toBeGreaterThan(0);
     expect(body.dimensions.innerMm).toBeGreaterThan(0);
   });
@@ -91,10 +121,17 @@ describe("GET /api/parts/{id}", () => {
     const parts = await OriginalPart.findAll({ limit: 40, order: [["id", "ASC"]] });
     for (const part of parts) {
       const { body } = await get(`/api/parts/${part.id}`);
-      const crosses = body.crosses as Array<{ fit: keyof typeof fitRank; confirmations: number; standard: object | null }>;
+      const crosses = body.crosses as Array<{
+        fit: keyof typeof fitRank;
+        confirmations: number;
+        standard: object | null;
+      }>;
       for (let i = 1; i < crosses.length; i += 1) {
         const [a, b] = [crosses[i - 1], crosses[i]];
-        const order = fitRank[a.fit] - fitRank[b.fit] || Number(b.standard !== null) - Number(a.standard !== null) || b.confirmations - a.confirmations;
+        const order =
+          fitRank[a.fit] - fitRank[b.fit] ||
+          Number(b.standard !== null) - Number(a.standard !== null) ||
+          b.confirmations - a.confirmations;
         expect(order).toBeLessThanOrEqual(0);
       }
     }

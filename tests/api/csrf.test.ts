@@ -22,7 +22,12 @@ describe("mutating requests from another origin", () => {
   });
 
   it("refuses a mutating request that names no origin at all", async () => {
-    const response = await send("post", "/api/auth/sign-up", { email: "x@example.org", password: "long enough password" }, { origin: null });
+    const response = await send(
+      "post",
+      "/api/auth/sign-up",
+      { email: "x@example.org", password: "long enough password" },
+      { origin: null },
+    );
     expect(response.status).toBe(403);
   });
 });

@@ -17,7 +17,11 @@ let moderator: string;
 let member: string;
 
 beforeAll(async () => {
-  [admin, moderator, member] = await Promise.all([signIn("admin@understudy.test"), signIn("moderator@understudy.test"), signIn("member@understudy.test")]);
+  [admin, moderator, member] = await Promise.all([
+    signIn("admin@understudy.test"),
+    signIn("moderator@understudy.test"),
+    signIn("member@understudy.test"),
+  ]);
 });
 
 function upload(cookie: string, bytes: Buffer, name = "club.csv", fields: Record<string, string> = {}) {
@@ -39,14 +43,24 @@ async function settled(cookie: string, id: number) {
 }
 
 async function catalogueSnapshot() {
-  const [parts, crosses, standards, makers, usages] = await Promise.all([OriginalPart.count(), Cross.count(), StandardPart.count(), Maker.count(), PartUsage.count()]);
-  const [[fits]] = (await sequelize.query("SELECT md5(string_agg(id || ':' || fit || ':' || coalesce(notes, '') || ':' || status, ',' ORDER BY id)) AS h FROM crosses")) as [Array<{ h: string }>, unknown];
+  const [parts, crosses, standards, makers, usages] = await Promise.all([
+    OriginalPart.count(),
+    Cross.count(),
+    StandardPart.count(),
+    Maker.count(),
+    PartUsage.count(),
+  ]);
+  const [[fits]] = (await sequelize.query(
+    "SELECT md5(string_agg(id || ':' || fit || ':' || coalesce(notes, '') " +
+      "|| ':' || status, ',' ORDER BY id)) AS h FROM crosses",
+  )) as [Array<{ h: string }>, unknown];
   return { parts, crosses, standards, makers, usages, fits };
 }
 
 const hm210Fit = async () => {
   const [[row]] = (await sequelize.query(
-    `SELECT c.fit FROM crosses c JOIN original_parts p ON p.id = c.original_part_id JOIN standard_parts s ON s.id = c.standard_part_id
+    `SELECT c.fit FROM crosses c JOIN original_parts p ON p.id = c.original_part_id JOIN standard_parts s ON s.id =
+      c.standard_part_id
      WHERE p.number = 'HM 210 007' AND s.designation = '6203-2Z'`,
   )) as [Array<{ fit: string }>, unknown];
   return row.fit;
@@ -62,46 +76,70 @@ describe("importing the sample club spreadsheet", () => {
     expect((await upload(moderator, SAMPLE, "club.csv", { target: "catalogue" })).status).toBe(403);
   });
 
-  it("stores the file as it came, then shows the dry run's counts and every rejected row with its line, column and reason", async () => {
-    before = await catalogueSnapshot();
-    const response = await upload(admin, SAMPLE, "club-interchange-sample.csv");
-    expect(response.status).toBe(202);
-    firstId = response.body.id;
-    // People are never shown where the file is stored; the record knows.
-    expect(response.body).not.toHaveProperty("objectKey");
-    const stored = await getObject((await Import.findByPk(firstId))!.objectKey);
-    expect(Buffer.from(stored.body).equals(SAMPLE)).toBe(true);
+  it(
+    "stores the file as it came, then shows the dry run's counts and every " +
+      "rejected row with its line, column and reason",
+    async () => {
+      before = await catalogueSnapshot();
+      const response = await upload(admin, SAMPLE, "club-interchange-sample.csv");
+      expect(response.status).toBe(202);
+      firstId = response.body.id;
+      // People are never shown where the file is stored; the record knows.
+      expect(response.body).not.toHaveProperty("objectKey");
+      const stored = await getObject((await Import.findByPk(firstId))!.objectKey);
+      expect(Buffer.from(stored.body).equals(SAMPLE)).toBe(true);
 
-    const body = await settled(admin, firstId);
-    expect(body).toMatchObject({ status: "parsed", encoding: "utf-8", delimiter: ",", missing: [] });
-    expect(body.mapping).toMatchObject({ maker: "Maker", number: "Part No.", category: "Kind", innerMm: "Bore (mm)", outerMm: "OD (mm)", designation: "Standard designation", assembly: "Place on the machine" });
-    expect(body.counts).toMatchObject({ rows: 14, newParts: 3, newCrosses: 3, updates: 1, unchanged: 3, rejected: 7, newMakers: 1, newStandardParts: 1 });
-    // The summary names what a commit would create, so a misspelt maker is seen before it becomes a second maker.
-    expect(body.counts.newMakerNames).toEqual(["Brandholm Motorverk"]);
-    expect(body.counts.newStandardPartNames).toEqual(["Ball bearing 6006"]);
-    expect(body.rejections.map((r: { line: number; column: string }) => [r.line, r.column])).toEqual([
-      [9, "Kind"],
-      [10, "OD (mm)"],
-      [11, "Bore (mm)"],
-      [12, "Standard designation"],
-      [13, "Standard designation"],
-      [14, "Fit"],
-      [15, "Description"],
-    ]);
-    const reasons = body.rejections.map((r: { reason: string }) => r.reason);
-    expect(reasons[0]).toContain('Unknown category "sprocket"');
-    // ISO 15:2017 series 62 (DIN 625-1 via BOLTS): 6205 is 25 × 52 × 15 mm, so an OD of 47 mm contradicts it.
-    expect(reasons[1]).toContain("52 mm");
-    expect(reasons[2]).toContain("cannot be read as a size");
-    expect(reasons[3]).toContain("line 5");
-    expect(await catalogueSnapshot()).toEqual(before);
-  });
+      const body = await settled(admin, firstId);
+      expect(body).toMatchObject({ status: "parsed", encoding: "utf-8", delimiter: ",", missing: [] });
+      expect(body.mapping).toMatchObject({
+        maker: "Maker",
+        number: "Part No.",
+        category: "Kind",
+        innerMm: "Bore (mm)",
+        outerMm: "OD (mm)",
+        designation: "Standard designation",
+        assembly: "Place on the machine",
+      });
+      expect(body.counts).toMatchObject({
+        rows: 14,
+        newParts: 3,
+        newCrosses: 3,
+        updates: 1,
+        unchanged: 3,
+        rejected: 7,
+        newMakers: 1,
+        newStandardParts: 1,
+      });
+      // The summary names what a commit would create, so a misspelt maker is seen before it becomes a second maker.
+      expect(body.counts.newMakerNames).toEqual(["Brandholm Motorverk"]);
+      expect(body.counts.newStandardPartNames).toEqual(["Ball bearing 6006"]);
+      expect(body.rejections.map((r: { line: number; column: string }) => [r.line, r.column])).toEqual([
+        [9, "Kind"],
+        [10, "OD (mm)"],
+        [11, "Bore (mm)"],
+        [12, "Standard designation"],
+        [13, "Standard designation"],
+        [14, "Fit"],
+        [15, "Description"],
+      ]);
+      const reasons = body.rejections.map((r: { reason: string }) => r.reason);
+      expect(reasons[0]).toContain('Unknown category "sprocket"');
+      // ISO 15:2017 series 62 (DIN 625-1 via BOLTS): 6205 is 25 × 52 × 15 mm, so an OD of 47 mm contradicts it.
+      expect(reasons[1]).toContain("52 mm");
+      expect(reasons[2]).toContain("cannot be read as a size");
+      expect(reasons[3]).toContain("line 5");
+      expect(await catalogueSnapshot()).toEqual(before);
+    },
+  );
 
   it("offers the rejected rows as a CSV, as they were in the file", async () => {
     const response = await send("get", `/api/imports/${firstId}/rejected.csv`, undefined, { cookie: admin });
     expect(response.status).toBe(200);
     expect(response.headers["content-type"]).toContain("text/csv");
-    const parsed = Papa.parse<Record<string, string>>(response.text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: true });
+    const parsed = Papa.parse<Record<string, string>>(response.text.replace(/^\uFEFF/, ""), {
+      header: true,
+      skipEmptyLines: true,
+    });
     expect(parsed.data).toHaveLength(7);
     expect(parsed.data[1]).toMatchObject({ line: "10", column: "OD (mm)", "Part No.": "HM 299 001", "OD (mm)": "47" });
   });
@@ -116,22 +154,44 @@ describe("importing the sample club spreadsheet", () => {
     expect((await send("post", `/api/imports/${firstId}/commit`, {}, { cookie: admin })).status).toBe(409);
 
     const after = await catalogueSnapshot();
-    expect(after).toMatchObject({ parts: before.parts + 3, crosses: before.crosses + 3, standards: before.standards + 1, makers: before.makers + 1, usages: before.usages + 1 });
+    expect(after).toMatchObject({
+      parts: before.parts + 3,
+      crosses: before.crosses + 3,
+      standards: before.standards + 1,
+      makers: before.makers + 1,
+      usages: before.usages + 1,
+    });
     expect(await hm210Fit()).toBe("direct");
     const found = (await send("get", "/api/parts/lookup?q=7701.G4")).body.results[0];
     expect(found).toMatchObject({ number: "7701.G4", crossCount: 1 });
-    const crawler = await send("get", `/api/parts/${(await OriginalPart.findOne({ where: { number: "CV-9902-X" } }))!.id}`);
-    expect(crawler.body.whereUsed).toEqual([expect.objectContaining({ model: "K-40 Crawler", assembly: "Track roller" })]);
+    const crawler = await send(
+      "get",
+      `/api/parts/${(await OriginalPart.findOne({ where: { number: "CV-9902-X" } }))!.id}`,
+    );
+    expect(crawler.body.whereUsed).toEqual([
+      expect.objectContaining({ model: "K-40 Crawler", assembly: "Track roller" }),
+    ]);
 
     const rows = await send("get", `/api/imports/${firstId}/rows`, undefined, { cookie: admin });
-    expect(rows.body.changes.filter((c: { action: string }) => c.action === "update")).toEqual([expect.objectContaining({ line: 4, table: "crosses" })]);
+    expect(rows.body.changes.filter((c: { action: string }) => c.action === "update")).toEqual([
+      expect.objectContaining({ line: 4, table: "crosses" }),
+    ]);
   });
 
   it("changes nothing when the same file is imported again", async () => {
     const committed = await catalogueSnapshot();
     const again = await upload(admin, SAMPLE, "club-interchange-sample.csv");
     const parsed = await settled(admin, again.body.id);
-    expect(parsed.counts).toMatchObject({ rows: 14, newParts: 0, newCrosses: 0, updates: 0, unchanged: 7, rejected: 7, newMakers: 0, newStandardParts: 0 });
+    expect(parsed.counts).toMatchObject({
+      rows: 14,
+      newParts: 0,
+      newCrosses: 0,
+      updates: 0,
+      unchanged: 7,
+      rejected: 7,
+      newMakers: 0,
+      newStandardParts: 0,
+    });
     await send("post", `/api/imports/${again.body.id}/commit`, {}, { cookie: admin });
     expect((await settled(admin, again.body.id)).status).toBe("committed");
     expect(await catalogueSnapshot()).toEqual(committed);
@@ -179,14 +239,19 @@ describe("other files", () => {
   it("reads a Windows-1252 file with semicolons and decimal commas", async () => {
     const text = [
       "Hersteller;Teilenummer;Bezeichnung;Kind;Bore (mm);OD (mm);Width (mm);Standard designation;Fit",
-      "Halvard Maskinfabrik;HM 777 001;Lager für die Lüfterwelle, Sønderby-Ausführung;bearing;17,0;40,0;12;6203-2RS;direct",
+      "Halvard Maskinfabrik;HM 777 001;Lager für die Lüfterwelle, " +
+        "Sønderby-Ausführung;bearing;17,0;40,0;12;6203-2RS;direct",
       "",
     ].join("\r\n");
     const bytes = iconv.encode(text, "win1252");
     expect(bytes.includes(0xfc)).toBe(true); // ü as one Windows-1252 byte, not UTF-8
     const response = await upload(admin, bytes, "lager.csv");
     const body = await settled(admin, response.body.id);
-    expect(body).toMatchObject({ encoding: "windows-1252", delimiter: ";", counts: { rows: 1, newParts: 1, newCrosses: 1, rejected: 0 } });
+    expect(body).toMatchObject({
+      encoding: "windows-1252",
+      delimiter: ";",
+      counts: { rows: 1, newParts: 1, newCrosses: 1, rejected: 0 },
+    });
     await send("post", `/api/imports/${response.body.id}/commit`, {}, { cookie: admin });
     expect((await settled(admin, response.body.id)).status).toBe("committed");
     const part = await OriginalPart.findOne({ where: { number: "HM 777 001" } });
@@ -194,7 +259,9 @@ describe("other files", () => {
   });
 
   it("asks for a column it cannot match, takes a corrected mapping, and reuses a saved one", async () => {
-    const text = "Maker,Stamped as,Description,Kind,Replacement\r\nPellworth & Sons,8801.K1,Magneto drive bearing,bearing,6201-2RS\r\n";
+    const text =
+      "Maker,Stamped as,Description,Kind,Replacement\r\nPellworth & " +
+      "Sons,8801.K1,Magneto drive bearing,bearing,6201-2RS\r\n";
     const first = await upload(admin, Buffer.from(text), "unusual.csv");
     const parsed = await settled(admin, first.body.id);
     expect(parsed.counts).toBeNull();
@@ -203,7 +270,12 @@ describe("other files", () => {
     expect((await send("patch", `/api/imports/${first.body.id}`, { mapping }, { cookie: admin })).status).toBe(202);
     expect((await settled(admin, first.body.id)).counts).toMatchObject({ rows: 1, newParts: 1 });
 
-    const saved = await send("post", "/api/import-mappings", { name: `Pellworth club ${Date.now()}`, mapping }, { cookie: admin });
+    const saved = await send(
+      "post",
+      "/api/import-mappings",
+      { name: `Pellworth club ${Date.now()}`, mapping },
+      { cookie: admin },
+    );
     expect(saved.status).toBe(201);
     const second = await upload(admin, Buffer.from(text), "unusual-again.csv", { mappingId: String(saved.body.id) });
     expect((await settled(admin, second.body.id)).counts).toMatchObject({ rows: 1, newParts: 1 });
@@ -213,10 +285,15 @@ describe("other files", () => {
     const response = await upload(admin, SAMPLE, "interrupted.csv");
     const id = response.body.id;
     await settled(admin, id);
-    await sequelize.query("UPDATE imports SET status = 'parsing', updated_at = now() - interval '11 minutes' WHERE id = :id", { replacements: { id } });
+    await sequelize.query(
+      "UPDATE imports SET status = 'parsing', updated_at = now() - interval '11 minutes' WHERE id = :id",
+      { replacements: { id } },
+    );
     const stalled = (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body;
     expect(stalled).toMatchObject({ status: "failed", errorMessage: expect.stringContaining("interrupted") });
-    expect((await send("patch", `/api/imports/${id}`, { mapping: stalled.mapping }, { cookie: admin })).status).toBe(202);
+    expect((await send("patch", `/api/imports/${id}`, { mapping: stalled.mapping }, { cookie: admin })).status).toBe(
+      202,
+    );
     expect((await settled(admin, id)).status).toBe("parsed");
   });
 
@@ -230,7 +307,11 @@ describe("other files", () => {
 
   it("lets a moderator import into the review queue, as proposals someone else decides", async () => {
     const number = `CV-88${Date.now() % 100000}-Q`;
-    const text = `Maker,Part No.,Description,Kind,Standard designation,Fit\r\nCorvane Tractor Works,${number},Governor weight bearing,bearing,6200-2RS,direct\r\nNew Maker Ltd,NM-1,Something,bearing,6200,direct\r\n`;
+    const text =
+      `Maker,Part No.,Description,Kind,Standard designation,Fit\r\nCorvane ` +
+      `Tractor Works,${number},Governor weight ` +
+      `bearing,bearing,6200-2RS,direct\r\nNew Maker ` +
+      `Ltd,NM-1,Something,bearing,6200,direct\r\n`;
     const response = await upload(moderator, Buffer.from(text), "for-review.csv");
     expect(response.status).toBe(202);
     expect(response.body.target).toBe("review_queue");
@@ -241,7 +322,9 @@ describe("other files", () => {
     expect((await settled(moderator, response.body.id)).status).toBe("committed");
     expect(await OriginalPart.findOne({ where: { number } })).toBeNull();
     const queue = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: admin });
-    expect(queue.body.submissions).toEqual([expect.objectContaining({ partNumber: number, standard: "6200-2RS", submitter: "moderator@understudy.test" })]);
+    expect(queue.body.submissions).toEqual([
+      expect.objectContaining({ partNumber: number, standard: "6200-2RS", submitter: "moderator@understudy.test" }),
+    ]);
     expect(await Submission.count({ where: { status: "pending" } })).toBeGreaterThan(0);
   });
 });
@@ -249,9 +332,19 @@ describe("other files", () => {
 describe("POST /api/import-mappings", () => {
   it("replaces a saved mapping when one of the same name is saved again", async () => {
     const name = `Halvard club ${Date.now()}`;
-    const first = await send("post", "/api/import-mappings", { name, mapping: { number: "Part no", maker: "Maker" } }, { cookie: admin });
+    const first = await send(
+      "post",
+      "/api/import-mappings",
+      { name, mapping: { number: "Part no", maker: "Maker" } },
+      { cookie: admin },
+    );
     expect(first.status).toBe(201);
-    const again = await send("post", "/api/import-mappings", { name, mapping: { number: "Stamped as", maker: "Maker" } }, { cookie: admin });
+    const again = await send(
+      "post",
+      "/api/import-mappings",
+      { name, mapping: { number: "Stamped as", maker: "Maker" } },
+      { cookie: admin },
+    );
     expect(again.status).toBe(201);
     expect(again.body.id).toBe(first.body.id);
     const { body } = await send("get", "/api/import-mappings", undefined, { cookie: admin });
@@ -264,12 +357,18 @@ describe("POST /api/import-mappings", () => {
 describe("a commit cut off by a server stop", () => {
   it("can be committed again at once, as soon as nothing holds the commit's lock", async () => {
     const number = `CV-77${Date.now() % 100000}-Z`;
-    const text = `Maker,Part No.,Description,Kind,Standard designation,Fit\r\nCorvane Tractor Works,${number},Governor weight bearing,bearing,6200-2RS,direct\r\n`;
+    const text =
+      `Maker,Part No.,Description,Kind,Standard designation,Fit\r\nCorvane ` +
+      `Tractor Works,${number},Governor weight ` +
+      `bearing,bearing,6200-2RS,direct\r\n`;
     const response = await upload(admin, Buffer.from(text), "cut-off.csv");
     const id = response.body.id;
     await settled(admin, id);
     // As a dead server leaves it: claimed for committing a minute ago, and no transaction holding the commit's lock.
-    await sequelize.query("UPDATE imports SET status = 'committing', updated_at = now() - interval '1 minute' WHERE id = :id", { replacements: { id } });
+    await sequelize.query(
+      "UPDATE imports SET status = 'committing', updated_at = now() - interval '1 minute' WHERE id = :id",
+      { replacements: { id } },
+    );
     // While a commit's transaction is alive (here, this test holds its lock) the import is left committing.
     await sequelize.transaction(async (transaction) => {
       await sequelize.query("SELECT pg_advisory_xact_lock(1651, :id)", { replacements: { id }, transaction });
@@ -290,19 +389,28 @@ describe("large bodies", () => {
     // 200 KB of JSON to routes that take a few hundred bytes, signed in and not.
     const big = { title: "x".repeat(200 * 1024) };
     expect((await send("post", "/api/lists", big, { cookie: admin })).status).toBe(413);
-    expect((await send("post", "/api/auth/sign-in", { email: "a@example.org", password: "x".repeat(200 * 1024) })).status).toBe(413);
+    expect(
+      (await send("post", "/api/auth/sign-in", { email: "a@example.org", password: "x".repeat(200 * 1024) })).status,
+    ).toBe(413);
   });
 
   it("takes a large CSV on the import upload, which makes the origin check itself", async () => {
     // About 600 KB: the sample's rows repeated, well above what any other route takes.
     const header = SAMPLE.toString("utf8").split(/\r?\n/)[0];
-    const rows = Array.from({ length: 6000 }, (_, i) => `Pellworth & Sons,${9000 + i}.M1,Test row ${i},bearing,6201-2RS,direct`);
+    const rows = Array.from(
+      { length: 6000 },
+      (_, i) => `Pellworth & Sons,${9000 + i}.M1,Test row ${i},bearing,6201-2RS,direct`,
+    );
     const bytes = Buffer.from([header, ...rows].join("\r\n"));
     expect(bytes.length).toBeGreaterThan(200 * 1024);
     const response = await upload(admin, bytes, "big.csv");
     expect(response.status).toBe(202);
 
-    const foreign = await request(APP_URL).post("/api/imports").set("Origin", "http://elsewhere.example").set("Cookie", admin).attach("file", Buffer.from("a,b\r\n1,2\r\n"), { filename: "x.csv", contentType: "text/csv" });
+    const foreign = await request(APP_URL)
+      .post("/api/imports")
+      .set("Origin", "http://elsewhere.example")
+      .set("Cookie", admin)
+      .attach("file", Buffer.from("a,b\r\n1,2\r\n"), { filename: "x.csv", contentType: "text/csv" });
     expect(foreign.status).toBe(403);
     expect(foreign.body.error).toBe("forbidden_origin");
   });
@@ -310,12 +418,18 @@ describe("large bodies", () => {
 
 describe("files that are not CSV text", () => {
   it("refuses a binary file and a UTF-16 file with 400 on the file field, naming the reason", async () => {
-    const png = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d, 0x49, 0x48, 0x44, 0x52, 0x00, 0x01, 0x00, 0x00]);
+    const png = Buffer.from([
+      0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0x00, 0x00, 0x00, 0x0d, 0x49, 0x48, 0x44, 0x52, 0x00, 0x01, 0x00,
+      0x00,
+    ]);
     const binary = await upload(admin, png, "photo.csv");
     expect(binary.status).toBe(400);
     expect(binary.body.field).toBe("file");
 
-    const utf16 = Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from("Maker,Part No.,Description\r\nCorvane Tractor Works,CV-1,Test\r\n", "utf16le")]);
+    const utf16 = Buffer.concat([
+      Buffer.from([0xff, 0xfe]),
+      Buffer.from("Maker,Part No.,Description\r\nCorvane Tractor Works,CV-1,Test\r\n", "utf16le"),
+    ]);
     const wide = await upload(admin, utf16, "wide.csv");
     expect(wide.status).toBe(400);
     expect(wide.body.field).toBe("file");

@@ -19,11 +19,40 @@ beforeAll(async () => {
 const nasty = fc.oneof(
   fc.string({ maxLength: 40 }),
   fc.string({ unit: "binary", maxLength: 40 }),
-  fc.constantFrom("\u0000", "\ud800", "%FF", "%E0%A4%A", "1/0", "-1", "1e308", "NaN", "../../etc/passwd", "<script>", "' OR 1=1 --", "x".repeat(5000)),
+  fc.constantFrom(
+    "\u0000",
+    "\ud800",
+    "%FF",
+    "%E0%A4%A",
+    "1/0",
+    "-1",
+    "1e308",
+    "NaN",
+    "../../etc/passwd",
+    "<script>",
+    "' OR 1=1 --",
+    "x".repeat(5000),
+  ),
 );
 const body = fc.oneof(
   fc.jsonValue({ maxDepth: 3 }),
-  fc.dictionary(fc.constantFrom("title", "email", "password", "number", "quantity", "partId", "standard", "action", "mapping", "name", "q", "kind"), fc.oneof(nasty, fc.integer(), fc.boolean(), fc.constant(null))),
+  fc.dictionary(
+    fc.constantFrom(
+      "title",
+      "email",
+      "password",
+      "number",
+      "quantity",
+      "partId",
+      "standard",
+      "action",
+      "mapping",
+      "name",
+      "q",
+      "kind",
+    ),
+    fc.oneof(nasty, fc.integer(), fc.boolean(), fc.constant(null)),
+  ),
 );
 
 describe("malformed input on every route", () => {
@@ -39,10 +68,15 @@ describe("malformed input on every route", () => {
           const params = new URLSearchParams(query ?? "");
           for (const key of params.keys()) params.set(key, text);
           const target = query ? `${pathname}?${params}` : pathname;
-          const response = await send(endpoint.method, target, endpoint.method === "get" || endpoint.method === "delete" ? undefined : json, {
-            cookie: signedIn ? admin : undefined,
-            address: uniqueAddress(),
-          });
+          const response = await send(
+            endpoint.method,
+            target,
+            endpoint.method === "get" || endpoint.method === "delete" ? undefined : json,
+            {
+              cookie: signedIn ? admin : undefined,
+              address: uniqueAddress(),
+            },
+          );
           expect(response.status, `${endpoint.method} ${target} → ${response.status}`).toBeLessThan(500);
         }),
         { numRuns: 12, seed: 20261202 },
@@ -53,7 +87,14 @@ describe("malformed input on every route", () => {
   it("answers malformed ids in every [id] segment without a 5xx", async () => {
     const ids = ["%FF", "0", "-1", "1.5", "abc", "9".repeat(30), "%00", "1%2F2"];
     for (const id of ids) {
-      for (const path of [`/api/parts/${id}`, `/api/lists/${id}`, `/api/submissions/${id}`, `/api/imports/${id}`, `/api/photos/${id}`, `/api/lists/${listId}/lines/${id}`]) {
+      for (const path of [
+        `/api/parts/${id}`,
+        `/api/lists/${id}`,
+        `/api/submissions/${id}`,
+        `/api/imports/${id}`,
+        `/api/photos/${id}`,
+        `/api/lists/${listId}/lines/${id}`,
+      ]) {
         const response = await send("get", path, undefined, { cookie: admin });
         expect(response.status, `${path} → ${response.status}`).toBeLessThan(500);
       }

@@ -26,7 +26,10 @@ describe("text that is not text", () => {
     const response = await raw("/api/lists", JSON.stringify({ title }));
     expect(response.status).toBe(400);
     expect(response.body.field).toBe("title");
-    const [row] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM job_lists WHERE title LIKE :t", { replacements: { t: `Fan hub%${title.slice(-6)}` }, type: "SELECT" as never });
+    const [row] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM job_lists WHERE title LIKE :t", {
+      replacements: { t: `Fan hub%${title.slice(-6)}` },
+      type: "SELECT" as never,
+    });
     expect(Number(row.n)).toBe(0);
   });
 
@@ -38,13 +41,19 @@ describe("text that is not text", () => {
 
   it("refuses a body that is not UTF-8", async () => {
     // {"title":"<FF FE>pump list"}: bytes that no UTF-8 text contains, which a lenient decoder turns into U+FFFD.
-    const response = await raw("/api/lists", Buffer.concat([Buffer.from('{"title":"'), Buffer.from([0xff, 0xfe]), Buffer.from('pump list"}')]));
+    const response = await raw(
+      "/api/lists",
+      Buffer.concat([Buffer.from('{"title":"'), Buffer.from([0xff, 0xfe]), Buffer.from('pump list"}')]),
+    );
     expect(response.status).toBe(400);
     expect(response.body.field).toBe("body");
   });
 
   it("refuses a NUL in a query string", async () => {
-    for (const [path, field] of [["/api/seals/match?shaft=1%00&bore=2&unit=in", "shaft"], ["/api/parts/lookup?q=CV-3003%00", "q"]]) {
+    for (const [path, field] of [
+      ["/api/seals/match?shaft=1%00&bore=2&unit=in", "shaft"],
+      ["/api/parts/lookup?q=CV-3003%00", "q"],
+    ]) {
       const response = await send("get", path);
       expect(response.status).toBe(400);
       expect(response.body.field).toBe(field);

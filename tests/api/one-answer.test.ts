@@ -13,7 +13,13 @@ beforeAll(async () => {
 const partId = async (number: string) => (await OriginalPart.findOne({ where: { number } }))!.id;
 const machineId = async (model: string) => (await Machine.findOne({ where: { model } }))!.id;
 
-type Ranked = { id: number; viaNumber: string | null; fit: string; standard: { designation: string } | null; repairMethod: string | null };
+type Ranked = {
+  id: number;
+  viaNumber: string | null;
+  fit: string;
+  standard: { designation: string } | null;
+  repairMethod: string | null;
+};
 const label = (c: Ranked) => c.standard?.designation ?? c.repairMethod;
 
 async function crossesOf(id: number): Promise<Ranked[]> {
@@ -35,13 +41,38 @@ describe("one ranking of a part's crosses, along its supersession chain", () => 
    */
   const made: Record<string, number> = {};
   beforeAll(async () => {
-    const maker = await Maker.create({ name: `Ranking Test Works ${Date.now()}`, prefixes: [], country: null, note: null });
+    const maker = await Maker.create({
+      name: `Ranking Test Works ${Date.now()}`,
+      prefixes: [],
+      country: null,
+      note: null,
+    });
     const standards = await StandardPart.findAll({ where: { kind: "bearing" }, order: [["id", "ASC"]], limit: 4 });
     for (const [i, key] of ["A", "B", "C", "D"].entries()) {
       const number = `RT-${maker.id}-${key}`;
-      const part = await OriginalPart.create({ makerId: maker.id, number, numberNormalized: number.replace(/-/g, ""), numberKey: number.replace(/-/g, ""), description: "Ranking test bearing", category: "bearing", innerMm: null, outerMm: null, widthMm: null, lengthMm: null, dimensionsNote: null });
+      const part = await OriginalPart.create({
+        makerId: maker.id,
+        number,
+        numberNormalized: number.replace(/-/g, ""),
+        numberKey: number.replace(/-/g, ""),
+        description: "Ranking test bearing",
+        category: "bearing",
+        innerMm: null,
+        outerMm: null,
+        widthMm: null,
+        lengthMm: null,
+        dimensionsNote: null,
+      });
       made[key] = part.id;
-      await Cross.create({ originalPartId: part.id, standardPartId: standards[i].id, repairMethod: null, fit: key === "C" ? "with_modification" : "direct", notes: null, status: "approved", origin: "editor" });
+      await Cross.create({
+        originalPartId: part.id,
+        standardPartId: standards[i].id,
+        repairMethod: null,
+        fit: key === "C" ? "with_modification" : "direct",
+        notes: null,
+        status: "approved",
+        origin: "editor",
+      });
     }
     await Supersession.bulkCreate([
       { oldPartId: made.A, newPartId: made.B, kind: "one_way", note: null },
@@ -50,10 +81,14 @@ describe("one ranking of a part's crosses, along its supersession chain", () => 
     ]);
   });
 
-  it("gives an older number the crosses of the newer numbers that replace it one way, marked with the number they came from", async () => {
-    const a = await crossesOf(made.A);
-    expect(a.map((c) => c.viaNumber)).toEqual([null, expect.stringMatching(/-B$/), expect.stringMatching(/-C$/)]);
-  });
+  it(
+    "gives an older number the crosses of the newer numbers that replace it " +
+      "one way, marked with the number they came from",
+    async () => {
+      const a = await crossesOf(made.A);
+      expect(a.map((c) => c.viaNumber)).toEqual([null, expect.stringMatching(/-B$/), expect.stringMatching(/-C$/)]);
+    },
+  );
 
   it("never gives a newer number the crosses of an older one across a one-way link", async () => {
     const b = await crossesOf(made.B);
@@ -91,60 +126,93 @@ describe("one ranking of a part's crosses, along its supersession chain", () => 
     const csv = await send("get", `/api/lists/${list}/export.csv`, undefined, { cookie: owner });
     expect(csv.text).toContain(`,${best},`);
     const machine = await getMachine(await machineId("Model 22"));
-    expect(machine.parts.find((p) => p.number === "CV-3003-B")).toMatchObject({ standard: best, viaNumber: "CV-3003-A", serials: "to serial 22-1340" });
+    expect(machine.parts.find((p) => p.number === "CV-3003-B")).toMatchObject({
+      standard: best,
+      viaNumber: "CV-3003-A",
+      serials: "to serial 22-1340",
+    });
   });
 });
 
 describe("serial ranges", () => {
   it("shows the serials a part was fitted to where it is used", async () => {
     const { body } = await send("get", `/api/parts/${await partId("CV-3003-A")}`);
-    expect(body.whereUsed).toEqual([expect.objectContaining({ model: "Model 22", assembly: "Water pump", serials: "to serial 22-1340" })]);
+    expect(body.whereUsed).toEqual([
+      expect.objectContaining({ model: "Model 22", assembly: "Water pump", serials: "to serial 22-1340" }),
+    ]);
   });
 
-  it("asks which serial range when the list has no serial, then adds one part for each position of that serial", async () => {
-    const list = await newList({ machineId: await machineId("Model 22") });
-    const { body: line } = await send("post", `/api/lists/${list}/lines`, { number: "CV-3004-A" }, { cookie: owner });
-    const url = `/api/lists/${list}/lines/${line.lineId}/assembly`;
-    const asked = await send("post", url, {}, { cookie: owner });
-    expect(asked.status).toBe(400);
-    expect(asked.body.field).toBe("serial");
-    expect(asked.body.choices).toContainEqual({ serial: "22-1340", label: "up to 22-1340" });
-    expect(asked.body.choices).toContainEqual({ serial: "22-3205", label: "22-3205 and later" });
-    expect((await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body.lines).toHaveLength(1);
+  it(
+    "asks which serial range when the list has no serial, then adds one " + "part for each position of that serial",
+    async () => {
+      const list = await newList({ machineId: await machineId("Model 22") });
+      const { body: line } = await send("post", `/api/lists/${list}/lines`, { number: "CV-3004-A" }, { cookie: owner });
+      const url = `/api/lists/${list}/lines/${line.lineId}/assembly`;
+      const asked = await send("post", url, {}, { cookie: owner });
+      expect(asked.status).toBe(400);
+      expect(asked.body.field).toBe("serial");
+      expect(asked.body.choices).toContainEqual({ serial: "22-1340", label: "up to 22-1340" });
+      expect(asked.body.choices).toContainEqual({ serial: "22-3205", label: "22-3205 and later" });
+      expect((await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body.lines).toHaveLength(1);
 
-    expect((await send("post", url, { serial: "30-1000" }, { cookie: owner })).body.field).toBe("serial");
-    const added = await send("post", url, { serial: "22-1000" }, { cookie: owner });
-    expect(added.status).toBe(200);
-    expect(added.body.serial).toBe("22-1000");
-    const numbers = (await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body.lines.map((l: { number: string }) => l.number).sort();
-    // Serial 22-1000 of the Model 22 water pump: the early front bearing (under its service number), the early seal
-    // and key, and the parts fitted throughout.
-    expect(numbers).toEqual(["CV-3003-B", "CV-3004-A", "CV-3010-A", "CV-3013-A", "CV-3016-A"]);
-  });
+      expect((await send("post", url, { serial: "30-1000" }, { cookie: owner })).body.field).toBe("serial");
+      const added = await send("post", url, { serial: "22-1000" }, { cookie: owner });
+      expect(added.status).toBe(200);
+      expect(added.body.serial).toBe("22-1000");
+      const numbers = (await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body.lines
+        .map((l: { number: string }) => l.number)
+        .sort();
+      // Serial 22-1000 of the Model 22 water pump: the early front bearing (under its service number), the early seal
+      // and key, and the parts fitted throughout.
+      expect(numbers).toEqual(["CV-3003-B", "CV-3004-A", "CV-3010-A", "CV-3013-A", "CV-3016-A"]);
+    },
+  );
 
-  it("gives a job list for a machine and serial exactly one part per position, and skips a position already filled", async () => {
-    const list = await newList({ machineId: await machineId("Model 22"), machineSerial: "22-3000" });
-    // The front bearing of serials 22-1341 to 22-2890 is already on the list (perhaps wrongly): it fills the position.
-    await send("post", `/api/lists/${list}/lines`, { number: "CV-3000-A" }, { cookie: owner });
-    const { body: line } = await send("post", `/api/lists/${list}/lines`, { number: "CV-3004-A" }, { cookie: owner });
-    const added = await send("post", `/api/lists/${list}/lines/${line.lineId}/assembly`, {}, { cookie: owner });
-    expect(added.status).toBe(200);
-    expect(added.body.skipped).toContain("Water pump bearing, front");
-    const view = (await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body;
-    expect(view.machineSerial).toBe("22-3000");
-    const positions = view.lines.map((l: { description: string }) => l.description);
-    expect(new Set(positions).size).toBe(positions.length);
-    expect(view.lines.map((l: { number: string }) => l.number).sort()).toEqual(["CV-3000-A", "CV-3004-A", "CV-3010-A", "CV-3013-A", "CV-3017-A"]);
-    // The bearing that does not fit serial 22-3000 says so, by its number.
-    const front = view.lines.find((l: { number: string }) => l.number === "CV-3000-A");
-    expect(front.warnings).toContain("CV-3000-A was fitted to the Model 22 serials 22-1341 to 22-2890; this list is for serial 22-3000.");
-  });
+  it(
+    "gives a job list for a machine and serial exactly one part per " + "position, and skips a position already filled",
+    async () => {
+      const list = await newList({ machineId: await machineId("Model 22"), machineSerial: "22-3000" });
+      // The front bearing of serials 22-1341 to 22-2890 is already on the list (perhaps wrongly):
+      // it fills the position.
+      await send("post", `/api/lists/${list}/lines`, { number: "CV-3000-A" }, { cookie: owner });
+      const { body: line } = await send("post", `/api/lists/${list}/lines`, { number: "CV-3004-A" }, { cookie: owner });
+      const added = await send("post", `/api/lists/${list}/lines/${line.lineId}/assembly`, {}, { cookie: owner });
+      expect(added.status).toBe(200);
+      expect(added.body.skipped).toContain("Water pump bearing, front");
+      const view = (await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body;
+      expect(view.machineSerial).toBe("22-3000");
+      const positions = view.lines.map((l: { description: string }) => l.description);
+      expect(new Set(positions).size).toBe(positions.length);
+      expect(view.lines.map((l: { number: string }) => l.number).sort()).toEqual([
+        "CV-3000-A",
+        "CV-3004-A",
+        "CV-3010-A",
+        "CV-3013-A",
+        "CV-3017-A",
+      ]);
+      // The bearing that does not fit serial 22-3000 says so, by its number.
+      const front = view.lines.find((l: { number: string }) => l.number === "CV-3000-A");
+      expect(front.warnings).toContain(
+        "CV-3000-A was fitted to the Model 22 serials 22-1341 to 22-2890; this list is for serial 22-3000.",
+      );
+    },
+  );
 
   it("refuses another model's serial on a list, naming the field", async () => {
-    const refused = await send("post", "/api/lists", { title: "Wrong plate", machineId: await machineId("Model 22"), machineSerial: "35-2200" }, { cookie: owner });
+    const refused = await send(
+      "post",
+      "/api/lists",
+      { title: "Wrong plate", machineId: await machineId("Model 22"), machineSerial: "35-2200" },
+      { cookie: owner },
+    );
     expect(refused.status).toBe(400);
     expect(refused.body.field).toBe("machineSerial");
-    const noMachine = await send("post", "/api/lists", { title: "No machine", machineSerial: "22-100" }, { cookie: owner });
+    const noMachine = await send(
+      "post",
+      "/api/lists",
+      { title: "No machine", machineSerial: "22-100" },
+      { cookie: owner },
+    );
     expect(noMachine.body.field).toBe("machineSerial");
   });
 
@@ -152,12 +220,22 @@ describe("serial ranges", () => {
     const list = await newList({ machineId: await machineId("HT 25") });
     await send("post", `/api/lists/${list}/lines`, { number: "CV-3003-B" }, { cookie: owner });
     const view = (await send("get", `/api/lists/${list}`, undefined, { cookie: owner })).body;
-    expect(view.lines[0].warnings).toContain("CV-3003-B is a Corvane Tractor Works part that no Halvard Maskinfabrik machine uses: check it belongs on this list.");
+    expect(view.lines[0].warnings).toContain(
+      "CV-3003-B is a Corvane Tractor Works part that no Halvard Maskinfabrik " +
+        "machine uses: check it belongs on this list.",
+    );
   });
 });
 
 describe("look-up that finds", () => {
-  const lookup = async (params: Record<string, string>) => (await send("get", `/api/parts/lookup?${new URLSearchParams(params)}`)).body.results as Array<{ number: string; matchedBy: string; maker: string; description: string; best: unknown }>;
+  const lookup = async (params: Record<string, string>) =>
+    (await send("get", `/api/parts/lookup?${new URLSearchParams(params)}`)).body.results as Array<{
+      number: string;
+      matchedBy: string;
+      maker: string;
+      description: string;
+      best: unknown;
+    }>;
 
   it("puts an exact hit first and still lists similar numbers after it, marked", async () => {
     const results = await lookup({ q: "CV-3003-A", limit: "8" });
@@ -177,7 +255,9 @@ describe("look-up that finds", () => {
 
   it("finds parts by words: description, assembly, machine model and maker", async () => {
     const results = await lookup({ q: "water pump bearing model 22", limit: "30" });
-    expect(results.map((r) => r.number)).toEqual(expect.arrayContaining(["CV-3000-A", "CV-3002-A", "CV-3003-A", "CV-3003-B", "CV-3004-A"]));
+    expect(results.map((r) => r.number)).toEqual(
+      expect.arrayContaining(["CV-3000-A", "CV-3002-A", "CV-3003-A", "CV-3003-B", "CV-3004-A"]),
+    );
     expect(results.every((r) => r.matchedBy === "words" && /water pump bearing/i.test(r.description))).toBe(true);
     const byMaker = await lookup({ q: "halvard fan belt", limit: "30" });
     expect(byMaker.length).toBeGreaterThan(0);

@@ -24,7 +24,13 @@ describe("GET /api/bearings/decode", () => {
   it("decodes a heavy-series bearing with a snap ring and loose clearance", async () => {
     // ISO 15 diameter series 4, bore code 08 = 40 mm: 40 × 110 × 27 (from memory of the standard's table).
     const { body } = await get(`/api/bearings/decode?designation=${encodeURIComponent("6408 NR C4")}`);
-    expect(body).toMatchObject({ boreMm: 40, outsideDiameterMm: 110, widthMm: 27, snapRing: { ring: true }, clearance: { group: "C4" } });
+    expect(body).toMatchObject({
+      boreMm: 40,
+      outsideDiameterMm: 110,
+      widthMm: 27,
+      snapRing: { ring: true },
+      clearance: { group: "C4" },
+    });
   });
 });
 
@@ -32,7 +38,13 @@ describe("GET /api/bearings/match", () => {
   it("ranks 6205 first for 25 × 52 × 15 mm", async () => {
     const { status, body } = await get("/api/bearings/match?bore=25&od=52&width=15&unit=mm&tolerance=0.1");
     expect(status).toBe(200);
-    expect(body.candidates[0]).toMatchObject({ designation: "6205", boreMm: 25, outsideDiameterMm: 52, widthMm: 15, score: 1 });
+    expect(body.candidates[0]).toMatchObject({
+      designation: "6205",
+      boreMm: 25,
+      outsideDiameterMm: 52,
+      widthMm: 15,
+      score: 1,
+    });
     expect(body.candidates[0].deviations).toHaveLength(3);
   });
 
@@ -61,7 +73,14 @@ describe("GET /api/seals/match and /api/seals/press-fit", () => {
     // 1/2 in wide; a new seal OD of 2.378 in presses in with 0.004 in (RMA OS-4: 0.004 ± 0.002 in).
     const { status, body } = await get("/api/seals/match?shaft=1.497&bore=2.374&width=0.5&unit=in");
     expect(status).toBe(200);
-    expect(body.order).toMatchObject({ system: "inch", shaft: 1.5, bore: 2.374, width: 0.5, label: "1-1/2 × 2.374 × 1/2 in", sealOd: { min: 2.376, max: 2.38 } });
+    expect(body.order).toMatchObject({
+      system: "inch",
+      shaft: 1.5,
+      bore: 2.374,
+      width: 0.5,
+      label: "1-1/2 × 2.374 × 1/2 in",
+      sealOd: { min: 2.376, max: 2.38 },
+    });
     expect(body.order.notes.length).toBeGreaterThan(0);
     expect(body.shaft.nominalLabel).toBe("1-1/2 in");
     expect(body.shaft.message).not.toMatch(/above 38 mm/);
@@ -78,7 +97,9 @@ describe("GET /api/seals/match and /api/seals/press-fit", () => {
     // 1.497 in = 38.024 mm: in inches it is a worn 1-1/2 in shaft; typed as 38.02 mm it is a 38 mm one.
     expect((await get("/api/seals/shaft?shaft=1.497&unit=in")).body.nominalLabel).toBe("1-1/2 in");
     expect((await get("/api/seals/shaft?shaft=38.02&unit=mm")).body.nominalLabel).toBe("38 mm");
-    expect((await get("/api/units/nominal?value=1.497&unit=in&surface=shaft")).body.candidates[0].label).toBe("1-1/2 in");
+    expect((await get("/api/units/nominal?value=1.497&unit=in&surface=shaft")).body.candidates[0].label).toBe(
+      "1-1/2 in",
+    );
   });
 
   it("offers the remedies for a grooved shaft", async () => {
@@ -103,7 +124,14 @@ describe("GET /api/belts/decode and /api/belts/drive", () => {
   it("decodes B60", async () => {
     const { status, body } = await get("/api/belts/decode?designation=B60");
     expect(status).toBe(200);
-    expect(body).toMatchObject({ section: "B", insideLength: 60, pitchLength: 61.8, unit: "in", topWidth: 0.65625, height: 0.40625 });
+    expect(body).toMatchObject({
+      section: "B",
+      insideLength: 60,
+      pitchLength: 61.8,
+      unit: "in",
+      topWidth: 0.65625,
+      height: 0.40625,
+    });
     expect(body.outsideLength).toBeGreaterThan(body.pitchLength);
   });
 

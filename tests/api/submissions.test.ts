@@ -1,6 +1,19 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Assembly, AuditEvent, Confirmation, Cross, Maker, Machine, OriginalPart, sequelize, StandardPart, Submission, SubmissionPhoto, User } from "@/db";
+import {
+  Assembly,
+  AuditEvent,
+  Confirmation,
+  Cross,
+  Maker,
+  Machine,
+  OriginalPart,
+  sequelize,
+  StandardPart,
+  Submission,
+  SubmissionPhoto,
+  User,
+} from "@/db";
 import { sendProposalDigest } from "@/lib/community/digest";
 import { sweepAbandonedPhotos } from "@/lib/community/photos";
 import { headObject } from "@/lib/storage/s3";
@@ -22,11 +35,24 @@ let makerId: number;
 let bearing6205: number;
 
 beforeAll(async () => {
-  [member, other, moderator, admin] = await Promise.all([signIn(MEMBER), signIn(OTHER), signIn(MODERATOR), signIn(ADMIN)]);
+  [member, other, moderator, admin] = await Promise.all([
+    signIn(MEMBER),
+    signIn(OTHER),
+    signIn(MODERATOR),
+    signIn(ADMIN),
+  ]);
   makerId = (await Maker.findOne({ order: [["id", "ASC"]] }))!.id;
   const [standard] = await StandardPart.findOrCreate({
     where: { kind: "bearing", designation: "6205-2RS" },
-    defaults: { kind: "bearing", designation: "6205-2RS", innerMm: 25, outerMm: 52, widthMm: 15, lengthMm: null, attributes: {} },
+    defaults: {
+      kind: "bearing",
+      designation: "6205-2RS",
+      innerMm: 25,
+      outerMm: 52,
+      widthMm: 15,
+      lengthMm: null,
+      attributes: {},
+    },
   });
   bearing6205 = standard.id;
 });
@@ -69,7 +95,10 @@ describe("POST /api/submissions", () => {
 
   it("flags a bearing designation whose sizes contradict the ones entered", async () => {
     // ISO 15:2017, series 62: 6205 is 25 × 52 × 15 mm, so an entered outside diameter of 47 mm contradicts it.
-    const { body, status } = await submit(member, newPartProposal({ standard: { mode: "new", kind: "bearing", designation: "6205 2rs", outerMm: 47 } }).body);
+    const { body, status } = await submit(
+      member,
+      newPartProposal({ standard: { mode: "new", kind: "bearing", designation: "6205 2rs", outerMm: 47 } }).body,
+    );
     expect(status).toBe(201);
     const warnings = body.checks.filter((c: { level: string }) => c.level === "warning");
     expect(warnings).toEqual([expect.objectContaining({ field: "standard.outerMm" })]);
@@ -78,39 +107,69 @@ describe("POST /api/submissions", () => {
 });
 
 describe("the round trip: submit, review, catalogue, mail", () => {
-  it("keeps a proposal out of the catalogue until a moderator approves it, then shows it and tells the member", async () => {
-    const { number, body } = newPartProposal();
-    const created = await submit(member, body);
-    expect(created.status).toBe(201);
-    expect(created.body).toMatchObject({ outcome: "submitted", submission: { status: "pending" }, photosMissing: [] });
-    const id = created.body.submission.id;
+  it(
+    "keeps a proposal out of the catalogue until a moderator approves it, " + "then shows it and tells the member",
+    async () => {
+      const { number, body } = newPartProposal();
+      const created = await submit(member, body);
+      expect(created.status).toBe(201);
+      expect(created.body).toMatchObject({
+        outcome: "submitted",
+        submission: { status: "pending" },
+        photosMissing: [],
+      });
+      const id = created.body.submission.id;
 
-    expect((await lookup(number)).body.results).toEqual([]);
-    const mine = await send("get", "/api/submissions?mine=1", undefined, { cookie: member });
-    expect(mine.body.submissions.find((s: { id: number }) => s.id === id)).toMatchObject({ status: "pending", partNumber: number, standard: "6205-2RS" });
+      expect((await lookup(number)).body.results).toEqual([]);
+      const mine = await send("get", "/api/submissions?mine=1", undefined, { cookie: member });
+      expect(mine.body.submissions.find((s: { id: number }) => s.id === id)).toMatchObject({
+        status: "pending",
+        partNumber: number,
+        standard: "6205-2RS",
+      });
 
-    expect((await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: other })).status).toBe(403);
+      expect(
+        (await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: other })).status,
+      ).toBe(403);
 
-    const queue = await send("get", "/api/submissions?category=bearing&limit=200", undefined, { cookie: moderator });
-    expect(queue.status).toBe(200);
-    const dates = queue.body.submissions.map((s: { createdAt: string }) => s.createdAt);
-    expect(dates).toEqual([...dates].sort());
-    const searched = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: moderator });
-    expect(searched.body).toMatchObject({ total: 1, submissions: [expect.objectContaining({ id, partNumber: number })] });
-    expect((await send("get", "/api/submissions?maker=abc", undefined, { cookie: moderator })).body.field).toBe("maker");
+      const queue = await send("get", "/api/submissions?category=bearing&limit=200", undefined, { cookie: moderator });
+      expect(queue.status).toBe(200);
+      const dates = queue.body.submissions.map((s: { createdAt: string }) => s.createdAt);
+      expect(dates).toEqual([...dates].sort());
+      const searched = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: moderator });
+      expect(searched.body).toMatchObject({
+        total: 1,
+        submissions: [expect.objectContaining({ id, partNumber: number })],
+      });
+      expect((await send("get", "/api/submissions?maker=abc", undefined, { cookie: moderator })).body.field).toBe(
+        "maker",
+      );
 
-    const decided = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
-    expect(decided.status).toBe(200);
-    expect(decided.body.submission.status).toBe("approved");
+      const decided = await send(
+        "post",
+        `/api/submissions/${id}/decision`,
+        { action: "approve" },
+        { cookie: moderator },
+      );
+      expect(decided.status).toBe(200);
+      expect(decided.body.submission.status).toBe("approved");
 
-    const found = (await lookup(number)).body.results[0];
-    expect(found).toMatchObject({ number, crossCount: 1 });
-    const part = await send("get", `/api/parts/${found.id}`);
-    expect(part.body.crosses).toEqual([expect.objectContaining({ id: decided.body.cross.id, fit: "direct", origin: "community", standard: expect.objectContaining({ designation: "6205-2RS" }) })]);
+      const found = (await lookup(number)).body.results[0];
+      expect(found).toMatchObject({ number, crossCount: 1 });
+      const part = await send("get", `/api/parts/${found.id}`);
+      expect(part.body.crosses).toEqual([
+        expect.objectContaining({
+          id: decided.body.cross.id,
+          fit: "direct",
+          origin: "community",
+          standard: expect.objectContaining({ designation: "6205-2RS" }),
+        }),
+      ]);
 
-    const mail = await waitForMail(MEMBER, `Your cross is in the catalogue: ${number}`);
-    expect(mail.text).toContain(`/parts/${found.id}`);
-  });
+      const mail = await waitForMail(MEMBER, `Your cross is in the catalogue: ${number}`);
+      expect(mail.text).toContain(`/parts/${found.id}`);
+    },
+  );
 
   it("sends a rejection with its reason, and refuses one without a reason", async () => {
     const created = await submit(member, newPartProposal().body);
@@ -118,7 +177,12 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     const noReason = await send("post", `/api/submissions/${id}/decision`, { action: "reject" }, { cookie: moderator });
     expect(noReason.status).toBe(400);
     expect(noReason.body.field).toBe("message");
-    const rejected = await send("post", `/api/submissions/${id}/decision`, { action: "reject", message: "6205 is too narrow for this housing." }, { cookie: moderator });
+    const rejected = await send(
+      "post",
+      `/api/submissions/${id}/decision`,
+      { action: "reject", message: "6205 is too narrow for this housing." },
+      { cookie: moderator },
+    );
     expect(rejected.status).toBe(200);
     const mail = await waitForMail(MEMBER, "was not accepted");
     expect(mail.text).toContain("6205 is too narrow for this housing.");
@@ -129,7 +193,9 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     expect(page.text).toContain("6205 is too narrow for this housing.");
     expect(page.text).toContain("The moderator&#x27;s message");
     expect((await send("get", `/proposals/${id}`, undefined, { cookie: other })).status).toBe(404);
-    expect((await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator })).status).toBe(409);
+    expect(
+      (await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator })).status,
+    ).toBe(409);
   });
 
   it("sends a proposal back for changes; the member edits it and it is pending again", async () => {
@@ -137,14 +203,24 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     const id = (await submit(member, body)).body.submission.id;
     expect((await send("patch", `/api/submissions/${id}`, body, { cookie: member })).status).toBe(409);
 
-    const sentBack = await send("post", `/api/submissions/${id}/decision`, { action: "request_changes", message: "Add the width you measured." }, { cookie: moderator });
+    const sentBack = await send(
+      "post",
+      `/api/submissions/${id}/decision`,
+      { action: "request_changes", message: "Add the width you measured." },
+      { cookie: moderator },
+    );
     expect(sentBack.status).toBe(200);
     const mail = await waitForMail(MEMBER, "needs a change");
     expect(mail.text).toContain("Add the width you measured.");
     expect(mail.text).toContain(`/proposals/${id}/edit`);
 
     expect((await send("patch", `/api/submissions/${id}`, body, { cookie: other })).status).toBe(404);
-    const edited = await send("patch", `/api/submissions/${id}`, { ...body, measurements: [...body.measurements, { dimension: "width", value: 14.98, unit: "mm" }] }, { cookie: member });
+    const edited = await send(
+      "patch",
+      `/api/submissions/${id}`,
+      { ...body, measurements: [...body.measurements, { dimension: "width", value: 14.98, unit: "mm" }] },
+      { cookie: member },
+    );
     expect(edited.status).toBe(200);
     const row = await Submission.findByPk(id);
     expect(row).toMatchObject({ status: "pending", version: 3 });
@@ -156,14 +232,24 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     const id = (await submit(member, body)).body.submission.id;
     const [a, b] = await Promise.all([
       send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator }),
-      send("post", `/api/submissions/${id}/decision`, { action: "reject", message: "Duplicate of another report." }, { cookie: admin }),
+      send(
+        "post",
+        `/api/submissions/${id}/decision`,
+        { action: "reject", message: "Duplicate of another report." },
+        { cookie: admin },
+      ),
     ]);
     expect([a.status, b.status].sort()).toEqual([200, 409]);
-    const events = await AuditEvent.count({ where: { subjectType: "submission", subjectId: String(id), action: ["submission.approve", "submission.reject"] } });
+    const events = await AuditEvent.count({
+      where: { subjectType: "submission", subjectId: String(id), action: ["submission.approve", "submission.reject"] },
+    });
     expect(events).toBe(1);
     const winner = a.status === 200 ? "approved" : "rejected";
     expect((await Submission.findByPk(id))!.status).toBe(winner);
-    const crosses = await sequelize.query(`SELECT c.id FROM crosses c JOIN original_parts p ON p.id = c.original_part_id WHERE p.number = :number`, { replacements: { number } });
+    const crosses = await sequelize.query(
+      `SELECT c.id FROM crosses c JOIN original_parts p ON p.id = c.original_part_id WHERE p.number = :number`,
+      { replacements: { number } },
+    );
     expect(crosses[0]).toHaveLength(winner === "approved" ? 1 : 0);
   });
 
@@ -171,7 +257,9 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     const id = (await submit(moderator, newPartProposal().body)).body.submission.id;
     const own = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
     expect(own.status).toBe(403);
-    expect((await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: admin })).status).toBe(200);
+    expect(
+      (await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: admin })).status,
+    ).toBe(200);
   });
 
   it("sends no decision mail to a member who turned notifications off", async () => {
@@ -181,7 +269,12 @@ describe("the round trip: submit, review, catalogue, mail", () => {
       const { number, body } = newPartProposal();
       const id = (await submit(other, body)).body.submission.id;
       const before = await mailCount(OTHER);
-      const decided = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
+      const decided = await send(
+        "post",
+        `/api/submissions/${id}/decision`,
+        { action: "approve" },
+        { cookie: moderator },
+      );
       expect(decided.body.mailSent).toBe(false);
       await new Promise((r) => setTimeout(r, 500));
       expect(await mailCount(OTHER)).toBe(before);
@@ -196,7 +289,12 @@ describe("duplicates and confirmations", () => {
   it("turns a proposal that repeats an approved cross into a confirmation, once per member", async () => {
     const { body } = newPartProposal();
     const id = (await submit(member, body)).body.submission.id;
-    const approved = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
+    const approved = await send(
+      "post",
+      `/api/submissions/${id}/decision`,
+      { action: "approve" },
+      { cookie: moderator },
+    );
     const crossId = approved.body.cross.id;
     const partId = approved.body.cross.partId;
 
@@ -217,7 +315,12 @@ describe("duplicates and confirmations", () => {
     expect((await submit(member, body)).status).toBe(409);
     const second = await submit(other, body);
     expect(second.body).toMatchObject({ outcome: "confirmed_pending", submissionId: id });
-    const approved = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
+    const approved = await send(
+      "post",
+      `/api/submissions/${id}/decision`,
+      { action: "approve" },
+      { cookie: moderator },
+    );
     expect(await Confirmation.count({ where: { crossId: approved.body.cross.id } })).toBe(1);
   });
 
@@ -242,12 +345,23 @@ describe("withdrawing, rate of work and the audit log", () => {
 
   it("records each decision with who, when, before and after, for admins only", async () => {
     const id = (await submit(member, newPartProposal().body)).body.submission.id;
-    await send("post", `/api/submissions/${id}/decision`, { action: "reject", message: "Not a bearing of that series." }, { cookie: moderator });
+    await send(
+      "post",
+      `/api/submissions/${id}/decision`,
+      { action: "reject", message: "Not a bearing of that series." },
+      { cookie: moderator },
+    );
     expect((await send("get", "/api/audit", undefined, { cookie: moderator })).status).toBe(403);
     expect((await send("get", "/api/audit")).status).toBe(401);
     const { body } = await send("get", "/api/audit?limit=50", undefined, { cookie: admin });
-    const event = body.events.find((e: { action: string; subjectId: string }) => e.action === "submission.reject" && e.subjectId === String(id));
-    expect(event).toMatchObject({ actor: MODERATOR, before: { status: "pending" }, after: { status: "rejected", moderatorMessage: "Not a bearing of that series." } });
+    const event = body.events.find(
+      (e: { action: string; subjectId: string }) => e.action === "submission.reject" && e.subjectId === String(id),
+    );
+    expect(event).toMatchObject({
+      actor: MODERATOR,
+      before: { status: "pending" },
+      after: { status: "rejected", moderatorMessage: "Not a bearing of that series." },
+    });
     expect(Date.parse(event.at)).toBeGreaterThan(Date.now() - 60_000);
   });
 
@@ -266,10 +380,20 @@ describe("withdrawing, rate of work and the audit log", () => {
 
 describe("POST /api/uploads/presign and photos", () => {
   it("refuses files that are not images, and images over 10 MB", async () => {
-    const pdf = await send("post", "/api/uploads/presign", { contentType: "application/pdf", size: 1000 }, { cookie: member });
+    const pdf = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "application/pdf", size: 1000 },
+      { cookie: member },
+    );
     expect(pdf.status).toBe(400);
     expect(pdf.body.field).toBe("contentType");
-    const big = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 10 * 1024 * 1024 + 1 }, { cookie: member });
+    const big = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/jpeg", size: 10 * 1024 * 1024 + 1 },
+      { cookie: member },
+    );
     expect(big.status).toBe(400);
     expect(big.body.field).toBe("size");
     expect((await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 1000 })).status).toBe(401);
@@ -277,14 +401,24 @@ describe("POST /api/uploads/presign and photos", () => {
 
   it("uploads straight to storage, keeps the photo with the proposal, and shows it to the right people", async () => {
     const bytes = Buffer.from("\xff\xd8\xff\xe0 a small test image body \xff\xd9", "latin1");
-    const grant = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: bytes.length, fileName: "bearing.jpg" }, { cookie: member });
+    const grant = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/jpeg", size: bytes.length, fileName: "bearing.jpg" },
+      { cookie: member },
+    );
     expect(grant.status).toBe(201);
     expect(grant.body.uploadUrl).toMatch(/photos%2F|photos\//);
     const put = await fetch(grant.body.uploadUrl, { method: "PUT", body: bytes, headers: grant.body.headers });
     expect(put.status).toBe(200);
 
     // A second grant that is never uploaded: the proposal is saved without it, and says so.
-    const lost = await send("post", "/api/uploads/presign", { contentType: "image/png", size: 500 }, { cookie: member });
+    const lost = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/png", size: 500 },
+      { cookie: member },
+    );
     const { body } = newPartProposal({ photoIds: [grant.body.photoId, lost.body.photoId] });
     const created = await submit(member, body);
     expect(created.status).toBe(201);
@@ -297,26 +431,47 @@ describe("POST /api/uploads/presign and photos", () => {
     expect((await send("get", photoUrl, undefined, { cookie: moderator })).status).toBe(200);
     expect((await send("get", photoUrl)).status).toBe(404);
 
-    const detail = await send("get", `/api/submissions/${created.body.submission.id}`, undefined, { cookie: moderator });
+    const detail = await send("get", `/api/submissions/${created.body.submission.id}`, undefined, {
+      cookie: moderator,
+    });
     expect(detail.body.photoList).toEqual([expect.objectContaining({ id: grant.body.photoId, url: photoUrl })]);
     expect(detail.body.deviations).toEqual([
       // 2.047 in × 25.4 = 51.9938 mm against the 52 mm outside diameter of 6205 (ISO 15:2017, series 62).
       expect.objectContaining({ dimension: "inner", nominalMm: 25, deviationMm: -0.02 }),
       expect.objectContaining({ dimension: "outer", nominalMm: 52, deviationMm: -0.006 }),
     ]);
-    expect((await send("get", `/api/submissions/${created.body.submission.id}`, undefined, { cookie: other })).status).toBe(404);
+    expect(
+      (await send("get", `/api/submissions/${created.body.submission.id}`, undefined, { cookie: other })).status,
+    ).toBe(404);
 
-    await send("post", `/api/submissions/${created.body.submission.id}/decision`, { action: "approve" }, { cookie: moderator });
+    await send(
+      "post",
+      `/api/submissions/${created.body.submission.id}/decision`,
+      { action: "approve" },
+      { cookie: moderator },
+    );
     expect((await send("get", photoUrl)).status).toBe(200);
   });
 
   it("deletes photos granted a day ago and never attached to a proposal, from storage too", async () => {
     const bytes = Buffer.from("\xff\xd8\xff\xe0 abandoned \xff\xd9", "latin1");
-    const grant = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: bytes.length }, { cookie: member });
+    const grant = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/jpeg", size: bytes.length },
+      { cookie: member },
+    );
     await fetch(grant.body.uploadUrl, { method: "PUT", body: bytes, headers: grant.body.headers });
-    const kept = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 10 }, { cookie: member });
+    const kept = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/jpeg", size: 10 },
+      { cookie: member },
+    );
     const photo = await SubmissionPhoto.findByPk(grant.body.photoId);
-    await sequelize.query("UPDATE submission_photos SET created_at = now() - interval '25 hours' WHERE id = :id", { replacements: { id: photo!.id } });
+    await sequelize.query("UPDATE submission_photos SET created_at = now() - interval '25 hours' WHERE id = :id", {
+      replacements: { id: photo!.id },
+    });
     expect(await sweepAbandonedPhotos()).toBeGreaterThanOrEqual(1);
     expect(await SubmissionPhoto.findByPk(photo!.id)).toBeNull();
     expect(await headObject(photo!.objectKey)).toBeNull();
@@ -324,7 +479,12 @@ describe("POST /api/uploads/presign and photos", () => {
   });
 
   it("refuses a photo that another member uploaded", async () => {
-    const grant = await send("post", "/api/uploads/presign", { contentType: "image/webp", size: 10 }, { cookie: other });
+    const grant = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/webp", size: 10 },
+      { cookie: other },
+    );
     const refused = await submit(member, newPartProposal({ photoIds: [grant.body.photoId] }).body);
     expect(refused.status).toBe(400);
     expect(refused.body.field).toBe("photoIds");
@@ -334,10 +494,15 @@ describe("POST /api/uploads/presign and photos", () => {
     const user = await User.findOne({ where: { email: "club.member8@understudy.test" } });
     const cookie = await signIn("club.member8@understudy.test");
     const statuses: number[] = [];
-    for (let i = 0; i < 61; i += 1) statuses.push((await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 100 }, { cookie })).status);
+    for (let i = 0; i < 61; i += 1)
+      statuses.push(
+        (await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 100 }, { cookie })).status,
+      );
     expect(statuses.slice(0, 60).every((s) => s === 201)).toBe(true);
     expect(statuses[60]).toBe(429);
-    await sequelize.query("DELETE FROM submission_photos WHERE user_id = :id AND submission_id IS NULL", { replacements: { id: user!.id } });
+    await sequelize.query("DELETE FROM submission_photos WHERE user_id = :id AND submission_id IS NULL", {
+      replacements: { id: user!.id },
+    });
   });
 });
 
@@ -350,8 +515,16 @@ describe("a new part with its machine", () => {
     expect(missingPlace.status).toBe(400);
     expect(missingPlace.body.field).toBe("original.assemblyId");
     const assembly = await Assembly.findOne({ where: { name: "Fan hub" } });
-    const created = await submit(member, { ...withMachine, original: { ...withMachine.original, assemblyId: assembly!.id } });
-    const decided = await send("post", `/api/submissions/${created.body.submission.id}/decision`, { action: "approve" }, { cookie: moderator });
+    const created = await submit(member, {
+      ...withMachine,
+      original: { ...withMachine.original, assemblyId: assembly!.id },
+    });
+    const decided = await send(
+      "post",
+      `/api/submissions/${created.body.submission.id}/decision`,
+      { action: "approve" },
+      { cookie: moderator },
+    );
     const part = await send("get", `/api/parts/${decided.body.cross.partId}`);
     expect(part.body.number).toBe(number);
     expect(part.body.whereUsed).toEqual([expect.objectContaining({ machineId: machine!.id })]);
@@ -363,8 +536,17 @@ describe("POST /api/submissions against the worn part's documented sizes", () =>
     // DIN 625-1 via BOLTS: 6204 is 20 × 47 × 14 mm; 15 × 35 × 11 mm is the size of 6202. The part itself is test data.
     const number = `TST-${randomUUID().slice(0, 8).toUpperCase()}`;
     const part = await OriginalPart.create({
-      makerId, number, numberNormalized: number.replace(/-/g, ""), numberKey: number.replace(/-/g, ""), description: "Test water pump bearing",
-      category: "bearing", innerMm: 15, outerMm: 35, widthMm: 11, lengthMm: null, dimensionsNote: null,
+      makerId,
+      number,
+      numberNormalized: number.replace(/-/g, ""),
+      numberKey: number.replace(/-/g, ""),
+      description: "Test water pump bearing",
+      category: "bearing",
+      innerMm: 15,
+      outerMm: 35,
+      widthMm: 11,
+      lengthMm: null,
+      dimensionsNote: null,
     });
     const body = {
       original: { mode: "existing", partId: part.id },
@@ -390,7 +572,12 @@ describe("photos checked against their grant", () => {
     // Real S3 refuses a presigned PUT whose length or type differs from the signed ones; the local fake does not,
     // so the app checks what arrived against the grant.
     const bytes = Buffer.from("\xff\xd8\xff\xe0 a test image body that is longer than granted \xff\xd9", "latin1");
-    const grant = await send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 10 }, { cookie: member });
+    const grant = await send(
+      "post",
+      "/api/uploads/presign",
+      { contentType: "image/jpeg", size: 10 },
+      { cookie: member },
+    );
     const put = await fetch(grant.body.uploadUrl, { method: "PUT", body: bytes, headers: grant.body.headers });
     expect(put.status).toBe(200);
     const { body } = newPartProposal({ photoIds: [grant.body.photoId] });
@@ -408,7 +595,9 @@ describe("hourly limits under concurrency", () => {
     const user = await User.findOne({ where: { email } });
     const already = await SubmissionPhoto.count({ where: { userId: user!.id } });
     const responses = await Promise.all(
-      Array.from({ length: 75 }, () => send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 1000 }, { cookie })),
+      Array.from({ length: 75 }, () =>
+        send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 1000 }, { cookie }),
+      ),
     );
     const granted = responses.filter((r) => r.status === 201).length;
     expect(responses.every((r) => r.status === 201 || r.status === 429)).toBe(true);
@@ -435,9 +624,17 @@ describe("the same cross proposed at once", () => {
     // approved cross in the catalogue, the second approval counted as a confirmation.
     const { body } = newPartProposal();
     const first = await submit(member, body);
-    const [part] = await sequelize.query<{ id: number }>("SELECT id FROM submissions WHERE id = :id", { replacements: { id: first.body.submission.id }, type: "SELECT" as never });
-    const twin = await Submission.create({ ...(await Submission.findByPk(part.id))!.get({ plain: true }), id: undefined as never, userId: (await User.findOne({ where: { email: OTHER } }))!.id });
-    const decide = (id: number) => send("post", `/api/submissions/${id}/decision`, { action: "approve", message: "" }, { cookie: moderator });
+    const [part] = await sequelize.query<{ id: number }>("SELECT id FROM submissions WHERE id = :id", {
+      replacements: { id: first.body.submission.id },
+      type: "SELECT" as never,
+    });
+    const twin = await Submission.create({
+      ...(await Submission.findByPk(part.id))!.get({ plain: true }),
+      id: undefined as never,
+      userId: (await User.findOne({ where: { email: OTHER } }))!.id,
+    });
+    const decide = (id: number) =>
+      send("post", `/api/submissions/${id}/decision`, { action: "approve", message: "" }, { cookie: moderator });
     const [x, y] = await Promise.all([decide(first.body.submission.id), decide(twin.id)]);
     expect([x.status, y.status]).toEqual([200, 200]);
     expect(x.body.cross.id).toBe(y.body.cross.id);

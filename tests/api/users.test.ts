@@ -62,7 +62,12 @@ describe("role changes in the audit log", () => {
       (e: { action: string; subjectId: string }) => e.action === "account.role" && e.subjectId === target.id,
     );
     expect(events).toEqual([
-      expect.objectContaining({ actor: "admin@understudy.test", subjectEmail: "club.member1@understudy.test", before: { role: "moderator" }, after: { role: "member" } }),
+      expect.objectContaining({
+        actor: "admin@understudy.test",
+        subjectEmail: "club.member1@understudy.test",
+        before: { role: "moderator" },
+        after: { role: "member" },
+      }),
       expect.objectContaining({ before: { role: "member" }, after: { role: "moderator" } }),
     ]);
   });

@@ -12,7 +12,9 @@ describe("an admin imports the sample spreadsheet through the page", () => {
     const page = currentPage();
     await signInAs(page, "admin@understudy.test");
     await page.goto(`${APP_URL}/admin/imports`);
-    await page.getByLabel("Choose a CSV file").setInputFiles(path.resolve("fixtures/imports/club-interchange-sample.csv"));
+    await page
+      .getByLabel("Choose a CSV file")
+      .setInputFiles(path.resolve("fixtures/imports/club-interchange-sample.csv"));
     await page.waitForURL(/\/admin\/imports\/\d+$/);
     await page.getByRole("heading", { name: "Dry run: what a commit would do" }).waitFor({ timeout: 20_000 });
     // Rejections depend on the file alone, whatever the catalogue already holds.
@@ -43,7 +45,9 @@ describe("a shop builds a job list and downloads it", () => {
     // The list names no machine serial, and the Model 22's pump changed with the serial: it asks which range.
     await page.getByRole("button", { name: "Add the rest of the assembly" }).first().click();
     await page.getByRole("button", { name: "Serial up to 22-1340" }).click();
-    await page.getByText("Added 4 more parts of the water pump (Model 22, serial 22-1340), one for each position.").waitFor();
+    await page
+      .getByText("Added 4 more parts of the water pump (Model 22, serial 22-1340), one for each position.")
+      .waitFor();
     const lines = await page.getByTestId("list-line").count();
     expect(lines).toBe(5);
     // The early front bearing, under its service number.
@@ -61,22 +65,41 @@ describe("a shop builds a job list and downloads it", () => {
     const quantity = page.getByLabel("Quantity of CV-3003-B");
     await quantity.fill("2");
     await quantity.press("Enter");
-    await page.getByText(/parts in all/).filter({ hasText: `${lines} lines` }).waitFor();
+    await page
+      .getByText(/parts in all/)
+      .filter({ hasText: `${lines} lines` })
+      .waitFor();
 
-    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Download CSV" }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent("download"),
+      page.getByRole("link", { name: "Download CSV" }).click(),
+    ]);
     const text = await readFile((await download.path())!, "utf8");
-    const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: true });
+    const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ""), {
+      header: true,
+      skipEmptyLines: true,
+    });
     expect(parsed.data).toHaveLength(lines);
-    expect(parsed.data.find((r) => r["Factory number"] === "CV-3003-B")).toMatchObject({ "Standard designation": "6203-2RS C3", "Earlier numbers": "CV-3003-A", Quantity: "2" });
+    expect(parsed.data.find((r) => r["Factory number"] === "CV-3003-B")).toMatchObject({
+      "Standard designation": "6203-2RS C3",
+      "Earlier numbers": "CV-3003-A",
+      Quantity: "2",
+    });
 
     // Five more lines, two with the shop's supplier details: ten lines in all, the size of a usual job.
     const listId = listUrl.split("/").pop();
     const headers = { Origin: APP_URL };
     for (const number of ["HM 210 007", "CV-3008-A", "CV-3012-A", "CV-3015-A", "HM 210 014"]) {
-      const added = await page.request.post(`${APP_URL}/api/lists/${listId}/lines`, { headers, data: { number, quantity: 1, notes: "Check the shaft for wear where the old part ran." } });
+      const added = await page.request.post(`${APP_URL}/api/lists/${listId}/lines`, {
+        headers,
+        data: { number, quantity: 1, notes: "Check the shaft for wear where the old part ran." },
+      });
       expect(added.status()).toBe(201);
       const { lineId } = await added.json();
-      await page.request.patch(`${APP_URL}/api/lists/${listId}/lines/${lineId}`, { headers, data: { supplier: "County Bearings & Seals", supplierNumber: "CB-1740-2RS", unitPrice: "12.40" } });
+      await page.request.patch(`${APP_URL}/api/lists/${listId}/lines/${lineId}`, {
+        headers,
+        data: { supplier: "County Bearings & Seals", supplierNumber: "CB-1740-2RS", unitPrice: "12.40" },
+      });
     }
 
     await page.goto(`${listUrl}/print`);

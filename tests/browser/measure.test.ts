@@ -68,7 +68,10 @@ describe("measuring a part", () => {
     const page = currentPage();
     await page.goto(`${APP_URL}/measure/belt`);
     await field("Belt number").fill("B60");
-    await page.getByTestId("belt-decoded").getByText(/^61\.8 in$/).waitFor();
+    await page
+      .getByTestId("belt-decoded")
+      .getByText(/^61\.8 in$/)
+      .waitFor();
 
     await field("Top width").fill("21/32");
     await field("Thickness").fill("13/32");
@@ -77,7 +80,10 @@ describe("measuring a part", () => {
     await field("Large pulley, pitch diameter").fill("10");
     await field("Small pulley, pitch diameter").fill("5");
     await field("Centre distance").fill("24");
-    await page.getByTestId("drive-result").getByText(/^71\.823 in$/).waitFor();
+    await page
+      .getByTestId("drive-result")
+      .getByText(/^71\.823 in$/)
+      .waitFor();
   });
 
   it("shows the reason under the field when a size cannot be read", async () => {

@@ -21,7 +21,10 @@ describe("a community cross, from the member's bench to the catalogue", () => {
     await page.getByLabel("Kind of part", { exact: true }).selectOption("bearing");
 
     await page.getByLabel("Designation", { exact: true }).fill("6205-2RS");
-    await page.getByRole("button", { name: /^6205-2RS/ }).first().click();
+    await page
+      .getByRole("button", { name: /^6205-2RS/ })
+      .first()
+      .click();
     await page.getByTestId("picked").getByText("6205-2RS").waitFor();
 
     await page.getByTestId("fit-direct").click();
@@ -38,7 +41,9 @@ describe("a community cross, from the member's bench to the catalogue", () => {
       g.fillRect(0, 0, 320, 240);
       g.fillStyle = "#fff";
       g.fillRect(100, 60, 120, 120);
-      const jpeg = new Uint8Array(await (await new Promise<Blob>((r) => canvas.toBlob((b) => r(b!), "image/jpeg"))).arrayBuffer());
+      const jpeg = new Uint8Array(
+        await (await new Promise<Blob>((r) => canvas.toBlob((b) => r(b!), "image/jpeg"))).arrayBuffer(),
+      );
       const payload = new TextEncoder().encode("Exif\0\0MM\0*\0\0\0\x08\0\0GPS-SECRET-PLACE");
       const app1 = new Uint8Array([0xff, 0xe1, (payload.length + 2) >> 8, (payload.length + 2) & 0xff, ...payload]);
       const withExif = new Uint8Array([...jpeg.slice(0, 2), ...app1, ...jpeg.slice(2)]);
@@ -46,7 +51,8 @@ describe("a community cross, from the member's bench to the catalogue", () => {
       const data = new DataTransfer();
       data.items.add(file);
       const zone = document.querySelector('[data-testid="photo-drop"]')!;
-      for (const type of ["dragenter", "dragover", "drop"]) zone.dispatchEvent(new DragEvent(type, { bubbles: true, cancelable: true, dataTransfer: data }));
+      for (const type of ["dragenter", "dragover", "drop"])
+        zone.dispatchEvent(new DragEvent(type, { bubbles: true, cancelable: true, dataTransfer: data }));
     });
     await page.locator('[data-testid="photo-item"][data-status="done"]').waitFor({ timeout: 15_000 });
 
@@ -71,7 +77,10 @@ describe("a community cross, from the member's bench to the catalogue", () => {
     const photo = page.getByTestId("review-photo");
     await photo.waitFor();
     expect(await photo.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
-    const stored = await page.evaluate(async (src) => new TextDecoder("latin1").decode(await (await fetch(src)).arrayBuffer()), (await photo.getAttribute("src"))!);
+    const stored = await page.evaluate(
+      async (src) => new TextDecoder("latin1").decode(await (await fetch(src)).arrayBuffer()),
+      (await photo.getAttribute("src"))!,
+    );
     expect(stored.startsWith("\xff\xd8")).toBe(true);
     expect(stored).not.toContain("GPS-SECRET-PLACE");
     expect(stored).not.toContain("Exif");
@@ -87,7 +96,10 @@ describe("a community cross, from the member's bench to the catalogue", () => {
   it("the part page shows the approved cross, with its photo, to anyone", async () => {
     const page = currentPage();
     await page.goto(`${APP_URL}/lookup?q=${encodeURIComponent(number)}`);
-    await page.getByRole("link", { name: new RegExp(number) }).first().click();
+    await page
+      .getByRole("link", { name: new RegExp(number) })
+      .first()
+      .click();
     await page.getByRole("heading", { level: 1, name: number }).waitFor();
     const cross = page.getByTestId("cross").filter({ hasText: "6205-2RS" });
     await cross.waitFor();

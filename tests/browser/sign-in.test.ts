@@ -60,7 +60,10 @@ describe("opening an account", () => {
     await page.getByText(`We sent a confirmation link to ${email}`).waitFor();
 
     await page.goto(`${APP_URL}/dev/mail`);
-    await page.getByRole("link", { name: new RegExp(`Confirm your e-mail.*${email}`) }).first().click();
+    await page
+      .getByRole("link", { name: new RegExp(`Confirm your e-mail.*${email}`) })
+      .first()
+      .click();
     await page.getByRole("link", { name: /\/verify-email\?token=/ }).click();
     await page.getByText("is confirmed").waitFor();
 

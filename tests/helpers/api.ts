@@ -43,6 +43,7 @@ export function sessionCookie(response: { headers: Record<string, unknown> }): s
 
 export async function signIn(email: string, password = DEMO_PASSWORD, address = uniqueAddress()): Promise<string> {
   const response = await send("post", "/api/auth/sign-in", { email, password }, { address });
-  if (response.status !== 200) throw new Error(`Sign-in of ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
+  if (response.status !== 200)
+    throw new Error(`Sign-in of ${email} failed: ${response.status} ${JSON.stringify(response.body)}`);
   return sessionCookie(response);
 }

@@ -2,7 +2,10 @@ import { chromium, type Browser, type BrowserContext, type Page } from "playwrig
 import { afterAll, afterEach, beforeAll, beforeEach } from "vitest";
 import { CHROMIUM_PATH } from "./chromium";
 
-/** Debian's Chromium, headless, in a fresh throw-away profile (playwright makes one per launch), with the flags that keep it off the network it cannot reach here. */
+/**
+ * Debian's Chromium, headless, in a fresh throw-away profile (playwright makes one per launch), with the flags that
+ * keep it off the network it cannot reach here.
+ */
 export function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,

@@ -27,7 +27,10 @@ export async function mailCount(to: string): Promise<number> {
 
 /** The first link in a message's text that leads to the given path, as a path with its query. */
 export function linkTo(mail: CapturedMail, pathname: string): string {
-  const url = mail.text.match(/https?:\/\/\S+/g)?.map((u) => new URL(u)).find((u) => u.pathname === pathname);
+  const url = mail.text
+    .match(/https?:\/\/\S+/g)
+    ?.map((u) => new URL(u))
+    .find((u) => u.pathname === pathname);
   if (!url) throw new Error(`No link to ${pathname} in "${mail.subject}"`);
   return `${url.pathname}${url.search}`;
 }

@@ -13,12 +13,18 @@ export interface Endpoint {
 // The route files under app/api, each with the requests that exercise it. Bodies are empty or invalid on purpose:
 // a request that gets past the door is then refused as bad input (400) or as missing (404), and writes nothing.
 export const ROUTES: Record<string, Endpoint[]> = {
-  "account": [{ method: "patch", path: () => "/api/account", door: "account:use", body: { notifyByEmail: "maybe" } }],
-  "audit": [{ method: "get", path: () => "/api/audit", door: "audit:read" }],
+  account: [{ method: "patch", path: () => "/api/account", door: "account:use", body: { notifyByEmail: "maybe" } }],
+  audit: [{ method: "get", path: () => "/api/audit", door: "audit:read" }],
   "auth/me": [{ method: "get", path: () => "/api/auth/me", door: "signed-in" }],
-  "auth/password-reset/confirm": [{ method: "post", path: () => "/api/auth/password-reset/confirm", door: "public", body: {} }],
-  "auth/password-reset/request": [{ method: "post", path: () => "/api/auth/password-reset/request", door: "public", body: {} }],
-  "auth/resend-verification": [{ method: "post", path: () => "/api/auth/resend-verification", door: "public", body: {} }],
+  "auth/password-reset/confirm": [
+    { method: "post", path: () => "/api/auth/password-reset/confirm", door: "public", body: {} },
+  ],
+  "auth/password-reset/request": [
+    { method: "post", path: () => "/api/auth/password-reset/request", door: "public", body: {} },
+  ],
+  "auth/resend-verification": [
+    { method: "post", path: () => "/api/auth/resend-verification", door: "public", body: {} },
+  ],
   "auth/sign-in": [{ method: "post", path: () => "/api/auth/sign-in", door: "public", body: {} }],
   "auth/sign-out": [],
   "auth/sign-up": [{ method: "post", path: () => "/api/auth/sign-up", door: "public", body: {} }],
@@ -28,36 +34,59 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "belts/decode": [{ method: "get", path: () => "/api/belts/decode?designation=B60", door: "public" }],
   "belts/drive": [{ method: "get", path: () => "/api/belts/drive?large=10&small=5&center=24&unit=in", door: "public" }],
   "belts/identify": [{ method: "get", path: () => "/api/belts/identify?top=16.3&unit=mm", door: "public" }],
-  "crosses/[id]/confirmations": [{ method: "post", path: () => "/api/crosses/999999/confirmations", door: "proposals:create", body: {} }],
-  "health": [{ method: "get", path: () => "/api/health", door: "public" }],
+  "crosses/[id]/confirmations": [
+    { method: "post", path: () => "/api/crosses/999999/confirmations", door: "proposals:create", body: {} },
+  ],
+  health: [{ method: "get", path: () => "/api/health", door: "public" }],
   "import-mappings": [
     { method: "get", path: () => "/api/import-mappings", door: "imports:review-queue" },
     { method: "post", path: () => "/api/import-mappings", door: "imports:review-queue", body: {} },
   ],
-  "imports/[id]/commit": [{ method: "post", path: () => "/api/imports/999999/commit", door: "imports:review-queue", body: {} }],
-  "imports/[id]/rejected.csv": [{ method: "get", path: () => "/api/imports/999999/rejected.csv", door: "imports:review-queue" }],
-  "imports/[id]/rollback": [{ method: "post", path: () => "/api/imports/999999/rollback", door: "imports:commit", body: {} }],
+  "imports/[id]/commit": [
+    { method: "post", path: () => "/api/imports/999999/commit", door: "imports:review-queue", body: {} },
+  ],
+  "imports/[id]/rejected.csv": [
+    { method: "get", path: () => "/api/imports/999999/rejected.csv", door: "imports:review-queue" },
+  ],
+  "imports/[id]/rollback": [
+    { method: "post", path: () => "/api/imports/999999/rollback", door: "imports:commit", body: {} },
+  ],
   "imports/[id]": [
     { method: "get", path: () => "/api/imports/999999", door: "imports:review-queue" },
     { method: "patch", path: () => "/api/imports/999999", door: "imports:review-queue", body: {} },
     { method: "delete", path: () => "/api/imports/999999", door: "imports:review-queue" },
   ],
   "imports/[id]/rows": [{ method: "get", path: () => "/api/imports/999999/rows", door: "imports:review-queue" }],
-  "imports": [{ method: "get", path: () => "/api/imports", door: "imports:review-queue" }],
-  "lists/[id]/export.csv": [{ method: "get", path: (listId) => `/api/lists/${listId}/export.csv`, door: "lists:manage" }],
-  "lists/[id]/lines/[lineId]/restore": [{ method: "post", path: (listId) => `/api/lists/${listId}/lines/999999/restore`, door: "lists:manage", body: {} }],
-  "lists/[id]/lines/[lineId]/assembly": [{ method: "post", path: (listId) => `/api/lists/${listId}/lines/999999/assembly`, door: "lists:manage", body: {} }],
+  imports: [{ method: "get", path: () => "/api/imports", door: "imports:review-queue" }],
+  "lists/[id]/export.csv": [
+    { method: "get", path: (listId) => `/api/lists/${listId}/export.csv`, door: "lists:manage" },
+  ],
+  "lists/[id]/lines/[lineId]/restore": [
+    { method: "post", path: (listId) => `/api/lists/${listId}/lines/999999/restore`, door: "lists:manage", body: {} },
+  ],
+  "lists/[id]/lines/[lineId]/assembly": [
+    { method: "post", path: (listId) => `/api/lists/${listId}/lines/999999/assembly`, door: "lists:manage", body: {} },
+  ],
   "lists/[id]/lines/[lineId]": [
-    { method: "patch", path: (listId) => `/api/lists/${listId}/lines/999999`, door: "lists:manage", body: { quantity: 0 } },
+    {
+      method: "patch",
+      path: (listId) => `/api/lists/${listId}/lines/999999`,
+      door: "lists:manage",
+      body: { quantity: 0 },
+    },
     { method: "delete", path: (listId) => `/api/lists/${listId}/lines/999999`, door: "lists:manage" },
   ],
-  "lists/[id]/lines": [{ method: "post", path: (listId) => `/api/lists/${listId}/lines`, door: "lists:manage", body: {} }],
+  "lists/[id]/lines": [
+    { method: "post", path: (listId) => `/api/lists/${listId}/lines`, door: "lists:manage", body: {} },
+  ],
   "lists/[id]": [
     { method: "get", path: (listId) => `/api/lists/${listId}`, door: "lists:manage" },
     { method: "patch", path: (listId) => `/api/lists/${listId}`, door: "lists:manage", body: { title: "" } },
   ],
-  "lists/[id]/share": [{ method: "post", path: (listId) => `/api/lists/${listId}/share`, door: "lists:manage", body: {} }],
-  "lists": [
+  "lists/[id]/share": [
+    { method: "post", path: (listId) => `/api/lists/${listId}/share`, door: "lists:manage", body: {} },
+  ],
+  lists: [
     { method: "get", path: () => "/api/lists", door: "lists:manage" },
     { method: "post", path: () => "/api/lists", door: "lists:manage", body: {} },
   ],
@@ -68,13 +97,15 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "seals/press-fit": [{ method: "get", path: () => "/api/seals/press-fit?bore=47&sealOd=47.1", door: "public" }],
   "seals/shaft": [{ method: "get", path: () => "/api/seals/shaft?shaft=35", door: "public" }],
   "standard-parts": [{ method: "get", path: () => "/api/standard-parts?q=6205", door: "public" }],
-  "submissions/[id]/decision": [{ method: "post", path: () => "/api/submissions/999999/decision", door: "proposals:review", body: {} }],
+  "submissions/[id]/decision": [
+    { method: "post", path: () => "/api/submissions/999999/decision", door: "proposals:review", body: {} },
+  ],
   "submissions/[id]": [
     { method: "get", path: () => "/api/submissions/999999", door: "proposals:create" },
     { method: "patch", path: () => "/api/submissions/999999", door: "proposals:create", body: {} },
     { method: "delete", path: () => "/api/submissions/999999", door: "proposals:create" },
   ],
-  "submissions": [
+  submissions: [
     { method: "get", path: () => "/api/submissions?mine=1", door: "proposals:create" },
     { method: "get", path: () => "/api/submissions", door: "proposals:review" },
     { method: "post", path: () => "/api/submissions", door: "proposals:create", body: {} },
@@ -82,6 +113,5 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "units/nominal": [{ method: "get", path: () => "/api/units/nominal?value=30", door: "public" }],
   "uploads/presign": [{ method: "post", path: () => "/api/uploads/presign", door: "proposals:create", body: {} }],
   "users/[id]": [{ method: "patch", path: () => "/api/users/nobody", door: "accounts:set-role", body: {} }],
-  "users": [{ method: "get", path: () => "/api/users", door: "accounts:list" }],
+  users: [{ method: "get", path: () => "/api/users", door: "accounts:list" }],
 };
-

@@ -5,7 +5,10 @@ import path from "node:path";
  * Another app server from the same build (server.ts), on its own port, for tests that kill it or take its database
  * away without disturbing the server the other tests use. Its settings are the test run's, with `env` on top.
  */
-export async function startSecondServer(port: number, env: Record<string, string> = {}): Promise<{ url: string; process: ChildProcess; kill: () => void }> {
+export async function startSecondServer(
+  port: number,
+  env: Record<string, string> = {},
+): Promise<{ url: string; process: ChildProcess; kill: () => void }> {
   const child = spawn(process.execPath, [path.resolve("node_modules/tsx/dist/cli.mjs"), "server.ts"], {
     env: { ...process.env, ...env, PORT: String(port) },
     detached: true,
@@ -16,7 +19,11 @@ export async function startSecondServer(port: number, env: Record<string, string
     if (child.pid && child.exitCode === null && child.signalCode === null) process.kill(-child.pid, "SIGKILL");
   };
   const deadline = Date.now() + 60_000;
-  while (!(await fetch(`${url}/api/health`).then((r) => r.ok).catch(() => false))) {
+  while (
+    !(await fetch(`${url}/api/health`)
+      .then((r) => r.ok)
+      .catch(() => false))
+  ) {
     if (Date.now() > deadline) {
       kill();
       throw new Error(`The second app server on port ${port} did not start`);

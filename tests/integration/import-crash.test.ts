@@ -22,7 +22,11 @@ beforeAll(async () => {
 }, 90_000);
 
 async function status(id: number) {
-  return (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body as { status: string; progress: { rows?: number } | null; errorMessage: string | null };
+  return (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body as {
+    status: string;
+    progress: { rows?: number } | null;
+    errorMessage: string | null;
+  };
 }
 
 async function until(id: number, done: (s: Awaited<ReturnType<typeof status>>) => boolean, seconds: number) {
@@ -38,21 +42,34 @@ async function until(id: number, done: (s: Awaited<ReturnType<typeof status>>) =
 describe("an import commit whose server is killed", () => {
   it("leaves the catalogue untouched and can be committed again at once on the server that is still up", async () => {
     const stamp = Date.now() % 1_000_000;
-    const rows = Array.from({ length: 30_000 }, (_, i) => `Corvane Tractor Works,CV-K${stamp}-${i},Test crash row ${i},bearing,6201-2RS,direct`);
+    const rows = Array.from(
+      { length: 30_000 },
+      (_, i) => `Corvane Tractor Works,CV-K${stamp}-${i},Test crash row ${i},bearing,6201-2RS,direct`,
+    );
     const csv = Buffer.from(["Maker,Part No.,Description,Kind,Standard designation,Fit", ...rows].join("\r\n"));
-    const uploaded = await request(SECOND).post("/api/imports").set("Origin", SECOND).set("Cookie", admin).attach("file", csv, { filename: "crash.csv", contentType: "text/csv" });
+    const uploaded = await request(SECOND)
+      .post("/api/imports")
+      .set("Origin", SECOND)
+      .set("Cookie", admin)
+      .attach("file", csv, { filename: "crash.csv", contentType: "text/csv" });
     expect(uploaded.status).toBe(202);
     const id = uploaded.body.id as number;
     await until(id, (s) => s.status === "parsed", 120);
 
-    expect((await request(SECOND).post(`/api/imports/${id}/commit`).set("Origin", SECOND).set("Cookie", admin).send({})).status).toBe(202);
+    expect(
+      (await request(SECOND).post(`/api/imports/${id}/commit`).set("Origin", SECOND).set("Cookie", admin).send({}))
+        .status,
+    ).toBe(202);
     await until(id, (s) => s.status === "committing" && (s.progress?.rows ?? 0) > 0, 60);
     second.kill();
 
     // Nothing of the cut-off commit landed, and the import is ready to commit again within seconds, not minutes.
     const recovered = await until(id, (s) => s.status === "parsed", 20);
     expect(recovered.errorMessage).toMatch(/interrupted/);
-    const [{ n }] = await sequelize.query<{ n: string }>("SELECT count(*) AS n FROM original_parts WHERE number LIKE :p", { replacements: { p: `CV-K${stamp}-%` }, type: "SELECT" as never });
+    const [{ n }] = await sequelize.query<{ n: string }>(
+      "SELECT count(*) AS n FROM original_parts WHERE number LIKE :p",
+      { replacements: { p: `CV-K${stamp}-%` }, type: "SELECT" as never },
+    );
     expect(Number(n)).toBe(0);
 
     expect((await send("post", `/api/imports/${id}/commit`, {}, { cookie: admin })).status).toBe(202);

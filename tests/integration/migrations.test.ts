@@ -39,9 +39,12 @@ async function tables(): Promise<string[]> {
 }
 
 async function enumTypes(): Promise<string[]> {
-  const rows = await sequelize.query<{ name: string }>("SELECT typname AS name FROM pg_type WHERE typtype = 'e' ORDER BY typname", {
-    type: QueryTypes.SELECT,
-  });
+  const rows = await sequelize.query<{ name: string }>(
+    "SELECT typname AS name FROM pg_type WHERE typtype = 'e' ORDER BY typname",
+    {
+      type: QueryTypes.SELECT,
+    },
+  );
   return rows.map((r) => r.name);
 }
 

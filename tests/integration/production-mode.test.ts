@@ -12,7 +12,9 @@ afterAll(() => sequelize.close());
 describe("production mode on a database once seeded for a demo", () => {
   it("refuses the demo accounts, with the published password, as if they did not exist", async () => {
     for (const email of ["member@understudy.test", "admin@understudy.test"]) {
-      await expect(signIn({ email, password: "understudy-demo", address: "198.18.0.1" })).rejects.toMatchObject({ code: "unauthenticated" });
+      await expect(signIn({ email, password: "understudy-demo", address: "198.18.0.1" })).rejects.toMatchObject({
+        code: "unauthenticated",
+      });
     }
   });
 

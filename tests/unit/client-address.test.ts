@@ -12,7 +12,8 @@ describe("client address", () => {
 });
 
 describe("client address behind server.ts", () => {
-  const headers = (peer: string, forwarded?: string) => new Headers({ "x-understudy-peer": peer, ...(forwarded ? { "x-forwarded-for": forwarded } : {}) });
+  const headers = (peer: string, forwarded?: string) =>
+    new Headers({ "x-understudy-peer": peer, ...(forwarded ? { "x-forwarded-for": forwarded } : {}) });
 
   it("takes the connection's own address and ignores X-Forwarded-For from anyone not trusted", () => {
     expect(clientAddress(headers("203.0.113.9", "198.51.100.1"), [])).toBe("203.0.113.9");

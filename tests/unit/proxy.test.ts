@@ -42,12 +42,17 @@ describe("the CSRF origin check", () => {
 
 describe("addresses that cannot be decoded", () => {
   it("refuses a broken % escape in the path with 400 and the reason", async () => {
-    const response = proxy(new NextRequest("http://shop.example:3000/api/parts/%FF", { headers: { host: "shop.example:3000" } }));
+    const response = proxy(
+      new NextRequest("http://shop.example:3000/api/parts/%FF", { headers: { host: "shop.example:3000" } }),
+    );
     expect(response.status).toBe(400);
     expect(await response.json()).toMatchObject({ error: "validation_failed", field: "path" });
   });
 
   it("lets a well-formed escape through", () => {
-    expect(proxy(new NextRequest("http://shop.example:3000/lookup/%C3%97", { headers: { host: "shop.example:3000" } })).status).toBe(200);
+    expect(
+      proxy(new NextRequest("http://shop.example:3000/lookup/%C3%97", { headers: { host: "shop.example:3000" } }))
+        .status,
+    ).toBe(200);
   });
 });

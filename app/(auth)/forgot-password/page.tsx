@@ -9,7 +9,9 @@ export default function ForgotPasswordPage() {
     <div className="space-y-6">
       <div>
         <h1 className="text-3xl">Forgotten password</h1>
-        <p className="mt-1 text-ink-soft">Give the e-mail of your account and we will send a link to set a new password.</p>
+        <p className="mt-1 text-ink-soft">
+          Give the e-mail of your account and we will send a link to set a new password.
+        </p>
       </div>
       <EmailOnlyForm endpoint="/api/auth/password-reset/request" submitLabel="Send me a link" />
       <p className="border-t border-rule pt-4">

@@ -16,7 +16,9 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
     <div className="space-y-6">
       <div>
         <h1 className="text-3xl">Sign in</h1>
-        <p className="mt-1 text-ink-soft">To propose crosses you have fitted, confirm others&apos; and keep job lists.</p>
+        <p className="mt-1 text-ink-soft">
+          To propose crosses you have fitted, confirm others&apos; and keep job lists.
+        </p>
       </div>
       <SignInForm next={safeReturnPath(next, env.APP_URL)} />
       <p className="border-t border-rule pt-4 text-ink-soft">

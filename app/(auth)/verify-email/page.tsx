@@ -31,7 +31,13 @@ export default async function VerifyEmailPage({ searchParams }: { searchParams: 
           <Notice tone="success" role="status">
             Your e-mail address <strong>{outcome.email}</strong> is confirmed.
           </Notice>
-          <Link href="/sign-in" className="inline-flex min-h-12 items-center rounded-md bg-brass px-5 font-bold text-white no-underline hover:bg-brass-deep">
+          <Link
+            href="/sign-in"
+            className={
+              "inline-flex min-h-12 items-center rounded-md bg-brass px-5 font-bold " +
+              "text-white no-underline hover:bg-brass-deep"
+            }
+          >
             Sign in now
           </Link>
         </>

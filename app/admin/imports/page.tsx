@@ -19,8 +19,11 @@ export default async function ImportsPage({ searchParams }: { searchParams: Prom
       <header className="space-y-1">
         <h1 className="text-3xl">Imports</h1>
         <p className="max-w-3xl text-ink-soft">
-          Load a club&apos;s or a shop&apos;s interchange spreadsheet. The file is stored as it came, read in a dry run that changes nothing, and committed only when you have checked what it
-          would do. {isAdmin ? "A committed import can be rolled back as a whole." : "As a moderator you import into the review queue, where another moderator decides each row."}
+          Load a club&apos;s or a shop&apos;s interchange spreadsheet. The file is stored as it came, read in a dry run
+          that changes nothing, and committed only when you have checked what it would do.{" "}
+          {isAdmin
+            ? "A committed import can be rolled back as a whole."
+            : "As a moderator you import into the review queue, where another moderator decides each row."}
         </p>
       </header>
       {discarded && <Notice tone="success">The import was discarded. Nothing in the catalogue changed.</Notice>}
@@ -36,11 +39,21 @@ export default async function ImportsPage({ searchParams }: { searchParams: Prom
             <table className="w-full text-left">
               <thead className="bg-ground-sunk text-sm">
                 <tr>
-                  <th scope="col" className="p-3">File</th>
-                  <th scope="col" className="p-3">State</th>
-                  <th scope="col" className="p-3">Into</th>
-                  <th scope="col" className="p-3">Rows</th>
-                  <th scope="col" className="p-3">By, when (UTC)</th>
+                  <th scope="col" className="p-3">
+                    File
+                  </th>
+                  <th scope="col" className="p-3">
+                    State
+                  </th>
+                  <th scope="col" className="p-3">
+                    Into
+                  </th>
+                  <th scope="col" className="p-3">
+                    Rows
+                  </th>
+                  <th scope="col" className="p-3">
+                    By, when (UTC)
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -49,16 +62,16 @@ export default async function ImportsPage({ searchParams }: { searchParams: Prom
                   return (
                     <tr key={i.id} className="border-t border-rule align-top">
                       <td className="p-3">
-                        <Link href={`/admin/imports/${i.id}`} className="break-all font-bold">
+                        <Link href={`/admin/imports/${i.id}`} className="font-bold break-all">
                           {i.fileName}
                         </Link>
                       </td>
                       <td className="p-3">{STATUS_WORDS[i.status]}</td>
                       <td className="p-3">{TARGET_WORDS[i.target]}</td>
-                      <td className="num p-3">{c ? `${c.rows} (${c.rejected} rejected)` : "—"}</td>
+                      <td className="p-3 num">{c ? `${c.rows} (${c.rejected} rejected)` : "—"}</td>
                       <td className="p-3 text-sm">
                         {i.by ?? "?"}
-                        <span className="num block">{i.createdAt.slice(0, 16).replace("T", " ")}</span>
+                        <span className="block num">{i.createdAt.slice(0, 16).replace("T", " ")}</span>
                       </td>
                     </tr>
                   );

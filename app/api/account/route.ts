@@ -12,6 +12,12 @@ export const PATCH = handle(async (request) => {
   const user = await requirePermission("account:use");
   const { notifyByEmail } = parseWith(notificationsInput, await readJson(request));
   await User.update({ notifyByEmail }, { where: { id: user.id } });
-  await recordAudit({ actorId: user.id, action: "account.notifications", subjectType: "user", subjectId: user.id, after: { notifyByEmail } });
+  await recordAudit({
+    actorId: user.id,
+    action: "account.notifications",
+    subjectType: "user",
+    subjectId: user.id,
+    after: { notifyByEmail },
+  });
   return Response.json({ notifyByEmail });
 });

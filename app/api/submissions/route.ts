@@ -23,6 +23,13 @@ export const GET = handle(async (request) => {
     return Response.json({ submissions: await listMine(user.id) });
   }
   await requirePermission("proposals:review");
-  const { rows, total } = await listQueue({ status: query.status, category: query.category, makerId: query.maker, q: query.q || undefined, limit: query.limit, offset: query.offset });
+  const { rows, total } = await listQueue({
+    status: query.status,
+    category: query.category,
+    makerId: query.maker,
+    q: query.q || undefined,
+    limit: query.limit,
+    offset: query.offset,
+  });
   return Response.json({ submissions: rows, total });
 });

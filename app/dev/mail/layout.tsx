@@ -9,8 +9,8 @@ export default function CapturedMailLayout({ children }: { children: React.React
   return (
     <div className="space-y-6">
       <Notice>
-        Demo installation: the mail Understudy sends is captured here instead of being delivered. This page does not exist in
-        production.
+        Demo installation: the mail Understudy sends is captured here instead of being delivered. This page does not
+        exist in production.
       </Notice>
       {children}
     </div>

@@ -22,7 +22,9 @@ export default async function CapturedMailPage() {
     <div className="space-y-4">
       <h1 className="text-3xl">Captured mail</h1>
       {messages.length === 0 ? (
-        <p className="text-ink-soft">No mail yet. Open an account or ask for a password link, and the message appears here.</p>
+        <p className="text-ink-soft">
+          No mail yet. Open an account or ask for a password link, and the message appears here.
+        </p>
       ) : (
         <ul className="divide-y divide-rule rounded-lg border border-rule bg-ground-raised">
           {messages.map((mail) => (

@@ -24,13 +24,23 @@ export default async function ListPage({ params }: { params: Promise<{ id: strin
         <h1 className="text-3xl">{view.title}</h1>
         {view.machine && (
           <p className="text-ink-soft">
-            For the <Link href={`/machines/${view.machine.id}`}>{view.machine.maker} {view.machine.model}</Link>
+            For the{" "}
+            <Link href={`/machines/${view.machine.id}`}>
+              {view.machine.maker} {view.machine.model}
+            </Link>
             {view.machineSerial && <span className="num">, serial {view.machineSerial}</span>}
           </p>
         )}
         {view.notes && <p className="whitespace-pre-line">{view.notes}</p>}
       </header>
-      <ListDetailsForm id={view.id} title={view.title} machineId={view.machine?.id ?? null} machineSerial={view.machineSerial} notes={view.notes} machines={machines} />
+      <ListDetailsForm
+        id={view.id}
+        title={view.title}
+        machineId={view.machine?.id ?? null}
+        machineSerial={view.machineSerial}
+        notes={view.notes}
+        machines={machines}
+      />
       <ListEditor initial={view} />
       {view.cautions.length > 0 && <Cautions kinds={view.cautions} />}
     </div>

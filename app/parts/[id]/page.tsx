@@ -19,7 +19,11 @@ export async function generateMetadata({ params }: { params: Promise<{ id: strin
   return { title: `${part.number}, ${part.description}` };
 }
 
-const KIND_WORDS = { interchangeable: "interchangeable", one_way: "one way only", with_companions: "needs companion parts" } as const;
+const KIND_WORDS = {
+  interchangeable: "interchangeable",
+  one_way: "one way only",
+  with_companions: "needs companion parts",
+} as const;
 
 function Drawing({ part }: { part: PartDetail }) {
   if (part.category === "bearing") return <BearingDrawing active={null} />;
@@ -31,7 +35,11 @@ function Drawing({ part }: { part: PartDetail }) {
 export default async function PartPage({ params }: { params: Promise<{ id: string }> }) {
   const part = await load((await params).id);
   const { user } = await getCurrentSession();
-  const chain = [...part.chain.before, { id: part.id, number: part.number, kind: null, note: null }, ...part.chain.after];
+  const chain = [
+    ...part.chain.before,
+    { id: part.id, number: part.number, kind: null, note: null },
+    ...part.chain.after,
+  ];
   const dims = part.dimensions;
   const documented = [
     dims.innerMm !== null && `${part.category === "lip_seal" ? "shaft" : "bore"} ${dims.innerMm} mm`,
@@ -78,7 +86,8 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           </div>
         )}
         <p className="text-sm text-ink-soft">
-          Ranked by fit, then by how many members fitted each, counting the numbers this one is interchangeable with and any newer number that replaces it. None is guaranteed: measure before you order.
+          Ranked by fit, then by how many members fitted each, counting the numbers this one is interchangeable with and
+          any newer number that replaces it. None is guaranteed: measure before you order.
         </p>
         <p>
           <Link href={`/propose?part=${part.id}`}>Fitted something else that works? Propose a cross for this part</Link>
@@ -91,7 +100,11 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
             <h2 id="size-heading" className="text-2xl">
               Size as the maker specified it
             </h2>
-            {documented.length > 0 ? <p className="num text-lg">{documented.join(" · ")}</p> : <p className="text-ink-soft">Not documented.</p>}
+            {documented.length > 0 ? (
+              <p className="num text-lg">{documented.join(" · ")}</p>
+            ) : (
+              <p className="text-ink-soft">Not documented.</p>
+            )}
             {dims.note && <p className="text-ink-soft">{dims.note}</p>}
           </div>
           <figure className="rounded-lg border border-rule bg-ground-raised p-3">
@@ -123,7 +136,11 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
               </li>
             ))}
           </ol>
-          {part.chain.loop && <Notice tone="caution">The records point back on themselves somewhere in this chain; it is shown up to the loop.</Notice>}
+          {part.chain.loop && (
+            <Notice tone="caution">
+              The records point back on themselves somewhere in this chain; it is shown up to the loop.
+            </Notice>
+          )}
         </section>
       )}
 
@@ -131,15 +148,25 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
         <h2 id="used-heading" className="text-2xl">
           Where it is used
         </h2>
-        <p className="text-ink-soft">Every machine that shares this part: donors to look for, and other owners who need the same cross.</p>
+        <p className="text-ink-soft">
+          Every machine that shares this part: donors to look for, and other owners who need the same cross.
+        </p>
         <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
           <table className="w-full text-left">
             <thead className="bg-ground-sunk text-sm">
               <tr>
-                <th scope="col" className="p-3">Machine</th>
-                <th scope="col" className="p-3">Where on it</th>
-                <th scope="col" className="p-3">Qty</th>
-                <th scope="col" className="p-3">Serial numbers</th>
+                <th scope="col" className="p-3">
+                  Machine
+                </th>
+                <th scope="col" className="p-3">
+                  Where on it
+                </th>
+                <th scope="col" className="p-3">
+                  Qty
+                </th>
+                <th scope="col" className="p-3">
+                  Serial numbers
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -153,9 +180,11 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
                   </td>
                   <td className="p-3">
                     {u.assembly}
-                    {u.position !== part.description && <span className="block text-sm text-ink-soft">{u.position}</span>}
+                    {u.position !== part.description && (
+                      <span className="block text-sm text-ink-soft">{u.position}</span>
+                    )}
                   </td>
-                  <td className="num p-3">{u.quantity}</td>
+                  <td className="p-3 num">{u.quantity}</td>
                   <td className="p-3 text-sm">
                     <span className="num">{u.serials ?? "all"}</span>
                     {u.serialNote && <span className="block text-ink-soft">{u.serialNote}</span>}
@@ -183,7 +212,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
                   {p.description} · {p.model}, {p.assembly.toLowerCase()}
                   {p.serials && `, ${p.serials}`}
                 </span>
-                {p.standard && <span className="num block text-sm">→ {p.standard}</span>}
+                {p.standard && <span className="block num text-sm">→ {p.standard}</span>}
               </li>
             ))}
           </ul>

@@ -10,7 +10,8 @@ import { loadByIdOr404 } from "@/lib/http/load-or-404";
 
 export const metadata: Metadata = { title: "Your proposal" };
 
-const date = (iso: string) => new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+const date = (iso: string) =>
+  new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 const STATUS_WORDS: Record<string, string> = {
   pending: "Waiting for a moderator. You will get an e-mail when it is decided.",
@@ -62,7 +63,9 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
           </Link>
         )}
         {open && d.mine && <WithdrawButton id={d.id} />}
-        {d.status === "approved" && d.part.id && <Link href={`/parts/${d.part.id}`}>See it on the part&apos;s page</Link>}
+        {d.status === "approved" && d.part.id && (
+          <Link href={`/parts/${d.part.id}`}>See it on the part&apos;s page</Link>
+        )}
       </div>
 
       <ProposalDetails detail={d} />

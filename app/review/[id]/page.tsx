@@ -57,7 +57,10 @@ export default async function ReviewProposalPage({ params }: { params: Promise<{
             ) : (
               <ul className="space-y-2">
                 {d.existingCrosses.map((c) => (
-                  <li key={c.id} className="flex flex-wrap items-center gap-3 rounded-md border border-rule bg-ground-raised p-3">
+                  <li
+                    key={c.id}
+                    className="flex flex-wrap items-center gap-3 rounded-md border border-rule bg-ground-raised p-3"
+                  >
                     <span className="num font-bold">{c.designation ?? c.repairMethod}</span>
                     <FitBadge fit={c.fit} />
                     <span className="text-sm text-ink-soft">
@@ -67,7 +70,12 @@ export default async function ReviewProposalPage({ params }: { params: Promise<{
                 ))}
               </ul>
             )}
-            {warnings.length > 0 && <Notice tone="caution">The engine found {warnings.length === 1 ? "a problem" : `${warnings.length} problems`} with the standard part: see the left.</Notice>}
+            {warnings.length > 0 && (
+              <Notice tone="caution">
+                The engine found {warnings.length === 1 ? "a problem" : `${warnings.length} problems`} with the standard
+                part: see the left.
+              </Notice>
+            )}
           </section>
 
           <section aria-labelledby="member-heading" className="space-y-2">
@@ -75,9 +83,15 @@ export default async function ReviewProposalPage({ params }: { params: Promise<{
               The member
             </h2>
             <p>
-              <span className="break-all font-bold">{d.submitter}</span>: {d.submitterRecord.approved} approved, {d.submitterRecord.rejected} rejected, {d.submitterRecord.open} open.
+              <span className="font-bold break-all">{d.submitter}</span>: {d.submitterRecord.approved} approved,{" "}
+              {d.submitterRecord.rejected} rejected, {d.submitterRecord.open} open.
             </p>
-            {d.confirmations > 0 && <p>{d.confirmations} other {d.confirmations === 1 ? "member says they" : "members say they"} fitted the same.</p>}
+            {d.confirmations > 0 && (
+              <p>
+                {d.confirmations} other {d.confirmations === 1 ? "member says they" : "members say they"} fitted the
+                same.
+              </p>
+            )}
           </section>
 
           {d.status !== "pending" ? (

@@ -1,13 +1,22 @@
 import { describe, expect, it } from "vitest";
 import { resolveChain, type SupersessionEdge } from "@/lib/catalogue/chain";
 
-const edge = (oldPartId: number, newPartId: number): SupersessionEdge => ({ oldPartId, newPartId, kind: "interchangeable", note: null });
+const edge = (oldPartId: number, newPartId: number): SupersessionEdge => ({
+  oldPartId,
+  newPartId,
+  kind: "interchangeable",
+  note: null,
+});
 
 describe("supersession chains", () => {
   it("walks forward to the latest number and back to the oldest", () => {
     const chain = resolveChain(2, [edge(1, 2), edge(2, 3), edge(3, 4)]);
     expect(chain).toMatchObject({ before: [1], after: [3, 4], latestId: 4, loop: false });
-    expect(chain.edges.map((e) => [e.oldPartId, e.newPartId])).toEqual([[1, 2], [2, 3], [3, 4]]);
+    expect(chain.edges.map((e) => [e.oldPartId, e.newPartId])).toEqual([
+      [1, 2],
+      [2, 3],
+      [3, 4],
+    ]);
   });
 
   it("stops at a loop and says so", () => {

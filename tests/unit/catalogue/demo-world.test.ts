@@ -14,7 +14,9 @@ describe("the invented demo catalogue", () => {
   });
 
   it("covers every category of part", () => {
-    expect(new Set(demo.parts.map((p) => p.category))).toEqual(new Set(["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other"]));
+    expect(new Set(demo.parts.map((p) => p.category))).toEqual(
+      new Set(["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other"]),
+    );
   });
 
   it("has supersession chains up to four numbers long, and parts shared between machines", () => {
@@ -23,7 +25,8 @@ describe("the invented demo catalogue", () => {
     const longest = Math.max(...demo.parts.map((p) => length(p.key)));
     expect(longest).toBe(4);
     const machinesPerPart = new Map<string, Set<string>>();
-    for (const u of demo.usages) machinesPerPart.set(u.partKey, (machinesPerPart.get(u.partKey) ?? new Set()).add(u.machineKey));
+    for (const u of demo.usages)
+      machinesPerPart.set(u.partKey, (machinesPerPart.get(u.partKey) ?? new Set()).add(u.machineKey));
     expect([...machinesPerPart.values()].filter((s) => s.size > 1).length).toBeGreaterThan(20);
   });
 
@@ -41,7 +44,8 @@ describe("the invented demo catalogue", () => {
   });
 
   it("names only belts the engine can read", () => {
-    for (const s of demo.standardParts.filter((x) => x.kind === "v_belt")) expect(() => decodeBelt(s.designation)).not.toThrow();
+    for (const s of demo.standardParts.filter((x) => x.kind === "v_belt"))
+      expect(() => decodeBelt(s.designation)).not.toThrow();
   });
 
   it("documents the sizes of every bearing and lip seal", () => {
@@ -66,7 +70,11 @@ describe("the invented demo catalogue", () => {
   });
 
   it("gives each maker a numbering shape of its own, and machines names of their own", () => {
-    const shapes: Record<string, RegExp> = { corvane: /^CV-\d{4}-[A-E]$/, halvard: /^HM \d{3} \d{3}( [A-D])?$/, pellworth: /^\d{4}\.[FGHKM][1-9]( R\d)?$/ };
+    const shapes: Record<string, RegExp> = {
+      corvane: /^CV-\d{4}-[A-E]$/,
+      halvard: /^HM \d{3} \d{3}( [A-D])?$/,
+      pellworth: /^\d{4}\.[FGHKM][1-9]( R\d)?$/,
+    };
     for (const p of demo.parts) expect(p.number).toMatch(shapes[p.makerKey]);
     // A digit, a letter, a dash and four digits is a real maker's numbering shape; the demo uses none like it.
     expect(demo.parts.some((p) => /^\d[A-Z]-\d{4}/.test(p.number))).toBe(false);

@@ -1,11 +1,18 @@
 import { describe, expect, it } from "vitest";
-import { checkAgainstPart, checkStandard, measurementDeviations, PART_SIZES_FIELD, readSealSize } from "@/lib/community/checks";
+import {
+  checkAgainstPart,
+  checkStandard,
+  measurementDeviations,
+  PART_SIZES_FIELD,
+  readSealSize,
+} from "@/lib/community/checks";
 import { proposalHref, readProposalPrefill } from "@/lib/community/prefill";
 import { toStandardItem } from "@/lib/lists/standard-item";
 
 describe("checking a proposed standard part with the standards engine", () => {
   it("reads a bearing designation and takes its sizes from the tables", () => {
-    // DIN 625-1 (= ISO 15:2017 boundary dimensions), as tabulated in the BOLTS open parts library: 6205 is 25 × 52 × 15 mm.
+    // DIN 625-1 (= ISO 15:2017 boundary dimensions), as tabulated in the BOLTS open parts library: 6205 is 25 × 52 × 15
+    // mm.
     const checked = checkStandard({ kind: "bearing", designation: "6205 2rs" });
     expect(checked).toMatchObject({ designation: "6205-2RS", innerMm: 25, outerMm: 52, widthMm: 15 });
     expect(checked.checks).toEqual([expect.objectContaining({ level: "ok" })]);
@@ -45,7 +52,9 @@ describe("checking a proposed standard part with the standards engine", () => {
   });
 
   it("asks for the three sizes of a seal given neither in the designation nor the fields", () => {
-    expect(checkStandard({ kind: "lip_seal", designation: "rear crank seal" }).checks[0]).toMatchObject({ level: "warning" });
+    expect(checkStandard({ kind: "lip_seal", designation: "rear crank seal" }).checks[0]).toMatchObject({
+      level: "warning",
+    });
   });
 });
 
@@ -72,19 +81,45 @@ describe("a proposal against the worn part's own sizes", () => {
 
   it("flags a 20 × 47 × 14 bearing for a part documented as 15 × 35 × 11", () => {
     // DIN 625-1 via BOLTS: 6204 is 20 × 47 × 14 mm and 6202 is 15 × 35 × 11 mm.
-    const check = checkAgainstPart(part, { kind: "bearing", designation: "6204", innerMm: 20, outerMm: 47, widthMm: 14, lengthMm: null });
+    const check = checkAgainstPart(part, {
+      kind: "bearing",
+      designation: "6204",
+      innerMm: 20,
+      outerMm: 47,
+      widthMm: 14,
+      lengthMm: null,
+    });
     expect(check).toMatchObject({ level: "warning", field: PART_SIZES_FIELD });
     expect(check?.message).toMatch(/15 × 35 × 11 mm.*6204 is 20 × 47 × 14 mm.*bore or shaft 5 mm larger/);
   });
 
   it("passes the same size, and a part that has no documented sizes", () => {
-    expect(checkAgainstPart(part, { kind: "bearing", designation: "6202-2RS", innerMm: 15, outerMm: 35, widthMm: 11, lengthMm: null })).toBeNull();
-    expect(checkAgainstPart({ number: "XX-2", innerMm: null, outerMm: null, widthMm: null, lengthMm: null }, { kind: "bearing", designation: "6204", innerMm: 20, outerMm: 47, widthMm: 14, lengthMm: null })).toBeNull();
+    expect(
+      checkAgainstPart(part, {
+        kind: "bearing",
+        designation: "6202-2RS",
+        innerMm: 15,
+        outerMm: 35,
+        widthMm: 11,
+        lengthMm: null,
+      }),
+    ).toBeNull();
+    expect(
+      checkAgainstPart(
+        { number: "XX-2", innerMm: null, outerMm: null, widthMm: null, lengthMm: null },
+        { kind: "bearing", designation: "6204", innerMm: 20, outerMm: 47, widthMm: 14, lengthMm: null },
+      ),
+    ).toBeNull();
   });
 
   it("leaves an inch/metric near miss to its own warning", () => {
     // 1-1/2 in = 38.1 mm against a 38 mm seal: 0.1 mm, flagged elsewhere as a near miss, not as another size.
-    expect(checkAgainstPart({ number: "XX-3", innerMm: 38.1, outerMm: 55, widthMm: 8, lengthMm: null }, { kind: "lip_seal", designation: "38 × 55 × 8", innerMm: 38, outerMm: 55, widthMm: 8, lengthMm: null })).toBeNull();
+    expect(
+      checkAgainstPart(
+        { number: "XX-3", innerMm: 38.1, outerMm: 55, widthMm: 8, lengthMm: null },
+        { kind: "lip_seal", designation: "38 × 55 × 8", innerMm: 38, outerMm: 55, widthMm: 8, lengthMm: null },
+      ),
+    ).toBeNull();
   });
 });
 
@@ -113,22 +148,40 @@ describe("reading a seal's designation", () => {
 
 describe("from a calculator to the proposal form", () => {
   it("carries the standard part and the measurements through the link", () => {
-    const href = proposalHref({ kind: "lip_seal", designation: "1-1/2 × 2.374 × 1/2 in", measurements: [{ dimension: "inner", value: 1.497, unit: "in" }] });
+    const href = proposalHref({
+      kind: "lip_seal",
+      designation: "1-1/2 × 2.374 × 1/2 in",
+      measurements: [{ dimension: "inner", value: 1.497, unit: "in" }],
+    });
     const params = Object.fromEntries(new URL(href, "http://x").searchParams);
     const prefill = readProposalPrefill(params);
-    expect(prefill?.standard).toMatchObject({ mode: "new", kind: "lip_seal", designation: "1-1/2 × 2.374 × 1/2 in", innerMm: 38.1, outerMm: 60.3, widthMm: 12.7 });
+    expect(prefill?.standard).toMatchObject({
+      mode: "new",
+      kind: "lip_seal",
+      designation: "1-1/2 × 2.374 × 1/2 in",
+      innerMm: 38.1,
+      outerMm: 60.3,
+      widthMm: 12.7,
+    });
     expect(prefill?.measurements).toEqual([{ dimension: "inner", value: 1.497, unit: "in" }]);
   });
 
   it("ignores what it cannot read instead of failing", () => {
     expect(readProposalPrefill({ kind: "rocket", designation: "6205" })).toBeNull();
-    expect(readProposalPrefill({ kind: "bearing", designation: "6205", m: "inner:abc:in,outer:52:mm" })?.measurements).toEqual([{ dimension: "outer", value: 52, unit: "mm" }]);
+    expect(
+      readProposalPrefill({ kind: "bearing", designation: "6205", m: "inner:abc:in,outer:52:mm" })?.measurements,
+    ).toEqual([{ dimension: "outer", value: 52, unit: "mm" }]);
   });
 });
 
 describe("a measured standard part on a job list", () => {
   it("takes its sizes from the engine's reading of the designation", () => {
     // DIN 625-1 via BOLTS: 6205 is 25 × 52 × 15 mm.
-    expect(toStandardItem({ kind: "bearing", designation: "6205 2rs" })).toMatchObject({ designation: "6205-2RS", innerMm: 25, outerMm: 52, widthMm: 15 });
+    expect(toStandardItem({ kind: "bearing", designation: "6205 2rs" })).toMatchObject({
+      designation: "6205-2RS",
+      innerMm: 25,
+      outerMm: 52,
+      widthMm: 15,
+    });
   });
 });

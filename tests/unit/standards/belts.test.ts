@@ -1,12 +1,26 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { BELT_SECTIONS, R40 } from "@/lib/standards/belt-sections";
-import { beltLengths, BeltError, decodeBelt, findSection, identifySection, nearestStandardLengths, standardLengthsForPitch } from "@/lib/standards/belts";
+import {
+  beltLengths,
+  BeltError,
+  decodeBelt,
+  findSection,
+  identifySection,
+  nearestStandardLengths,
+  standardLengthsForPitch,
+} from "@/lib/standards/belts";
 
 describe("belt designations", () => {
   it("reads B60 as a classical B belt of 60 in inside length", () => {
     // RMA/MPTA IP-20: classical belts are numbered by inside length; B pitch length = inside + 1.8 in (from memory).
-    expect(decodeBelt("B60")).toMatchObject({ section: "B", unit: "in", insideLength: 60, pitchLength: 61.8, topWidth: 0.65625 });
+    expect(decodeBelt("B60")).toMatchObject({
+      section: "B",
+      unit: "in",
+      insideLength: 60,
+      pitchLength: 61.8,
+      topWidth: 0.65625,
+    });
   });
 
   it("puts the outside length of a classical belt 2π × height beyond the inside", () => {
@@ -37,7 +51,10 @@ describe("belt designations", () => {
     // belt is made and two inside lengths share one datum length (B210 is the last short B belt, B225 the first long).
     const sections = BELT_SECTIONS.filter((s) => s.height !== null);
     const inGap = (section: (typeof sections)[number], inside: number) =>
-      section.long !== undefined && section.pitchOffset !== null && inside < section.long.fromInside && inside >= section.long.fromInside - (section.pitchOffset - section.long.pitchOffset);
+      section.long !== undefined &&
+      section.pitchOffset !== null &&
+      inside < section.long.fromInside &&
+      inside >= section.long.fromInside - (section.pitchOffset - section.long.pitchOffset);
     fc.assert(
       fc.property(fc.constantFrom(...sections), fc.double({ min: 10, max: 5000, noNaN: true }), (section, inside) => {
         if (inGap(section, inside)) return true;
@@ -53,9 +70,19 @@ describe("long classical belts", () => {
   // up to B210 and 0.3 in from B225 (B225 5725 mm, B240 6105 mm); 2.9 in up to C210 and 0.9 in from C225 (C240
   // 6120 mm); 3.3 in up to D210 and 0.8 in from D225 (D240 6115 mm, D420 10690 mm). RMA/MPTA IP-20 datum lengths.
   const rows: Array<[string, number]> = [
-    ["B210", 211.8], ["B225", 225.3], ["B240", 240.3], ["B360", 360.3],
-    ["C210", 212.9], ["C225", 225.9], ["C240", 240.9], ["C420", 420.9],
-    ["D210", 213.3], ["D225", 225.8], ["D240", 240.8], ["D420", 420.8], ["D660", 660.8],
+    ["B210", 211.8],
+    ["B225", 225.3],
+    ["B240", 240.3],
+    ["B360", 360.3],
+    ["C210", 212.9],
+    ["C225", 225.9],
+    ["C240", 240.9],
+    ["C420", 420.9],
+    ["D210", 213.3],
+    ["D225", 225.8],
+    ["D240", 240.8],
+    ["D420", 420.8],
+    ["D660", 660.8],
   ];
   for (const [designation, datum] of rows) {
     it(`gives ${designation} a datum length of ${datum} in`, () => {
@@ -81,7 +108,13 @@ describe("metric classical belts", () => {
   it("reads B 1600 Li as 1600 mm inside, 1640 mm datum, 1669 mm outside", () => {
     // ISO 4184 / DIN 2215 metric section B 17 × 11 mm: datum = inside + 40 mm (from memory; not yet confirmed, see
     // docs/standards.md); outside = inside + 2π × 11 mm = + 69 mm (geometry).
-    expect(decodeBelt("B 1600 Li")).toMatchObject({ designation: "B 1600 Li", unit: "mm", insideLength: 1600, pitchLength: 1640, outsideLength: 1669 });
+    expect(decodeBelt("B 1600 Li")).toMatchObject({
+      designation: "B 1600 Li",
+      unit: "mm",
+      insideLength: 1600,
+      pitchLength: 1640,
+      outsideLength: 1669,
+    });
   });
 
   it("reads the same belt by its datum or outside length", () => {
@@ -111,7 +144,11 @@ describe("standard lengths", () => {
   it("offers ISO narrow belts from the R40 preferred numbers", () => {
     // ISO 3 preferred numbers, R40 series: …, 1180, 1250, 1320, …
     expect(R40).toContain(125);
-    expect(nearestStandardLengths(findSection("SPA"), 1262).map((l) => l.designation)).toEqual(["SPA1180", "SPA1250", "SPA1320"]);
+    expect(nearestStandardLengths(findSection("SPA"), 1262).map((l) => l.designation)).toEqual([
+      "SPA1180",
+      "SPA1250",
+      "SPA1320",
+    ]);
   });
 
   it("names the nearest classical belts for a drive's pitch length", () => {

@@ -13,11 +13,16 @@ describe("belt pitch length", () => {
 
   it("agrees with the handbook approximation within 0.1 % for ordinary drives", () => {
     fc.assert(
-      fc.property(fc.double({ min: 2, max: 40, noNaN: true }), fc.double({ min: 0.2, max: 1, noNaN: true }), fc.double({ min: 1, max: 4, noNaN: true }), (D, ratio, spacing) => {
-        const d = D * ratio;
-        const C = (D + d) * spacing;
-        return Math.abs(beltPitchLength(D, d, C) - handbook(D, d, C)) / handbook(D, d, C) < 0.001;
-      }),
+      fc.property(
+        fc.double({ min: 2, max: 40, noNaN: true }),
+        fc.double({ min: 0.2, max: 1, noNaN: true }),
+        fc.double({ min: 1, max: 4, noNaN: true }),
+        (D, ratio, spacing) => {
+          const d = D * ratio;
+          const C = (D + d) * spacing;
+          return Math.abs(beltPitchLength(D, d, C) - handbook(D, d, C)) / handbook(D, d, C) < 0.001;
+        },
+      ),
     );
   });
 
@@ -29,11 +34,16 @@ describe("belt pitch length", () => {
   it("returns to the same centre distance through the length", () => {
     // Property: centre(length(C)) = C.
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 60, noNaN: true }), fc.double({ min: 0.1, max: 1, noNaN: true }), fc.double({ min: 0.6, max: 6, noNaN: true }), (D, ratio, spacing) => {
-        const d = D * ratio;
-        const C = (D + d) * spacing;
-        return Math.abs(centreDistance(D, d, beltPitchLength(D, d, C)) - C) < 1e-6 * C;
-      }),
+      fc.property(
+        fc.double({ min: 1, max: 60, noNaN: true }),
+        fc.double({ min: 0.1, max: 1, noNaN: true }),
+        fc.double({ min: 0.6, max: 6, noNaN: true }),
+        (D, ratio, spacing) => {
+          const d = D * ratio;
+          const C = (D + d) * spacing;
+          return Math.abs(centreDistance(D, d, beltPitchLength(D, d, C)) - C) < 1e-6 * C;
+        },
+      ),
     );
   });
 

@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { INCH_PRESS_FIT, IT_GRADES, METRIC_SEALS, OD_ALLOWANCE } from "@/lib/standards/seal-sizes";
-import { checkPressFit, checkShaft, GROOVE_REMEDIES, matchSeal, measureSeal, sealOdRange, sealOrder } from "@/lib/standards/seals";
+import {
+  checkPressFit,
+  checkShaft,
+  GROOVE_REMEDIES,
+  matchSeal,
+  measureSeal,
+  sealOdRange,
+  sealOrder,
+} from "@/lib/standards/seals";
 
 const IN = 25.4;
 
@@ -79,7 +87,14 @@ describe("the seal to order", () => {
     // Worked example of common practice (no published source): 1-1/2 in shaft worn to 1.497 in, 2.374 in bore,
     // 1/2 in wide; a new seal of 2.378 in OD gives the 0.004 in press fit. RMA OS-4: OD = bore + 0.004 ± 0.002 in.
     const order = sealOrder({ shaftMm: 1.497 * IN, boreMm: 2.374 * IN, widthMm: 0.5 * IN, unit: "in" });
-    expect(order).toMatchObject({ system: "inch", unit: "in", shaft: 1.5, bore: 2.374, width: 0.5, label: "1-1/2 × 2.374 × 1/2 in" });
+    expect(order).toMatchObject({
+      system: "inch",
+      unit: "in",
+      shaft: 1.5,
+      bore: 2.374,
+      width: 0.5,
+      label: "1-1/2 × 2.374 × 1/2 in",
+    });
     expect(order.sealOd).toEqual({ min: 2.376, max: 2.38 });
     expect(order.sealOd.min).toBeLessThanOrEqual(2.378);
     expect(order.sealOd.max).toBeGreaterThanOrEqual(2.378);
@@ -96,7 +111,11 @@ describe("the seal to order", () => {
   });
 
   it("keeps an odd metric bore to the tenth of a millimetre", () => {
-    expect(sealOrder({ shaftMm: 40, boreMm: 61.27, unit: "mm" })).toMatchObject({ bore: 61.3, width: null, label: "40 × 61.3 mm" });
+    expect(sealOrder({ shaftMm: 40, boreMm: 61.27, unit: "mm" })).toMatchObject({
+      bore: 61.3,
+      width: null,
+      label: "40 × 61.3 mm",
+    });
   });
 
   it("says so when a seal measured in millimetres is an inch one", () => {
@@ -107,7 +126,13 @@ describe("the seal to order", () => {
   });
 
   it("answers with an order and nearby sizes where no tabulated size is near", () => {
-    const result = measureSeal({ shaftMm: 1.497 * IN, boreMm: 2.374 * IN, widthMm: 0.5 * IN, toleranceMm: 0.1016, unit: "in" });
+    const result = measureSeal({
+      shaftMm: 1.497 * IN,
+      boreMm: 2.374 * IN,
+      widthMm: 0.5 * IN,
+      toleranceMm: 0.1016,
+      unit: "in",
+    });
     expect(result.order.label).toBe("1-1/2 × 2.374 × 1/2 in");
     expect(result.candidates.length).toBeGreaterThan(0);
     expect(result.candidates[0].system).toBe("inch");
@@ -119,7 +144,13 @@ describe("the seal to order", () => {
 describe("matching a measured seal", () => {
   it("finds 1-1/4 × 2 × 3/8 in for an inch shaft worn a little small", () => {
     // An inch size commonly stocked (common practice, no published source); a worn shaft reads small.
-    const { candidates } = matchSeal({ shaftMm: 1.248 * 25.4, boreMm: 2.0 * 25.4, widthMm: 0.375 * 25.4, toleranceMm: 0.1016, unit: "in" });
+    const { candidates } = matchSeal({
+      shaftMm: 1.248 * 25.4,
+      boreMm: 2.0 * 25.4,
+      widthMm: 0.375 * 25.4,
+      toleranceMm: 0.1016,
+      unit: "in",
+    });
     expect(candidates[0]).toMatchObject({ system: "inch", size: "1-1/4 × 2 × 3/8 in" });
   });
 
@@ -146,7 +177,10 @@ describe("matching a measured seal", () => {
 describe("the shaft under a seal", () => {
   it("accepts a 40 mm shaft at 39.9 mm, within h11", () => {
     // ISO 286-1:2010: h11 for 30–50 mm is 0 / −0.160 mm.
-    expect(checkShaft({ shaftMm: 39.9, unit: "mm", grooved: false })).toMatchObject({ verdict: "ok", needsSleeve: false });
+    expect(checkShaft({ shaftMm: 39.9, unit: "mm", grooved: false })).toMatchObject({
+      verdict: "ok",
+      needsSleeve: false,
+    });
   });
 
   it("asks for a sleeve when the shaft is grooved", () => {

@@ -2,7 +2,19 @@ import fc from "fast-check";
 // @ts-expect-error convert-units 2 ships no types; it is used here only as an independent reference.
 import convert from "convert-units";
 import { describe, expect, it } from "vitest";
-import { convertTyped, convertTypedSizes, fromMm, inchLabel, measuredValues, parseLength, round, showDeviation, showLength, toMm, UnitParseError } from "@/lib/standards/units";
+import {
+  convertTyped,
+  convertTypedSizes,
+  fromMm,
+  inchLabel,
+  measuredValues,
+  parseLength,
+  round,
+  showDeviation,
+  showLength,
+  toMm,
+  UnitParseError,
+} from "@/lib/standards/units";
 
 describe("inch and millimetre", () => {
   it("converts exactly at 25.4 mm to the inch", () => {
@@ -22,7 +34,12 @@ describe("inch and millimetre", () => {
 
   it("returns to the same inch value after a trip through millimetres", () => {
     // Property: fromMm(toMm(x)) = x for every size a part can have.
-    fc.assert(fc.property(fc.double({ min: 0.001, max: 1000, noNaN: true }), (inches) => Math.abs(fromMm(toMm(inches, "in"), "in") - inches) <= 1e-9 * inches));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.001, max: 1000, noNaN: true }),
+        (inches) => Math.abs(fromMm(toMm(inches, "in"), "in") - inches) <= 1e-9 * inches,
+      ),
+    );
   });
 });
 
@@ -101,11 +118,24 @@ describe("switching units converts what was typed", () => {
   });
 
   it("converts the named fields of a form and no others", () => {
-    expect(convertTypedSizes({ shaft: "1.5", bore: "2.374", note: "1" }, ["shaft", "bore"], "in", "mm")).toEqual({ shaft: "38.1", bore: "60.3", note: "1" });
+    expect(convertTypedSizes({ shaft: "1.5", bore: "2.374", note: "1" }, ["shaft", "bore"], "in", "mm")).toEqual({
+      shaft: "38.1",
+      bore: "60.3",
+      note: "1",
+    });
   });
 
   it("reads typed sizes as measured values in the unit each was typed in", () => {
-    expect(measuredValues([["inner", "1.497"], ["outer", "60.3 mm"], ["width", ""]], "in")).toEqual([
+    expect(
+      measuredValues(
+        [
+          ["inner", "1.497"],
+          ["outer", "60.3 mm"],
+          ["width", ""],
+        ],
+        "in",
+      ),
+    ).toEqual([
       { dimension: "inner", value: 1.497, unit: "in" },
       { dimension: "outer", value: 60.3, unit: "mm" },
     ]);

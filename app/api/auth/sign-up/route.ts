@@ -12,7 +12,8 @@ export const POST = handle(async (request) => {
     {
       message: mailSent
         ? `We sent a confirmation link to ${body.email}. Open it to finish.`
-        : "Your request was saved, but the confirmation e-mail could not be sent just now. Ask for a new link from the sign-in page.",
+        : "Your request was saved, but the confirmation e-mail could not be sent " +
+          "just now. Ask for a new link from the sign-in page.",
       mailSent,
     },
     { status: 201 },

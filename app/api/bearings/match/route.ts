@@ -16,6 +16,11 @@ export const GET = handle(async (request) => {
     toleranceMm: readTolerance(q.tolerance, q.unit),
     unit: q.unit,
   };
-  const catalogueParts = await findPartsBySize({ category: "bearing", innerMm: input.boreMm, outerMm: input.outsideDiameterMm, toleranceMm: input.toleranceMm });
+  const catalogueParts = await findPartsBySize({
+    category: "bearing",
+    innerMm: input.boreMm,
+    outerMm: input.outsideDiameterMm,
+    toleranceMm: input.toleranceMm,
+  });
   return Response.json({ unit: q.unit, ...matchBearing(input), catalogueParts });
 });

@@ -21,7 +21,9 @@ export const GET = handle(async (request) => {
   const body: Record<string, unknown> = { unit: q.unit, ...atTradePrecision(drive, q.unit) };
   const smallMax = inUnit(readOptionalSize("smallMax", q.smallMax, q.unit));
   if (smallMax !== undefined) {
-    const range = forField("smallMax", () => adjustablePulleyRange({ fixed: large, adjustableMin: small, adjustableMax: smallMax, center: drive.center }));
+    const range = forField("smallMax", () =>
+      adjustablePulleyRange({ fixed: large, adjustableMin: small, adjustableMax: smallMax, center: drive.center }),
+    );
     body.adjustableRange = { shortest: tradeRound(range.shortest, q.unit), longest: tradeRound(range.longest, q.unit) };
   }
   if (q.section) {

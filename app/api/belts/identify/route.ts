@@ -8,6 +8,10 @@ export const runtime = "nodejs";
 
 export const GET = handle(async (request) => {
   const q = parseWith(beltIdentifyQuery, queryOf(request));
-  const candidates = identifySection({ topWidthMm: readSize("top", q.top, q.unit), heightMm: readOptionalSize("height", q.height, q.unit), unit: q.unit });
+  const candidates = identifySection({
+    topWidthMm: readSize("top", q.top, q.unit),
+    heightMm: readOptionalSize("height", q.height, q.unit),
+    unit: q.unit,
+  });
   return Response.json({ unit: q.unit, candidates, measuringNotes: BELT_MEASURING_NOTES });
 });

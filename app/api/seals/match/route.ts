@@ -21,6 +21,11 @@ export const GET = handle(async (request) => {
     grooved: q.grooved ?? false,
     attributes: { lips: q.lips, spring: q.spring, dustLip: q.dustLip, outside: q.outside },
   });
-  const catalogueParts = await findPartsBySize({ category: "lip_seal", innerMm: shaftMm, outerMm: boreMm, toleranceMm });
+  const catalogueParts = await findPartsBySize({
+    category: "lip_seal",
+    innerMm: shaftMm,
+    outerMm: boreMm,
+    toleranceMm,
+  });
   return Response.json({ unit: q.unit, ...result, catalogueParts });
 });

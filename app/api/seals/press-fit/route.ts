@@ -8,6 +8,11 @@ export const runtime = "nodejs";
 
 export const GET = handle(async (request) => {
   const q = parseWith(pressFitQuery, queryOf(request));
-  const fit = checkPressFit({ boreMm: readSize("bore", q.bore, q.unit), sealOdMm: readSize("sealOd", q.sealOd, q.unit), outside: q.outside, unit: q.unit });
+  const fit = checkPressFit({
+    boreMm: readSize("bore", q.bore, q.unit),
+    sealOdMm: readSize("sealOd", q.sealOd, q.unit),
+    outside: q.outside,
+    unit: q.unit,
+  });
   return Response.json(fit);
 });

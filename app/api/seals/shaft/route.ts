@@ -8,5 +8,7 @@ export const runtime = "nodejs";
 
 export const GET = handle(async (request) => {
   const q = parseWith(shaftCheckQuery, queryOf(request));
-  return Response.json(checkShaft({ shaftMm: readSize("shaft", q.shaft, q.unit), unit: q.unit, grooved: q.grooved ?? false }));
+  return Response.json(
+    checkShaft({ shaftMm: readSize("shaft", q.shaft, q.unit), unit: q.unit, grooved: q.grooved ?? false }),
+  );
 });

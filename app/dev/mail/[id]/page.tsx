@@ -29,7 +29,12 @@ export default async function CapturedMessagePage({ params }: { params: Promise<
         <details>
           <summary className="cursor-pointer font-bold">As the HTML version shows it</summary>
           {/* sandbox without permissions: the captured HTML can run nothing */}
-          <iframe title="HTML body" sandbox="" srcDoc={mail.html} className="mt-2 h-[32rem] w-full rounded-lg border border-rule bg-white" />
+          <iframe
+            title="HTML body"
+            sandbox=""
+            srcDoc={mail.html}
+            className="mt-2 h-[32rem] w-full rounded-lg border border-rule bg-white"
+          />
         </details>
       )}
     </article>

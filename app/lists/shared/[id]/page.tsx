@@ -8,7 +8,13 @@ import { getList } from "@/lib/lists/lists";
 export const metadata: Metadata = { title: "Shared job list", robots: { index: false } };
 
 /** Read-only, for whoever holds the link: no sign-in, no changes. */
-export default async function SharedListPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ token?: string }> }) {
+export default async function SharedListPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ token?: string }>;
+}) {
   const id = Number((await params).id);
   const token = (await searchParams).token ?? "";
   if (!Number.isInteger(id) || id <= 0 || id >= 2 ** 31 || token.length < 10 || token.length > 64) notFound();

@@ -22,7 +22,9 @@ export default async function EditProposalPage({ params }: { params: Promise<{ i
       <div className="max-w-2xl space-y-4">
         <h1 className="text-3xl">Change your proposal</h1>
         <Notice>
-          {detail.status === "pending" ? "This proposal is waiting for review. It can be changed only when a moderator sends it back." : "This proposal has been decided and can no longer be changed."}
+          {detail.status === "pending"
+            ? "This proposal is waiting for review. It can be changed only when a moderator sends it back."
+            : "This proposal has been decided and can no longer be changed."}
         </Notice>
         <Link href="/proposals">Back to your proposals</Link>
       </div>
@@ -46,21 +48,53 @@ export default async function EditProposalPage({ params }: { params: Promise<{ i
         choices={choices}
         defaults={{
           original: p.isNew
-            ? { mode: "new", makerId: p.makerId, number: p.number, description: p.description, category: p.category, machineId: p.machineId, assemblyId: p.assemblyId }
+            ? {
+                mode: "new",
+                makerId: p.makerId,
+                number: p.number,
+                description: p.description,
+                category: p.category,
+                machineId: p.machineId,
+                assemblyId: p.assemblyId,
+              }
             : { mode: "existing", partId: p.id },
           standard: s.isNew
-            ? { mode: "new", kind: s.kind, designation: s.designation, innerMm: s.innerMm, outerMm: s.outerMm, widthMm: s.widthMm, lengthMm: s.lengthMm }
+            ? {
+                mode: "new",
+                kind: s.kind,
+                designation: s.designation,
+                innerMm: s.innerMm,
+                outerMm: s.outerMm,
+                widthMm: s.widthMm,
+                lengthMm: s.lengthMm,
+              }
             : { mode: "existing", standardPartId: s.id },
           fit: detail.fit,
           measurements: detail.measurements,
           notes: detail.notes ?? "",
           photoIds: detail.photoList.map((ph) => ph.id),
         }}
-        pickedPart={p.isNew ? null : { id: p.id!, number: p.number, maker: p.maker, description: p.description, dims: p.dims }}
-        pickedStandard={
-          s.isNew ? null : { id: s.id!, designation: s.designation, sizes: standardSizes(s), kind: s.kind, dims: { innerMm: s.innerMm, outerMm: s.outerMm, widthMm: s.widthMm, lengthMm: s.lengthMm } }
+        pickedPart={
+          p.isNew ? null : { id: p.id!, number: p.number, maker: p.maker, description: p.description, dims: p.dims }
         }
-        photos={detail.photoList.map((ph) => ({ key: `stored-${ph.id}`, name: ph.fileName ?? `Photo ${ph.id}`, preview: ph.url, status: "done", photoId: ph.id }))}
+        pickedStandard={
+          s.isNew
+            ? null
+            : {
+                id: s.id!,
+                designation: s.designation,
+                sizes: standardSizes(s),
+                kind: s.kind,
+                dims: { innerMm: s.innerMm, outerMm: s.outerMm, widthMm: s.widthMm, lengthMm: s.lengthMm },
+              }
+        }
+        photos={detail.photoList.map((ph) => ({
+          key: `stored-${ph.id}`,
+          name: ph.fileName ?? `Photo ${ph.id}`,
+          preview: ph.url,
+          status: "done",
+          photoId: ph.id,
+        }))}
       />
     </div>
   );

@@ -8,5 +8,8 @@ export const runtime = "nodejs";
 export const POST = handle(async (request) => {
   const body = parseWith(resetPasswordBody, await readJson(request));
   const user = await resetPassword(body);
-  return Response.json({ message: "Your password is set. Sign in with it now.", user: { id: user.id, email: user.email } });
+  return Response.json({
+    message: "Your password is set. Sign in with it now.",
+    user: { id: user.id, email: user.email },
+  });
 });

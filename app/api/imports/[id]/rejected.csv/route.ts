@@ -10,6 +10,9 @@ export const GET = handle<{ params: Promise<{ id: string }> }>(async (_request, 
   const user = await requirePermission("imports:review-queue");
   const { id } = parseWith(idParam, await params);
   return new Response(`\uFEFF${await rejectedCsv(user, id)}`, {
-    headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="import-${id}-rejected.csv"` },
+    headers: {
+      "Content-Type": "text/csv; charset=utf-8",
+      "Content-Disposition": `attachment; filename="import-${id}-rejected.csv"`,
+    },
   });
 });

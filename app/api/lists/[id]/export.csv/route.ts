@@ -11,6 +11,10 @@ export const GET = handle<{ params: Promise<{ id: string }> }>(async (request, {
   const { id } = parseWith(idParam, await params);
   const view = await getList(await listAccess(request), id);
   return new Response(`\uFEFF${listCsv(view)}`, {
-    headers: { "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="${csvFileName(view)}"`, "Cache-Control": "private, no-store" },
+    headers: {
+      "Content-Type": "text/csv; charset=utf-8",
+      "Content-Disposition": `attachment; filename="${csvFileName(view)}"`,
+      "Cache-Control": "private, no-store",
+    },
   });
 });
