@@ -4,8 +4,8 @@ import { isCatalogueEmpty, seedDemoCatalogue } from "@/db/seeders/catalogue";
 import { isDatabaseEmpty, seedDemo } from "@/db/seeders/demo";
 import { seedLargeCatalogue } from "@/db/seeders/large";
 import { seedDemoLists } from "@/db/seeders/lists";
-import { sendProposalDigest } from "@/lib/community/digest";
-import { sweepAbandonedPhotos } from "@/lib/community/photos";
+import { sendProposalDigest } from "@/lib/proposals/digest";
+import { sweepAbandonedPhotos } from "@/lib/proposals/photos";
 
 const usage = `Usage: tsx db/cli.ts <command>
   migrate          apply every pending migration

@@ -3,7 +3,7 @@ import { AccountToken } from "@/db/models/account-token";
 import { Session } from "@/db/models/session";
 import { SignInFailure } from "@/db/models/sign-in-failure";
 import { User } from "@/db/models/user";
-import { AuditEvent, Submission, SubmissionPhoto } from "@/db/models/community";
+import { AuditEvent, Proposal, ProposalPhoto } from "@/db/models/proposals";
 import { Import, ImportMapping } from "@/db/models/imports";
 import { JobList, JobListLine } from "@/db/models/lists";
 import {
@@ -39,18 +39,18 @@ Cross.belongsTo(StandardPart, { foreignKey: "standardPartId", as: "standardPart"
 Cross.hasMany(Confirmation, { foreignKey: "crossId", as: "confirmations" });
 Confirmation.belongsTo(Cross, { foreignKey: "crossId", as: "cross" });
 
-User.hasMany(Submission, { foreignKey: "userId", as: "submissions" });
-Submission.belongsTo(User, { foreignKey: "userId", as: "user" });
-Submission.belongsTo(OriginalPart, { foreignKey: "originalPartId", as: "originalPart" });
-Submission.belongsTo(StandardPart, { foreignKey: "standardPartId", as: "standardPart" });
-Submission.hasMany(SubmissionPhoto, { foreignKey: "submissionId", as: "photos" });
-SubmissionPhoto.belongsTo(Submission, { foreignKey: "submissionId", as: "submission" });
-Submission.hasMany(Confirmation, { foreignKey: "submissionId", as: "confirmations" });
+User.hasMany(Proposal, { foreignKey: "userId", as: "proposals" });
+Proposal.belongsTo(User, { foreignKey: "userId", as: "user" });
+Proposal.belongsTo(OriginalPart, { foreignKey: "originalPartId", as: "originalPart" });
+Proposal.belongsTo(StandardPart, { foreignKey: "standardPartId", as: "standardPart" });
+Proposal.hasMany(ProposalPhoto, { foreignKey: "proposalId", as: "photos" });
+ProposalPhoto.belongsTo(Proposal, { foreignKey: "proposalId", as: "proposal" });
+Proposal.hasMany(Confirmation, { foreignKey: "proposalId", as: "confirmations" });
 
 JobList.hasMany(JobListLine, { foreignKey: "listId", as: "lines" });
 JobListLine.belongsTo(JobList, { foreignKey: "listId", as: "list" });
 
 export { sequelize, AccountToken, Session, SignInFailure, User };
-export { AuditEvent, Submission, SubmissionPhoto };
+export { AuditEvent, Proposal, ProposalPhoto };
 export { Import, ImportMapping, JobList, JobListLine };
 export { Assembly, Confirmation, Cross, Machine, Maker, OriginalPart, PartUsage, StandardPart, Supersession };

@@ -50,7 +50,7 @@ const testSettings: Record<string, string> = {
   S3_FORCE_PATH_STYLE: "true",
   S3_FAKE_DIR: ".data/test/s3",
   // The tests send many proposals from a few demo members within seconds.
-  SUBMISSIONS_PER_HOUR: "500",
+  PROPOSALS_PER_HOUR: "500",
   SMTP_HOST: "127.0.0.1",
   SMTP_PORT: "1125",
   SMTP_SECURE: "false",

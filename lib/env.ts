@@ -51,7 +51,7 @@ const schema = z.object({
     ),
 
   // Per member, per rolling hour: proposals saved and photo uploads granted.
-  SUBMISSIONS_PER_HOUR: z.coerce.number().int().min(1).default(20),
+  PROPOSALS_PER_HOUR: z.coerce.number().int().min(1).default(20),
   UPLOADS_PER_HOUR: z.coerce.number().int().min(1).default(60),
 });
 

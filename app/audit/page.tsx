@@ -25,7 +25,7 @@ function changed(before: Record<string, unknown> | null, after: Record<string, u
 /** The record an entry is about, linked where an admin can open it. */
 function Subject({ event }: { event: AuditRow }) {
   const words = `${auditSubjectWords(event.subjectType)} #${event.subjectId}`;
-  if (event.subjectType === "submission") return <Link href={`/review/${event.subjectId}`}>{words}</Link>;
+  if (event.subjectType === "proposal") return <Link href={`/review/${event.subjectId}`}>{words}</Link>;
   if (event.subjectType === "import") return <Link href={`/admin/imports/${event.subjectId}`}>{words}</Link>;
   if (event.subjectType === "user")
     return event.subjectEmail ? <EmailAddress address={event.subjectEmail} /> : <>a deleted account</>;

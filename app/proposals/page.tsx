@@ -5,7 +5,7 @@ import { StatusBadge } from "@/components/proposals/status-badge";
 import { WithdrawButton } from "@/components/proposals/withdraw-button";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
-import { listMine } from "@/lib/community/views";
+import { listMine } from "@/lib/proposals/views";
 
 export const metadata: Metadata = { title: "Your proposals" };
 

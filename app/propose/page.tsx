@@ -4,8 +4,8 @@ import { ProposalForm } from "@/components/proposals/proposal-form";
 import { Cautions } from "@/components/safety/cautions";
 import { OriginalPart, Maker } from "@/db";
 import { requirePagePermission } from "@/lib/auth/session";
-import { loadFormChoices } from "@/lib/community/form-choices";
-import { readProposalPrefill } from "@/lib/community/prefill";
+import { loadFormChoices } from "@/lib/proposals/form-choices";
+import { readProposalPrefill } from "@/lib/proposals/prefill";
 
 export const metadata: Metadata = { title: "Propose a cross" };
 

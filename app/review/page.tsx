@@ -8,7 +8,7 @@ import { SelectField } from "@/components/ui/select-field";
 import { Maker } from "@/db";
 import { requirePagePermission } from "@/lib/auth/session";
 import { CATEGORY_NAMES, PART_CATEGORIES, type PartCategory } from "@/lib/catalogue/kinds";
-import { listQueue } from "@/lib/community/views";
+import { listQueue } from "@/lib/proposals/views";
 
 export const metadata: Metadata = { title: "Review queue" };
 

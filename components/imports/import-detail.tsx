@@ -205,7 +205,7 @@ const TABLE_WORDS: Record<string, string> = {
   standard_parts: "standard part",
   makers: "maker",
   part_usages: "where used",
-  submissions: "proposal",
+  proposals: "proposal",
 };
 
 /** What a committed import wrote, by file line, with links to what can be opened. */

@@ -2,8 +2,8 @@
 
 import { useEffect, useRef, useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
-import { PHOTO_MAX_BYTES, PHOTO_TYPES, PHOTOS_PER_SUBMISSION } from "@/lib/community/kinds";
-import type { UploadGrant } from "@/lib/community/photos";
+import { PHOTO_MAX_BYTES, PHOTO_TYPES, PHOTOS_PER_PROPOSAL } from "@/lib/proposals/kinds";
+import type { UploadGrant } from "@/lib/proposals/photos";
 import { postJson } from "@/lib/http/post-json";
 import { PhotoReadError, preparePhoto } from "@/lib/photos/prepare";
 
@@ -22,7 +22,7 @@ function rejectionText(r: FileRejection): string {
   const code = r.errors[0]?.code;
   if (code === "file-too-large") return `${r.file.name} is larger than ${PHOTO_MAX_BYTES / MB} MB.`;
   if (code === "file-invalid-type") return `${r.file.name} is not a photo: use JPEG, PNG or WebP.`;
-  if (code === "too-many-files") return `At most ${PHOTOS_PER_SUBMISSION} photos.`;
+  if (code === "too-many-files") return `At most ${PHOTOS_PER_PROPOSAL} photos.`;
   return `${r.file.name}: ${r.errors[0]?.message ?? "not accepted"}`;
 }
 
@@ -82,7 +82,7 @@ export function PhotoDrop({
     }
   }
 
-  const room = PHOTOS_PER_SUBMISSION - items.filter((i) => i.status !== "failed").length;
+  const room = PHOTOS_PER_PROPOSAL - items.filter((i) => i.status !== "failed").length;
   const { getRootProps, getInputProps, isDragActive } = useDropzone({
     accept: Object.fromEntries(PHOTO_TYPES.map((t) => [t, []])),
     maxSize: PHOTO_MAX_BYTES,
@@ -91,7 +91,7 @@ export function PhotoDrop({
       const taken = accepted.slice(0, Math.max(room, 0));
       const over = accepted
         .slice(Math.max(room, 0))
-        .map((f) => `${f.name}: at most ${PHOTOS_PER_SUBMISSION} photos to a proposal.`);
+        .map((f) => `${f.name}: at most ${PHOTOS_PER_PROPOSAL} photos to a proposal.`);
       setRefused([...rejections.map(rejectionText), ...over]);
       const added = taken.map((file) => ({
         key: `${Date.now()}-${Math.random()}`,
@@ -122,11 +122,11 @@ export function PhotoDrop({
         <input {...getInputProps({ "aria-label": "Add photos" })} />
         <p className="font-bold">
           {room <= 0
-            ? `${PHOTOS_PER_SUBMISSION} photos added: that is the most`
+            ? `${PHOTOS_PER_PROPOSAL} photos added: that is the most`
             : "Drop photos here, or click to choose them"}
         </p>
         <p className="text-sm text-ink-soft">
-          Up to {PHOTOS_PER_SUBMISSION} photos, JPEG, PNG or WebP, {PHOTO_MAX_BYTES / MB} MB each. The stamping, the old
+          Up to {PHOTOS_PER_PROPOSAL} photos, JPEG, PNG or WebP, {PHOTO_MAX_BYTES / MB} MB each. The stamping, the old
           and new part side by side, and the fitted part help most.
         </p>
         <p className="text-sm text-ink-soft">

@@ -7,7 +7,7 @@ import { CATEGORY_NAMES, type StandardKind } from "@/lib/catalogue/kinds";
 import { useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
 import { useLookup } from "@/lib/hooks/use-lookup";
 import { standardSizes } from "@/lib/catalogue/sizes";
-import type { StandardDims } from "@/lib/community/checks";
+import type { StandardDims } from "@/lib/proposals/checks";
 
 export interface PickedPart {
   id: number;

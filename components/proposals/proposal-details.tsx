@@ -3,8 +3,8 @@ import { FitBadge } from "@/components/parts/fit-badge";
 import { Notice } from "@/components/ui/notice";
 import { CATEGORY_NAMES, STANDARD_KIND_NAMES } from "@/lib/catalogue/kinds";
 import { standardSizes } from "@/lib/catalogue/sizes";
-import { MEASURED_NAMES } from "@/lib/community/kinds";
-import type { SubmissionDetail } from "@/lib/community/views";
+import { MEASURED_NAMES } from "@/lib/proposals/kinds";
+import type { ProposalDetail } from "@/lib/proposals/views";
 
 const mm = (v: number) => `${v.toFixed(3).replace(/\.?0+$/, "")} mm`;
 
@@ -19,7 +19,7 @@ function deviationWord(d: number): string {
  * A proposal as sent: the parts, fit, notes, the engine's checks, the measurements against the standard part, the
  * photos.
  */
-export function ProposalDetails({ detail: d }: { detail: SubmissionDetail }) {
+export function ProposalDetails({ detail: d }: { detail: ProposalDetail }) {
   return (
     <section aria-labelledby="proposal-heading" className="space-y-4">
       <h2 id="proposal-heading" className="text-2xl">

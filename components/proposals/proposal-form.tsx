@@ -18,10 +18,10 @@ import {
   STANDARD_KIND_NAMES,
   STANDARD_KINDS,
 } from "@/lib/catalogue/kinds";
-import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
-import { MEASURED_DIMENSIONS, MEASURED_NAMES, type ProposalCheck } from "@/lib/community/kinds";
-import type { SubmitOutcome } from "@/lib/community/submissions";
-import { submissionInput, type SubmissionFormValues, type SubmissionInput } from "@/lib/validation/submissions";
+import { checkAgainstPart, checkStandard } from "@/lib/proposals/checks";
+import { MEASURED_DIMENSIONS, MEASURED_NAMES, type ProposalCheck } from "@/lib/proposals/kinds";
+import type { SubmitOutcome } from "@/lib/proposals/proposals";
+import { proposalInput, type ProposalFormValues, type ProposalInput } from "@/lib/validation/proposals";
 
 export interface FormChoices {
   makers: Array<{ id: number; name: string }>;
@@ -31,7 +31,7 @@ export interface FormChoices {
 
 export interface ProposalFormProps {
   choices: FormChoices;
-  defaults: SubmissionFormValues;
+  defaults: ProposalFormValues;
   pickedPart: PickedPart | null;
   pickedStandard: PickedStandard | null;
   photos: PhotoItem[];
@@ -117,7 +117,7 @@ type Outcome =
   | SubmitOutcome
   | {
       outcome: "submitted";
-      submission: { id: number; status: string };
+      proposal: { id: number; status: string };
       checks: ProposalCheck[];
       photosMissing: number[];
     };
@@ -169,7 +169,7 @@ function Result({ outcome, edited }: { outcome: Outcome; edited: boolean }) {
   );
 }
 
-function errorAt(errors: FieldErrors<SubmissionFormValues>, path: string): string | undefined {
+function errorAt(errors: FieldErrors<ProposalFormValues>, path: string): string | undefined {
   let node: unknown = errors;
   for (const key of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[key];
   return (node as { message?: string } | undefined)?.message;
@@ -185,9 +185,9 @@ export function ProposalForm({
   editId,
 }: ProposalFormProps) {
   const [outcome, setOutcome] = useState<Outcome | null>(null);
-  const { form, onSubmit, formError } = useApiForm<SubmissionFormValues, SubmissionInput, Outcome>({
-    schema: submissionInput,
-    endpoint: editId ? `/api/submissions/${editId}` : "/api/submissions",
+  const { form, onSubmit, formError } = useApiForm<ProposalFormValues, ProposalInput, Outcome>({
+    schema: proposalInput,
+    endpoint: editId ? `/api/proposals/${editId}` : "/api/proposals",
     method: editId ? "PATCH" : "POST",
     defaultValues: defaults,
     onSuccess: (data) => {

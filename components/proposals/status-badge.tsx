@@ -1,16 +1,16 @@
-import { STATUS_NAMES, type SubmissionStatus } from "@/lib/community/kinds";
+import { STATUS_NAMES, type ProposalStatus } from "@/lib/proposals/kinds";
 
-const STYLE: Record<SubmissionStatus, string> = {
+const STYLE: Record<ProposalStatus, string> = {
   pending: "border-rule-strong bg-ground-raised",
   changes_requested: "border-caution bg-caution-wash",
   approved: "border-brass bg-brass-wash",
   rejected: "border-ink/60 bg-ground-sunk",
 };
 
-const MARK: Record<SubmissionStatus, string> = { pending: "…", changes_requested: "↩", approved: "✓", rejected: "✕" };
+const MARK: Record<ProposalStatus, string> = { pending: "…", changes_requested: "↩", approved: "✓", rejected: "✕" };
 
 /** The word carries the status; the mark and colour only repeat it. */
-export function StatusBadge({ status }: { status: SubmissionStatus }) {
+export function StatusBadge({ status }: { status: ProposalStatus }) {
   return (
     <span
       className={

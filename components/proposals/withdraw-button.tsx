@@ -18,7 +18,7 @@ export function WithdrawButton({ id }: { id: number }) {
         onClick={async () => {
           if (!window.confirm("Withdraw this proposal? Its text and photos are deleted.")) return;
           setBusy(true);
-          const result = await sendJson("DELETE", `/api/submissions/${id}`);
+          const result = await sendJson("DELETE", `/api/proposals/${id}`);
           setBusy(false);
           if (result.ok) router.refresh();
           else setError(result.error.message);

@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import type { Decision } from "@/lib/community/kinds";
+import type { Decision } from "@/lib/proposals/kinds";
 import { postJson } from "@/lib/http/post-json";
 
 const LABELS: Record<Decision, string> = {
@@ -27,14 +27,14 @@ export function DecisionPanel({ id, version }: { id: number; version: number }) 
       return;
     }
     setPending(action);
-    const result = await postJson<{ submission: { status: string } }>(`/api/submissions/${id}/decision`, {
+    const result = await postJson<{ proposal: { status: string } }>(`/api/proposals/${id}/decision`, {
       action,
       message,
       version,
     });
     setPending(null);
     if (result.ok) {
-      router.push(`/review?done=${result.data.submission.status}`);
+      router.push(`/review?done=${result.data.proposal.status}`);
       router.refresh();
     } else {
       setError(result.error.message);

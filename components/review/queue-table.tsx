@@ -5,7 +5,7 @@ import Link from "next/link";
 import { FitBadge } from "@/components/parts/fit-badge";
 import { EmailAddress } from "@/components/ui/email-address";
 import { SortableTable } from "@/components/ui/sortable-table";
-import type { SubmissionRow } from "@/lib/community/views";
+import type { ProposalRow } from "@/lib/proposals/views";
 
 function waited(iso: string): string {
   const days = Math.floor((Date.now() - Date.parse(iso)) / 86_400_000);
@@ -13,7 +13,7 @@ function waited(iso: string): string {
   return days === 1 ? "1 day" : `${days} days`;
 }
 
-const columns: Array<ColumnDef<SubmissionRow>> = [
+const columns: Array<ColumnDef<ProposalRow>> = [
   {
     accessorKey: "createdAt",
     header: "Waiting",
@@ -68,7 +68,7 @@ const columns: Array<ColumnDef<SubmissionRow>> = [
 ];
 
 /** Proposals waiting for a decision, oldest first unless sorted otherwise. */
-export function QueueTable({ rows }: { rows: SubmissionRow[] }) {
+export function QueueTable({ rows }: { rows: ProposalRow[] }) {
   return (
     <SortableTable
       rows={rows}

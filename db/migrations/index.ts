@@ -7,6 +7,7 @@ import * as oneApprovedCross from "@/db/migrations/0006-one-approved-cross";
 import * as hashedSessions from "@/db/migrations/0007-hashed-sessions";
 import * as serialsWordsAndOrders from "@/db/migrations/0008-serials-words-and-orders";
 import * as nearNumberIndex from "@/db/migrations/0009-near-number-index";
+import * as proposals from "@/db/migrations/0010-proposals";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   { name: "0007-hashed-sessions", ...hashedSessions },
   { name: "0008-serials-words-and-orders", ...serialsWordsAndOrders },
   { name: "0009-near-number-index", ...nearNumberIndex },
+  { name: "0010-proposals", ...proposals },
 ];

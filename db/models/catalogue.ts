@@ -231,7 +231,7 @@ Cross.init(
 export class Confirmation extends Model<InferAttributes<Confirmation>, InferCreationAttributes<Confirmation>> {
   declare id: CreationOptional<number>;
   declare crossId: number | null;
-  declare submissionId: number | null;
+  declare proposalId: number | null;
   declare userId: string;
   declare note: string | null;
   declare createdAt: CreationOptional<Date>;
@@ -241,7 +241,7 @@ Confirmation.init(
   {
     id: id(),
     crossId: DataTypes.INTEGER,
-    submissionId: DataTypes.INTEGER,
+    proposalId: DataTypes.INTEGER,
     userId: DataTypes.STRING(40),
     note: DataTypes.TEXT,
     ...stamps,

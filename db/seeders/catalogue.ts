@@ -9,11 +9,11 @@ import {
   PartUsage,
   sequelize,
   StandardPart,
-  Submission,
+  Proposal,
   Supersession,
   User,
 } from "@/db";
-import type { Measurement } from "@/lib/community/kinds";
+import type { Measurement } from "@/lib/proposals/kinds";
 import type { DemoStandardPart } from "@/fixtures/catalogue/build";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { searchForms } from "@/lib/catalogue/normalise";
@@ -92,12 +92,12 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
       t,
     );
     // Pending crosses with a standard part are members' proposals waiting in the review queue: they are loaded as
-    // submissions by the club members, sent over the last few weeks, so the queue has work in it from the start.
+    // proposals by the club members, sent over the last few weeks, so the queue has work in it from the start.
     const proposals = demo.crosses.filter((c) => c.status === "pending" && c.standardKey && confirmers.length > 0);
     const crosses = demo.crosses.filter((c) => !proposals.includes(c));
     const standardByKey = new Map(demo.standardParts.map((sp) => [sp.key, sp]));
     const now = Date.now();
-    await Submission.bulkCreate(
+    await Proposal.bulkCreate(
       proposals.map((c, i) => {
         const sent = new Date(now - (proposals.length - i) * 4 * 3600_000 - 24 * 3600_000);
         return {

@@ -1,11 +1,11 @@
 /** Every kind of entry the audit log keeps, in the words an admin reads on /audit. */
 export const AUDIT_ACTIONS = {
-  "submission.create": "Proposed a cross",
-  "submission.edit": "Changed a proposal",
-  "submission.withdraw": "Withdrew a proposal",
-  "submission.approve": "Approved a proposal",
-  "submission.reject": "Rejected a proposal",
-  "submission.request_changes": "Sent a proposal back for changes",
+  "proposal.create": "Proposed a cross",
+  "proposal.edit": "Changed a proposal",
+  "proposal.withdraw": "Withdrew a proposal",
+  "proposal.approve": "Approved a proposal",
+  "proposal.reject": "Rejected a proposal",
+  "proposal.request_changes": "Sent a proposal back for changes",
   "cross.confirm": "Confirmed a cross",
   "import.upload": "Uploaded an import",
   "import.commit": "Committed an import",
@@ -21,7 +21,7 @@ export type AuditAction = keyof typeof AUDIT_ACTIONS;
 
 /** The kinds of record an entry is about. */
 export const AUDIT_SUBJECTS = {
-  submission: "proposal",
+  proposal: "proposal",
   cross: "cross",
   import: "import",
   job_list: "job list",

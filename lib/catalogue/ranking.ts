@@ -128,8 +128,8 @@ export async function rankCrosses(
   const ranked = new Map<number, RankedCross[]>(ids.map((id) => [id, []]));
   if (ids.length === 0) return ranked;
   const photos = options.photos
-    ? `, (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM submissions sub JOIN submission_photos ph ON
-      ph.submission_id = sub.id
+    ? `, (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM proposals sub JOIN proposal_photos ph ON
+      ph.proposal_id = sub.id
           WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos`
     : "";
   const rows = await sequelize.query<CrossRow>(

@@ -1,8 +1,8 @@
 import { QueryTypes, type CreationAttributes, type Transaction } from "sequelize";
-import { Cross, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission } from "@/db";
+import { Cross, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Proposal } from "@/db";
 import { STANDARD_KIND_NAMES, type PartCategory } from "@/lib/catalogue/kinds";
 import { searchForms } from "@/lib/catalogue/normalise";
-import type { Measurement } from "@/lib/community/kinds";
+import type { Measurement } from "@/lib/proposals/kinds";
 import { NAMES_KEPT, type ImportCounts, type ImportMappingValue, type ImportTarget } from "@/lib/imports/kinds";
 import { streamRows, type FileShape } from "@/lib/imports/read";
 import { parseImportRow, type ParsedRow, type RowProblem } from "@/lib/imports/rows";
@@ -313,7 +313,7 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
       values: CreationAttributes<OriginalPart>;
       usage: { machineId: number; assemblyId: number } | null;
     }> = [];
-    const newSubmissionRows: Array<{ line: number; values: CreationAttributes<Submission> }> = [];
+    const newProposalRows: Array<{ line: number; values: CreationAttributes<Proposal> }> = [];
     for (const a of accepted) {
       const { row } = a;
       const partKey = `${a.makerKey}|${a.normalised}`;
@@ -457,7 +457,7 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
               value: row[k]!,
               unit: "mm",
             }));
-          newSubmissionRows.push({
+          newProposalRows.push({
             line: a.line,
             values: {
               userId: options.userId!,
@@ -602,16 +602,16 @@ export async function runPass(options: PassOptions): Promise<ImportCounts> {
         }),
       );
     }
-    if (commit && newSubmissionRows.length > 0) {
-      const created = await Submission.bulkCreate(
-        newSubmissionRows.map((r) => r.values),
+    if (commit && newProposalRows.length > 0) {
+      const created = await Proposal.bulkCreate(
+        newProposalRows.map((r) => r.values),
         { ...t, returning: true },
       );
       created.forEach((s, i) =>
         changes.push({
           importId: options.importId,
-          line: newSubmissionRows[i].line,
-          tableName: "submissions",
+          line: newProposalRows[i].line,
+          tableName: "proposals",
           recordId: s.id,
           action: "insert",
           before: null,

@@ -304,7 +304,7 @@ export async function runCommit(actor: Actor, id: number, options: { failAfterRo
   }
 }
 
-const ROLLBACK_ORDER = ["submissions", "crosses", "part_usages", "standard_parts", "original_parts", "makers"];
+const ROLLBACK_ORDER = ["proposals", "crosses", "part_usages", "standard_parts", "original_parts", "makers"];
 const UPDATE_COLUMNS: Record<string, Record<string, string>> = {
   original_parts: {
     description: "description",

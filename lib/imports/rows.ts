@@ -8,7 +8,7 @@ import {
   type PartCategory,
   type StandardKind,
 } from "@/lib/catalogue/kinds";
-import { checkStandard } from "@/lib/community/checks";
+import { checkStandard } from "@/lib/proposals/checks";
 import type { ImportField, ImportMappingValue } from "@/lib/imports/kinds";
 import { StandardsInputError } from "@/lib/standards/errors";
 import { parseLength } from "@/lib/standards/units";

@@ -1,4 +1,4 @@
-import { checkStandard } from "@/lib/community/checks";
+import { checkStandard } from "@/lib/proposals/checks";
 import type { PartCategory, StandardKind } from "@/lib/catalogue/kinds";
 import { round } from "@/lib/standards/units";
 

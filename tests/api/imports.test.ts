@@ -3,7 +3,7 @@ import iconv from "iconv-lite";
 import Papa from "papaparse";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Cross, Import, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Submission, User } from "@/db";
+import { Cross, Import, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Proposal, User } from "@/db";
 import { runCommit, startCommit } from "@/lib/imports/imports";
 import { getObject } from "@/lib/storage/s3";
 import { APP_URL, send, signIn } from "../helpers/api";
@@ -321,11 +321,11 @@ describe("other files", () => {
     await send("post", `/api/imports/${response.body.id}/commit`, {}, { cookie: moderator });
     expect((await settled(moderator, response.body.id)).status).toBe("committed");
     expect(await OriginalPart.findOne({ where: { number } })).toBeNull();
-    const queue = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: admin });
-    expect(queue.body.submissions).toEqual([
+    const queue = await send("get", `/api/proposals?q=${number}`, undefined, { cookie: admin });
+    expect(queue.body.proposals).toEqual([
       expect.objectContaining({ partNumber: number, standard: "6200-2RS", submitter: "moderator@understudy.test" }),
     ]);
-    expect(await Submission.count({ where: { status: "pending" } })).toBeGreaterThan(0);
+    expect(await Proposal.count({ where: { status: "pending" } })).toBeGreaterThan(0);
   });
 });
 

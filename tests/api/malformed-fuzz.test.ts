@@ -90,7 +90,7 @@ describe("malformed input on every route", () => {
       for (const path of [
         `/api/parts/${id}`,
         `/api/lists/${id}`,
-        `/api/submissions/${id}`,
+        `/api/proposals/${id}`,
         `/api/imports/${id}`,
         `/api/photos/${id}`,
         `/api/lists/${listId}/lines/${id}`,

@@ -97,18 +97,18 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "seals/press-fit": [{ method: "get", path: () => "/api/seals/press-fit?bore=47&sealOd=47.1", door: "public" }],
   "seals/shaft": [{ method: "get", path: () => "/api/seals/shaft?shaft=35", door: "public" }],
   "standard-parts": [{ method: "get", path: () => "/api/standard-parts?q=6205", door: "public" }],
-  "submissions/[id]/decision": [
-    { method: "post", path: () => "/api/submissions/999999/decision", door: "proposals:review", body: {} },
+  "proposals/[id]/decision": [
+    { method: "post", path: () => "/api/proposals/999999/decision", door: "proposals:review", body: {} },
   ],
-  "submissions/[id]": [
-    { method: "get", path: () => "/api/submissions/999999", door: "proposals:create" },
-    { method: "patch", path: () => "/api/submissions/999999", door: "proposals:create", body: {} },
-    { method: "delete", path: () => "/api/submissions/999999", door: "proposals:create" },
+  "proposals/[id]": [
+    { method: "get", path: () => "/api/proposals/999999", door: "proposals:create" },
+    { method: "patch", path: () => "/api/proposals/999999", door: "proposals:create", body: {} },
+    { method: "delete", path: () => "/api/proposals/999999", door: "proposals:create" },
   ],
-  submissions: [
-    { method: "get", path: () => "/api/submissions?mine=1", door: "proposals:create" },
-    { method: "get", path: () => "/api/submissions", door: "proposals:review" },
-    { method: "post", path: () => "/api/submissions", door: "proposals:create", body: {} },
+  proposals: [
+    { method: "get", path: () => "/api/proposals?mine=1", door: "proposals:create" },
+    { method: "get", path: () => "/api/proposals", door: "proposals:review" },
+    { method: "post", path: () => "/api/proposals", door: "proposals:create", body: {} },
   ],
   "units/nominal": [{ method: "get", path: () => "/api/units/nominal?value=30", door: "public" }],
   "uploads/presign": [{ method: "post", path: () => "/api/uploads/presign", door: "proposals:create", body: {} }],

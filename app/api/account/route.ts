@@ -3,7 +3,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { requirePermission } from "@/lib/auth/session";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
-import { notificationsInput } from "@/lib/validation/submissions";
+import { notificationsInput } from "@/lib/validation/proposals";
 
 export const runtime = "nodejs";
 

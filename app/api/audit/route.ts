@@ -3,7 +3,7 @@ import { requirePermission } from "@/lib/auth/session";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { parseWith } from "@/lib/validation/parse";
-import { auditQuery } from "@/lib/validation/submissions";
+import { auditQuery } from "@/lib/validation/proposals";
 
 export const runtime = "nodejs";
 

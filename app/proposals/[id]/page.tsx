@@ -5,7 +5,7 @@ import { StatusBadge } from "@/components/proposals/status-badge";
 import { WithdrawButton } from "@/components/proposals/withdraw-button";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
-import { getSubmissionDetail } from "@/lib/community/views";
+import { getProposalDetail } from "@/lib/proposals/views";
 import { loadByIdOr404 } from "@/lib/http/load-or-404";
 
 export const metadata: Metadata = { title: "Your proposal" };
@@ -24,7 +24,7 @@ const STATUS_WORDS: Record<string, string> = {
 export default async function ProposalPage({ params }: { params: Promise<{ id: string }> }) {
   const { id: idText } = await params;
   const user = await requirePagePermission("proposals:create", `/proposals/${idText}`);
-  const d = await loadByIdOr404(idText, (id) => getSubmissionDetail(id, user));
+  const d = await loadByIdOr404(idText, (id) => getProposalDetail(id, user));
   const open = d.status === "pending" || d.status === "changes_requested";
   return (
     <div className="space-y-6">

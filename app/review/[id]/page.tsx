@@ -7,14 +7,14 @@ import { DecisionPanel } from "@/components/review/decision-panel";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
 import { loadByIdOr404 } from "@/lib/http/load-or-404";
-import { getSubmissionDetail } from "@/lib/community/views";
+import { getProposalDetail } from "@/lib/proposals/views";
 
 export const metadata: Metadata = { title: "Review a proposal" };
 
 export default async function ReviewProposalPage({ params }: { params: Promise<{ id: string }> }) {
   const { id: idText } = await params;
   const user = await requirePagePermission("proposals:review", `/review/${idText}`);
-  const d = await loadByIdOr404(idText, (id) => getSubmissionDetail(id, user));
+  const d = await loadByIdOr404(idText, (id) => getProposalDetail(id, user));
   const warnings = d.checks.filter((c) => c.level === "warning");
 
   return (

@@ -1,5 +1,5 @@
 import { getCurrentSession } from "@/lib/auth/session";
-import { photoForViewer } from "@/lib/community/views";
+import { photoForViewer } from "@/lib/proposals/views";
 import { AppError } from "@/lib/errors";
 import { handle } from "@/lib/http/handle";
 import { getObject } from "@/lib/storage/s3";

@@ -1,8 +1,8 @@
 import { requirePermission } from "@/lib/auth/session";
-import { grantUpload } from "@/lib/community/photos";
+import { grantUpload } from "@/lib/proposals/photos";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
-import { presignInput } from "@/lib/validation/submissions";
+import { presignInput } from "@/lib/validation/proposals";
 
 export const runtime = "nodejs";
 

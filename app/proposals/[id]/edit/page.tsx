@@ -6,15 +6,15 @@ import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
 import { loadByIdOr404 } from "@/lib/http/load-or-404";
 import { standardSizes } from "@/lib/catalogue/sizes";
-import { loadFormChoices } from "@/lib/community/form-choices";
-import { getSubmissionDetail } from "@/lib/community/views";
+import { loadFormChoices } from "@/lib/proposals/form-choices";
+import { getProposalDetail } from "@/lib/proposals/views";
 
 export const metadata: Metadata = { title: "Change your proposal" };
 
 export default async function EditProposalPage({ params }: { params: Promise<{ id: string }> }) {
   const { id: idText } = await params;
   const user = await requirePagePermission("proposals:create", `/proposals/${idText}/edit`);
-  const detail = await loadByIdOr404(idText, (id) => getSubmissionDetail(id, user));
+  const detail = await loadByIdOr404(idText, (id) => getProposalDetail(id, user));
   if (!detail.mine) notFound();
 
   if (detail.status !== "changes_requested") {

@@ -1,9 +1,9 @@
 import { requirePermission } from "@/lib/auth/session";
-import { confirmCross } from "@/lib/community/submissions";
+import { confirmCross } from "@/lib/proposals/proposals";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
 import { idParam } from "@/lib/validation/ids";
-import { confirmationInput } from "@/lib/validation/submissions";
+import { confirmationInput } from "@/lib/validation/proposals";
 
 export const runtime = "nodejs";
 

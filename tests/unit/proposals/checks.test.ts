@@ -5,8 +5,8 @@ import {
   measurementDeviations,
   PART_SIZES_FIELD,
   readSealSize,
-} from "@/lib/community/checks";
-import { proposalHref, readProposalPrefill } from "@/lib/community/prefill";
+} from "@/lib/proposals/checks";
+import { proposalHref, readProposalPrefill } from "@/lib/proposals/prefill";
 import { toStandardItem } from "@/lib/lists/standard-item";
 
 describe("checking a proposed standard part with the standards engine", () => {

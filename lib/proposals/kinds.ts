@@ -1,9 +1,9 @@
 import type { Fit, PartCategory, StandardKind } from "@/lib/catalogue/kinds";
 
-export const SUBMISSION_STATUSES = ["pending", "changes_requested", "approved", "rejected"] as const;
-export type SubmissionStatus = (typeof SUBMISSION_STATUSES)[number];
+export const PROPOSAL_STATUSES = ["pending", "changes_requested", "approved", "rejected"] as const;
+export type ProposalStatus = (typeof PROPOSAL_STATUSES)[number];
 
-export const STATUS_NAMES: Record<SubmissionStatus, string> = {
+export const STATUS_NAMES: Record<ProposalStatus, string> = {
   pending: "Waiting for review",
   changes_requested: "Sent back to you",
   approved: "In the catalogue",
@@ -65,4 +65,4 @@ export type { Fit };
 export const PHOTO_TYPES = ["image/jpeg", "image/png", "image/webp"] as const;
 export type PhotoType = (typeof PHOTO_TYPES)[number];
 export const PHOTO_MAX_BYTES = 10 * 1024 * 1024;
-export const PHOTOS_PER_SUBMISSION = 6;
+export const PHOTOS_PER_PROPOSAL = 6;

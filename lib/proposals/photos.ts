@@ -1,10 +1,10 @@
 import { randomBytes } from "node:crypto";
 import { Op } from "sequelize";
-import { sequelize, SubmissionPhoto } from "@/db";
+import { sequelize, ProposalPhoto } from "@/db";
 import { takeTurn } from "@/lib/concurrency/take-turn";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
-import { PHOTO_MAX_BYTES, PHOTO_TYPES, type PhotoType } from "@/lib/community/kinds";
+import { PHOTO_MAX_BYTES, PHOTO_TYPES, type PhotoType } from "@/lib/proposals/kinds";
 import { deleteObject, headObject, presignPut } from "@/lib/storage/s3";
 
 const EXTENSIONS: Record<PhotoType, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
@@ -30,7 +30,7 @@ export async function grantUpload(
   const expiresInSeconds = 600;
   const photo = await sequelize.transaction(async (transaction) => {
     await takeTurn(transaction, `upload:${userId}`);
-    const recent = await SubmissionPhoto.count({
+    const recent = await ProposalPhoto.count({
       where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } },
       transaction,
     });
@@ -41,10 +41,10 @@ export async function grantUpload(
         { retryAfterSeconds: 3600 },
       );
     }
-    return SubmissionPhoto.create(
+    return ProposalPhoto.create(
       {
         userId,
-        submissionId: null,
+        proposalId: null,
         objectKey: key,
         contentType: file.contentType,
         sizeBytes: file.size,
@@ -75,17 +75,17 @@ export interface PhotoCheck {
 export async function checkUploadedPhotos(
   userId: string,
   photoIds: number[],
-  submissionId: number | null,
+  proposalId: number | null,
 ): Promise<PhotoCheck> {
   if (photoIds.length === 0) return { usable: [], missing: [] };
-  const rows = await SubmissionPhoto.findAll({ where: { id: photoIds, userId } });
+  const rows = await ProposalPhoto.findAll({ where: { id: photoIds, userId } });
   const foreign = photoIds.filter((id) => !rows.some((r) => r.id === id));
   if (foreign.length > 0)
     throw new AppError("validation_failed", "A photo in this proposal is not one you uploaded.", { field: "photoIds" });
   const usable: number[] = [];
   const missing: number[] = [];
   for (const row of rows) {
-    if (row.submissionId !== null && row.submissionId !== submissionId) {
+    if (row.proposalId !== null && row.proposalId !== proposalId) {
       throw new AppError("validation_failed", "A photo in this proposal belongs to another proposal.", {
         field: "photoIds",
       });
@@ -125,11 +125,11 @@ export async function deleteStoredPhotos(keys: string[]): Promise<void> {
  * database after a day. Run by `npm run jobs:sweep-photos`.
  */
 export async function sweepAbandonedPhotos(olderThanHours = 24): Promise<number> {
-  const abandoned = await SubmissionPhoto.findAll({
-    where: { submissionId: null, createdAt: { [Op.lt]: new Date(Date.now() - olderThanHours * 3_600_000) } },
+  const abandoned = await ProposalPhoto.findAll({
+    where: { proposalId: null, createdAt: { [Op.lt]: new Date(Date.now() - olderThanHours * 3_600_000) } },
   });
   if (abandoned.length === 0) return 0;
   await deleteStoredPhotos(abandoned.map((p) => p.objectKey));
-  await SubmissionPhoto.destroy({ where: { id: abandoned.map((p) => p.id), submissionId: null } });
+  await ProposalPhoto.destroy({ where: { id: abandoned.map((p) => p.id), proposalId: null } });
   return abandoned.length;
 }

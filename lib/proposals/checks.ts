@@ -4,7 +4,7 @@ import { StandardsInputError } from "@/lib/standards/errors";
 import { INCH_SEALS, METRIC_SEALS } from "@/lib/standards/seal-sizes";
 import { MM_PER_INCH, parseLength, round, toMm } from "@/lib/standards/units";
 import type { StandardKind } from "@/lib/catalogue/kinds";
-import type { Measurement, NewStandardInput, ProposalCheck } from "@/lib/community/kinds";
+import type { Measurement, NewStandardInput, ProposalCheck } from "@/lib/proposals/kinds";
 
 export interface StandardDims {
   innerMm: number | null;

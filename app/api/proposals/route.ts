@@ -1,26 +1,26 @@
 import { requirePermission } from "@/lib/auth/session";
-import { createSubmission } from "@/lib/community/submissions";
-import { listMine, listQueue } from "@/lib/community/views";
+import { createProposal } from "@/lib/proposals/proposals";
+import { listMine, listQueue } from "@/lib/proposals/views";
 import { handle, readJson } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { parseWith } from "@/lib/validation/parse";
-import { submissionInput, submissionsQuery } from "@/lib/validation/submissions";
+import { proposalInput, proposalsQuery } from "@/lib/validation/proposals";
 
 export const runtime = "nodejs";
 
 export const POST = handle(async (request) => {
   const user = await requirePermission("proposals:create");
-  const input = parseWith(submissionInput, await readJson(request));
-  const result = await createSubmission(user, input);
+  const input = parseWith(proposalInput, await readJson(request));
+  const result = await createProposal(user, input);
   return Response.json(result, { status: result.outcome === "submitted" ? 201 : 200 });
 });
 
 /** `?mine=1`: the signed-in member's own proposals. Without it: the review queue, for reviewers. */
 export const GET = handle(async (request) => {
-  const query = parseWith(submissionsQuery, queryOf(request));
+  const query = parseWith(proposalsQuery, queryOf(request));
   if (query.mine) {
     const user = await requirePermission("proposals:create");
-    return Response.json({ submissions: await listMine(user.id) });
+    return Response.json({ proposals: await listMine(user.id) });
   }
   await requirePermission("proposals:review");
   const { rows, total } = await listQueue({
@@ -31,5 +31,5 @@ export const GET = handle(async (request) => {
     limit: query.limit,
     offset: query.offset,
   });
-  return Response.json({ submissions: rows, total });
+  return Response.json({ proposals: rows, total });
 });

@@ -1,15 +1,5 @@
 import { QueryTypes } from "sequelize";
-import {
-  Maker,
-  Machine,
-  Assembly,
-  OriginalPart,
-  sequelize,
-  StandardPart,
-  Submission,
-  SubmissionPhoto,
-  User,
-} from "@/db";
+import { Maker, Machine, Assembly, OriginalPart, sequelize, StandardPart, Proposal, ProposalPhoto, User } from "@/db";
 import { hasPermission, type Role } from "@/lib/auth/roles";
 import { CATEGORY_NAMES, type Fit, type PartCategory, type StandardKind } from "@/lib/catalogue/kinds";
 import {
@@ -18,13 +8,13 @@ import {
   PART_SIZES_FIELD,
   type MeasurementDeviation,
   type StandardDims,
-} from "@/lib/community/checks";
-import type { Measurement, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
+} from "@/lib/proposals/checks";
+import type { Measurement, ProposalCheck, ProposalStatus } from "@/lib/proposals/kinds";
 import { AppError } from "@/lib/errors";
 
-export interface SubmissionRow {
+export interface ProposalRow {
   id: number;
-  status: SubmissionStatus;
+  status: ProposalStatus;
   version: number;
   createdAt: string;
   updatedAt: string;
@@ -45,7 +35,7 @@ export interface SubmissionRow {
 
 interface RawRow {
   id: number;
-  status: SubmissionStatus;
+  status: ProposalStatus;
   version: number;
   created_at: Date;
   updated_at: Date;
@@ -71,16 +61,16 @@ const SELECT_ROWS = `
          COALESCE(p.category::text, s.new_part->>'category') AS category,
          COALESCE(sp.designation, s.new_standard->>'designation') AS standard,
          s.fit, s.moderator_message, u.email AS submitter, s.cross_id,
-         (SELECT count(*) FROM submission_photos ph WHERE ph.submission_id = s.id) AS photos,
-         (SELECT count(*) FROM confirmations c WHERE c.submission_id = s.id) AS confirmations,
+         (SELECT count(*) FROM proposal_photos ph WHERE ph.proposal_id = s.id) AS photos,
+         (SELECT count(*) FROM confirmations c WHERE c.proposal_id = s.id) AS confirmations,
          (SELECT count(*) FROM jsonb_array_elements(s.checks) e WHERE e->>'level' = 'warning')::int AS warnings
-  FROM submissions s
+  FROM proposals s
   JOIN users u ON u.id = s.user_id
   LEFT JOIN original_parts p ON p.id = s.original_part_id
   LEFT JOIN standard_parts sp ON sp.id = s.standard_part_id
   JOIN makers mk ON mk.id = COALESCE(p.maker_id, (s.new_part->>'makerId')::int)`;
 
-function toRow(r: RawRow): SubmissionRow {
+function toRow(r: RawRow): ProposalRow {
   return {
     id: r.id,
     status: r.status,
@@ -103,7 +93,7 @@ function toRow(r: RawRow): SubmissionRow {
   };
 }
 
-export async function listMine(userId: string): Promise<SubmissionRow[]> {
+export async function listMine(userId: string): Promise<ProposalRow[]> {
   const rows = await sequelize.query<RawRow>(
     `${SELECT_ROWS} WHERE s.user_id = :userId ORDER BY s.updated_at DESC LIMIT 500`,
     { replacements: { userId }, type: QueryTypes.SELECT },
@@ -112,7 +102,7 @@ export async function listMine(userId: string): Promise<SubmissionRow[]> {
 }
 
 export interface QueueFilters {
-  status?: SubmissionStatus;
+  status?: ProposalStatus;
   category?: PartCategory;
   makerId?: number;
   /** Part number, designation or member's e-mail, any part of it. */
@@ -122,7 +112,7 @@ export interface QueueFilters {
 }
 
 /** The review queue: oldest first, so nobody's proposal waits for ever behind newer ones. */
-export async function listQueue(filters: QueueFilters): Promise<{ rows: SubmissionRow[]; total: number }> {
+export async function listQueue(filters: QueueFilters): Promise<{ rows: ProposalRow[]; total: number }> {
   const where = ["s.status = :status"];
   if (filters.category) where.push("COALESCE(p.category::text, s.new_part->>'category') = :category");
   if (filters.makerId) where.push("mk.id = :makerId");
@@ -144,7 +134,7 @@ export async function listQueue(filters: QueueFilters): Promise<{ rows: Submissi
     { replacements, type: QueryTypes.SELECT },
   );
   const [{ total }] = await sequelize.query<{ total: string }>(
-    `SELECT count(*) AS total FROM submissions s LEFT JOIN original_parts p ON p.id = s.original_part_id
+    `SELECT count(*) AS total FROM proposals s LEFT JOIN original_parts p ON p.id = s.original_part_id
      LEFT JOIN standard_parts sp ON sp.id = s.standard_part_id
      JOIN makers mk ON mk.id = COALESCE(p.maker_id, (s.new_part->>'makerId')::int) WHERE ${where.join(" AND ")}`,
     { replacements, type: QueryTypes.SELECT },
@@ -159,7 +149,7 @@ export interface StandardView extends StandardDims {
   isNew: boolean;
 }
 
-export interface SubmissionDetail extends SubmissionRow {
+export interface ProposalDetail extends ProposalRow {
   mine: boolean;
   part: {
     id: number | null;
@@ -197,23 +187,23 @@ export interface SubmissionDetail extends SubmissionRow {
 }
 
 /** One proposal with all a reviewer needs beside it; the submitter may see their own, reviewers any. */
-export async function getSubmissionDetail(id: number, viewer: { id: string; role: Role }): Promise<SubmissionDetail> {
+export async function getProposalDetail(id: number, viewer: { id: string; role: Role }): Promise<ProposalDetail> {
   const [raw] = await sequelize.query<RawRow>(`${SELECT_ROWS} WHERE s.id = :id`, {
     replacements: { id },
     type: QueryTypes.SELECT,
   });
-  const submission = raw ? await Submission.findByPk(id) : null;
-  if (!raw || !submission) throw new AppError("not_found", "There is no proposal with that id.");
-  const mine = submission.userId === viewer.id;
+  const proposal = raw ? await Proposal.findByPk(id) : null;
+  if (!raw || !proposal) throw new AppError("not_found", "There is no proposal with that id.");
+  const mine = proposal.userId === viewer.id;
   if (!mine && !hasPermission(viewer.role, "proposals:review"))
     throw new AppError("not_found", "There is no proposal with that id.");
 
-  const part = submission.originalPartId ? await OriginalPart.findByPk(submission.originalPartId) : null;
-  const makerId = part?.makerId ?? submission.newPart!.makerId;
+  const part = proposal.originalPartId ? await OriginalPart.findByPk(proposal.originalPartId) : null;
+  const makerId = part?.makerId ?? proposal.newPart!.makerId;
   const maker = await Maker.findByPk(makerId);
-  const machine = submission.newPart?.machineId ? await Machine.findByPk(submission.newPart.machineId) : null;
-  const assembly = submission.newPart?.assemblyId ? await Assembly.findByPk(submission.newPart.assemblyId) : null;
-  const std = submission.standardPartId ? await StandardPart.findByPk(submission.standardPartId) : null;
+  const machine = proposal.newPart?.machineId ? await Machine.findByPk(proposal.newPart.machineId) : null;
+  const assembly = proposal.newPart?.assemblyId ? await Assembly.findByPk(proposal.newPart.assemblyId) : null;
+  const std = proposal.standardPartId ? await StandardPart.findByPk(proposal.standardPartId) : null;
   const standardPart: StandardView = std
     ? {
         id: std.id,
@@ -227,15 +217,15 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
       }
     : {
         id: null,
-        kind: submission.newStandard!.kind,
-        designation: submission.newStandard!.designation,
-        innerMm: submission.newStandard!.innerMm ?? null,
-        outerMm: submission.newStandard!.outerMm ?? null,
-        widthMm: submission.newStandard!.widthMm ?? null,
-        lengthMm: submission.newStandard!.lengthMm ?? null,
+        kind: proposal.newStandard!.kind,
+        designation: proposal.newStandard!.designation,
+        innerMm: proposal.newStandard!.innerMm ?? null,
+        outerMm: proposal.newStandard!.outerMm ?? null,
+        widthMm: proposal.newStandard!.widthMm ?? null,
+        lengthMm: proposal.newStandard!.lengthMm ?? null,
         isNew: true,
       };
-  const photos = await SubmissionPhoto.findAll({ where: { submissionId: id }, order: [["id", "ASC"]] });
+  const photos = await ProposalPhoto.findAll({ where: { proposalId: id }, order: [["id", "ASC"]] });
   const existingCrosses = part
     ? await sequelize.query<{
         id: number;
@@ -257,10 +247,10 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
     `SELECT count(*) FILTER (WHERE status = 'approved') AS approved, count(*) FILTER (WHERE status = 'rejected') AS
       rejected,
             count(*) FILTER (WHERE status IN ('pending', 'changes_requested')) AS open
-     FROM submissions WHERE user_id = :userId`,
-    { replacements: { userId: submission.userId }, type: QueryTypes.SELECT },
+     FROM proposals WHERE user_id = :userId`,
+    { replacements: { userId: proposal.userId }, type: QueryTypes.SELECT },
   );
-  const submitter = await User.findByPk(submission.userId, { attributes: ["email"] });
+  const submitter = await User.findByPk(proposal.userId, { attributes: ["email"] });
 
   return {
     ...toRow(raw),
@@ -269,11 +259,11 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
     part: {
       id: part?.id ?? null,
       isNew: !part,
-      number: part?.number ?? submission.newPart!.number,
+      number: part?.number ?? proposal.newPart!.number,
       maker: maker?.name ?? "?",
       makerId,
-      description: part?.description ?? submission.newPart!.description,
-      category: part?.category ?? submission.newPart!.category,
+      description: part?.description ?? proposal.newPart!.description,
+      category: part?.category ?? proposal.newPart!.category,
       machine: machine?.model ?? null,
       machineId: machine?.id ?? null,
       assembly: assembly?.name ?? null,
@@ -286,10 +276,10 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
       },
     },
     standardPart,
-    measurements: submission.measurements,
-    deviations: measurementDeviations(submission.measurements, standardPart),
-    notes: submission.notes,
-    checks: submission.checks.filter((c) => c.field !== PART_SIZES_FIELD),
+    measurements: proposal.measurements,
+    deviations: measurementDeviations(proposal.measurements, standardPart),
+    notes: proposal.notes,
+    checks: proposal.checks.filter((c) => c.field !== PART_SIZES_FIELD),
     // Worked out afresh, so proposals sent before the check existed are flagged too.
     sizeMismatch: part
       ? checkAgainstPart(
@@ -318,16 +308,16 @@ export async function getSubmissionDetail(id: number, viewer: { id: string; role
       rejected: Number(record.rejected),
       open: Number(record.open),
     },
-    decidedAt: submission.decidedAt?.toISOString() ?? null,
+    decidedAt: proposal.decidedAt?.toISOString() ?? null,
   };
 }
 
 /** Whether this viewer may see this photo: its uploader, a reviewer, or anyone once its proposal is approved. */
 export async function photoForViewer(photoId: number, viewer: { id: string; role: Role } | null) {
-  const photo = await SubmissionPhoto.findByPk(photoId);
+  const photo = await ProposalPhoto.findByPk(photoId);
   if (!photo) return null;
   if (viewer && (photo.userId === viewer.id || hasPermission(viewer.role, "proposals:review"))) return photo;
-  if (!photo.submissionId) return null;
-  const submission = await Submission.findByPk(photo.submissionId, { attributes: ["status"] });
-  return submission?.status === "approved" ? photo : null;
+  if (!photo.proposalId) return null;
+  const proposal = await Proposal.findByPk(photo.proposalId, { attributes: ["status"] });
+  return proposal?.status === "approved" ? photo : null;
 }

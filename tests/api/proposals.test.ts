@@ -10,12 +10,12 @@ import {
   OriginalPart,
   sequelize,
   StandardPart,
-  Submission,
-  SubmissionPhoto,
+  Proposal,
+  ProposalPhoto,
   User,
 } from "@/db";
-import { sendProposalDigest } from "@/lib/community/digest";
-import { sweepAbandonedPhotos } from "@/lib/community/photos";
+import { sendProposalDigest } from "@/lib/proposals/digest";
+import { sweepAbandonedPhotos } from "@/lib/proposals/photos";
 import { headObject } from "@/lib/storage/s3";
 import { send, signIn } from "../helpers/api";
 import { mailCount, waitForMail } from "../helpers/mail";
@@ -77,12 +77,12 @@ function newPartProposal(overrides: Record<string, unknown> = {}) {
 }
 
 async function submit(cookie: string, body: unknown) {
-  return send("post", "/api/submissions", body, { cookie });
+  return send("post", "/api/proposals", body, { cookie });
 }
 
 const lookup = (q: string) => send("get", `/api/parts/lookup?${new URLSearchParams({ q })}`);
 
-describe("POST /api/submissions", () => {
+describe("POST /api/proposals", () => {
   it("refuses a visitor (401) and names the field of a bad body (400)", async () => {
     expect((await submit("", newPartProposal().body)).status).toBe(401);
     const bad = await submit(member, { ...newPartProposal().body, fit: "hammered" });
@@ -115,44 +115,39 @@ describe("the round trip: submit, review, catalogue, mail", () => {
       expect(created.status).toBe(201);
       expect(created.body).toMatchObject({
         outcome: "submitted",
-        submission: { status: "pending" },
+        proposal: { status: "pending" },
         photosMissing: [],
       });
-      const id = created.body.submission.id;
+      const id = created.body.proposal.id;
 
       expect((await lookup(number)).body.results).toEqual([]);
-      const mine = await send("get", "/api/submissions?mine=1", undefined, { cookie: member });
-      expect(mine.body.submissions.find((s: { id: number }) => s.id === id)).toMatchObject({
+      const mine = await send("get", "/api/proposals?mine=1", undefined, { cookie: member });
+      expect(mine.body.proposals.find((s: { id: number }) => s.id === id)).toMatchObject({
         status: "pending",
         partNumber: number,
         standard: "6205-2RS",
       });
 
       expect(
-        (await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: other })).status,
+        (await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: other })).status,
       ).toBe(403);
 
-      const queue = await send("get", "/api/submissions?category=bearing&limit=200", undefined, { cookie: moderator });
+      const queue = await send("get", "/api/proposals?category=bearing&limit=200", undefined, { cookie: moderator });
       expect(queue.status).toBe(200);
-      const dates = queue.body.submissions.map((s: { createdAt: string }) => s.createdAt);
+      const dates = queue.body.proposals.map((s: { createdAt: string }) => s.createdAt);
       expect(dates).toEqual([...dates].sort());
-      const searched = await send("get", `/api/submissions?q=${number}`, undefined, { cookie: moderator });
+      const searched = await send("get", `/api/proposals?q=${number}`, undefined, { cookie: moderator });
       expect(searched.body).toMatchObject({
         total: 1,
-        submissions: [expect.objectContaining({ id, partNumber: number })],
+        proposals: [expect.objectContaining({ id, partNumber: number })],
       });
-      expect((await send("get", "/api/submissions?maker=abc", undefined, { cookie: moderator })).body.field).toBe(
+      expect((await send("get", "/api/proposals?maker=abc", undefined, { cookie: moderator })).body.field).toBe(
         "maker",
       );
 
-      const decided = await send(
-        "post",
-        `/api/submissions/${id}/decision`,
-        { action: "approve" },
-        { cookie: moderator },
-      );
+      const decided = await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator });
       expect(decided.status).toBe(200);
-      expect(decided.body.submission.status).toBe("approved");
+      expect(decided.body.proposal.status).toBe("approved");
 
       const found = (await lookup(number)).body.results[0];
       expect(found).toMatchObject({ number, crossCount: 1 });
@@ -173,13 +168,13 @@ describe("the round trip: submit, review, catalogue, mail", () => {
 
   it("sends a rejection with its reason, and refuses one without a reason", async () => {
     const created = await submit(member, newPartProposal().body);
-    const id = created.body.submission.id;
-    const noReason = await send("post", `/api/submissions/${id}/decision`, { action: "reject" }, { cookie: moderator });
+    const id = created.body.proposal.id;
+    const noReason = await send("post", `/api/proposals/${id}/decision`, { action: "reject" }, { cookie: moderator });
     expect(noReason.status).toBe(400);
     expect(noReason.body.field).toBe("message");
     const rejected = await send(
       "post",
-      `/api/submissions/${id}/decision`,
+      `/api/proposals/${id}/decision`,
       { action: "reject", message: "6205 is too narrow for this housing." },
       { cookie: moderator },
     );
@@ -194,18 +189,18 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     expect(page.text).toContain("The moderator&#x27;s message");
     expect((await send("get", `/proposals/${id}`, undefined, { cookie: other })).status).toBe(404);
     expect(
-      (await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator })).status,
+      (await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator })).status,
     ).toBe(409);
   });
 
   it("sends a proposal back for changes; the member edits it and it is pending again", async () => {
     const { body } = newPartProposal();
-    const id = (await submit(member, body)).body.submission.id;
-    expect((await send("patch", `/api/submissions/${id}`, body, { cookie: member })).status).toBe(409);
+    const id = (await submit(member, body)).body.proposal.id;
+    expect((await send("patch", `/api/proposals/${id}`, body, { cookie: member })).status).toBe(409);
 
     const sentBack = await send(
       "post",
-      `/api/submissions/${id}/decision`,
+      `/api/proposals/${id}/decision`,
       { action: "request_changes", message: "Add the width you measured." },
       { cookie: moderator },
     );
@@ -214,38 +209,38 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     expect(mail.text).toContain("Add the width you measured.");
     expect(mail.text).toContain(`/proposals/${id}/edit`);
 
-    expect((await send("patch", `/api/submissions/${id}`, body, { cookie: other })).status).toBe(404);
+    expect((await send("patch", `/api/proposals/${id}`, body, { cookie: other })).status).toBe(404);
     const edited = await send(
       "patch",
-      `/api/submissions/${id}`,
+      `/api/proposals/${id}`,
       { ...body, measurements: [...body.measurements, { dimension: "width", value: 14.98, unit: "mm" }] },
       { cookie: member },
     );
     expect(edited.status).toBe(200);
-    const row = await Submission.findByPk(id);
+    const row = await Proposal.findByPk(id);
     expect(row).toMatchObject({ status: "pending", version: 3 });
     expect(row!.measurements).toHaveLength(3);
   });
 
   it("lets exactly one of two simultaneous decisions win", async () => {
     const { number, body } = newPartProposal();
-    const id = (await submit(member, body)).body.submission.id;
+    const id = (await submit(member, body)).body.proposal.id;
     const [a, b] = await Promise.all([
-      send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator }),
+      send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator }),
       send(
         "post",
-        `/api/submissions/${id}/decision`,
+        `/api/proposals/${id}/decision`,
         { action: "reject", message: "Duplicate of another report." },
         { cookie: admin },
       ),
     ]);
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     const events = await AuditEvent.count({
-      where: { subjectType: "submission", subjectId: String(id), action: ["submission.approve", "submission.reject"] },
+      where: { subjectType: "proposal", subjectId: String(id), action: ["proposal.approve", "proposal.reject"] },
     });
     expect(events).toBe(1);
     const winner = a.status === 200 ? "approved" : "rejected";
-    expect((await Submission.findByPk(id))!.status).toBe(winner);
+    expect((await Proposal.findByPk(id))!.status).toBe(winner);
     const crosses = await sequelize.query(
       `SELECT c.id FROM crosses c JOIN original_parts p ON p.id = c.original_part_id WHERE p.number = :number`,
       { replacements: { number } },
@@ -254,12 +249,12 @@ describe("the round trip: submit, review, catalogue, mail", () => {
   });
 
   it("does not let a moderator approve their own proposal", async () => {
-    const id = (await submit(moderator, newPartProposal().body)).body.submission.id;
-    const own = await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: moderator });
+    const id = (await submit(moderator, newPartProposal().body)).body.proposal.id;
+    const own = await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator });
     expect(own.status).toBe(403);
-    expect(
-      (await send("post", `/api/submissions/${id}/decision`, { action: "approve" }, { cookie: admin })).status,
-    ).toBe(200);
+    expect((await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: admin })).status).toBe(
+      200,
+    );
   });
 
   it("sends no decision mail to a member who turned notifications off", async () => {
@@ -267,14 +262,9 @@ describe("the round trip: submit, review, catalogue, mail", () => {
     expect((await send("patch", "/api/account", { notifyByEmail: false }, { cookie: other })).status).toBe(200);
     try {
       const { number, body } = newPartProposal();
-      const id = (await submit(other, body)).body.submission.id;
+      const id = (await submit(other, body)).body.proposal.id;
       const before = await mailCount(OTHER);
-      const decided = await send(
-        "post",
-        `/api/submissions/${id}/decision`,
-        { action: "approve" },
-        { cookie: moderator },
-      );
+      const decided = await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator });
       expect(decided.body.mailSent).toBe(false);
       await new Promise((r) => setTimeout(r, 500));
       expect(await mailCount(OTHER)).toBe(before);
@@ -288,13 +278,8 @@ describe("the round trip: submit, review, catalogue, mail", () => {
 describe("duplicates and confirmations", () => {
   it("turns a proposal that repeats an approved cross into a confirmation, once per member", async () => {
     const { body } = newPartProposal();
-    const id = (await submit(member, body)).body.submission.id;
-    const approved = await send(
-      "post",
-      `/api/submissions/${id}/decision`,
-      { action: "approve" },
-      { cookie: moderator },
-    );
+    const id = (await submit(member, body)).body.proposal.id;
+    const approved = await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator });
     const crossId = approved.body.cross.id;
     const partId = approved.body.cross.partId;
 
@@ -311,16 +296,11 @@ describe("duplicates and confirmations", () => {
 
   it("adds a repeat of another member's open proposal to it, and refuses the same member twice", async () => {
     const { body } = newPartProposal();
-    const id = (await submit(member, body)).body.submission.id;
+    const id = (await submit(member, body)).body.proposal.id;
     expect((await submit(member, body)).status).toBe(409);
     const second = await submit(other, body);
-    expect(second.body).toMatchObject({ outcome: "confirmed_pending", submissionId: id });
-    const approved = await send(
-      "post",
-      `/api/submissions/${id}/decision`,
-      { action: "approve" },
-      { cookie: moderator },
-    );
+    expect(second.body).toMatchObject({ outcome: "confirmed_pending", proposalId: id });
+    const approved = await send("post", `/api/proposals/${id}/decision`, { action: "approve" }, { cookie: moderator });
     expect(await Confirmation.count({ where: { crossId: approved.body.cross.id } })).toBe(1);
   });
 
@@ -337,17 +317,17 @@ describe("duplicates and confirmations", () => {
 
 describe("withdrawing, rate of work and the audit log", () => {
   it("lets a member withdraw their own undecided proposal, and nobody else's", async () => {
-    const id = (await submit(member, newPartProposal().body)).body.submission.id;
-    expect((await send("delete", `/api/submissions/${id}`, undefined, { cookie: other })).status).toBe(404);
-    expect((await send("delete", `/api/submissions/${id}`, undefined, { cookie: member })).status).toBe(204);
-    expect(await Submission.findByPk(id)).toBeNull();
+    const id = (await submit(member, newPartProposal().body)).body.proposal.id;
+    expect((await send("delete", `/api/proposals/${id}`, undefined, { cookie: other })).status).toBe(404);
+    expect((await send("delete", `/api/proposals/${id}`, undefined, { cookie: member })).status).toBe(204);
+    expect(await Proposal.findByPk(id)).toBeNull();
   });
 
   it("records each decision with who, when, before and after, for admins only", async () => {
-    const id = (await submit(member, newPartProposal().body)).body.submission.id;
+    const id = (await submit(member, newPartProposal().body)).body.proposal.id;
     await send(
       "post",
-      `/api/submissions/${id}/decision`,
+      `/api/proposals/${id}/decision`,
       { action: "reject", message: "Not a bearing of that series." },
       { cookie: moderator },
     );
@@ -355,7 +335,7 @@ describe("withdrawing, rate of work and the audit log", () => {
     expect((await send("get", "/api/audit")).status).toBe(401);
     const { body } = await send("get", "/api/audit?limit=50", undefined, { cookie: admin });
     const event = body.events.find(
-      (e: { action: string; subjectId: string }) => e.action === "submission.reject" && e.subjectId === String(id),
+      (e: { action: string; subjectId: string }) => e.action === "proposal.reject" && e.subjectId === String(id),
     );
     expect(event).toMatchObject({
       actor: MODERATOR,
@@ -431,7 +411,7 @@ describe("POST /api/uploads/presign and photos", () => {
     expect((await send("get", photoUrl, undefined, { cookie: moderator })).status).toBe(200);
     expect((await send("get", photoUrl)).status).toBe(404);
 
-    const detail = await send("get", `/api/submissions/${created.body.submission.id}`, undefined, {
+    const detail = await send("get", `/api/proposals/${created.body.proposal.id}`, undefined, {
       cookie: moderator,
     });
     expect(detail.body.photoList).toEqual([expect.objectContaining({ id: grant.body.photoId, url: photoUrl })]);
@@ -440,13 +420,13 @@ describe("POST /api/uploads/presign and photos", () => {
       expect.objectContaining({ dimension: "inner", nominalMm: 25, deviationMm: -0.02 }),
       expect.objectContaining({ dimension: "outer", nominalMm: 52, deviationMm: -0.006 }),
     ]);
-    expect(
-      (await send("get", `/api/submissions/${created.body.submission.id}`, undefined, { cookie: other })).status,
-    ).toBe(404);
+    expect((await send("get", `/api/proposals/${created.body.proposal.id}`, undefined, { cookie: other })).status).toBe(
+      404,
+    );
 
     await send(
       "post",
-      `/api/submissions/${created.body.submission.id}/decision`,
+      `/api/proposals/${created.body.proposal.id}/decision`,
       { action: "approve" },
       { cookie: moderator },
     );
@@ -468,14 +448,14 @@ describe("POST /api/uploads/presign and photos", () => {
       { contentType: "image/jpeg", size: 10 },
       { cookie: member },
     );
-    const photo = await SubmissionPhoto.findByPk(grant.body.photoId);
-    await sequelize.query("UPDATE submission_photos SET created_at = now() - interval '25 hours' WHERE id = :id", {
+    const photo = await ProposalPhoto.findByPk(grant.body.photoId);
+    await sequelize.query("UPDATE proposal_photos SET created_at = now() - interval '25 hours' WHERE id = :id", {
       replacements: { id: photo!.id },
     });
     expect(await sweepAbandonedPhotos()).toBeGreaterThanOrEqual(1);
-    expect(await SubmissionPhoto.findByPk(photo!.id)).toBeNull();
+    expect(await ProposalPhoto.findByPk(photo!.id)).toBeNull();
     expect(await headObject(photo!.objectKey)).toBeNull();
-    expect(await SubmissionPhoto.findByPk(kept.body.photoId)).not.toBeNull();
+    expect(await ProposalPhoto.findByPk(kept.body.photoId)).not.toBeNull();
   });
 
   it("refuses a photo that another member uploaded", async () => {
@@ -500,7 +480,7 @@ describe("POST /api/uploads/presign and photos", () => {
       );
     expect(statuses.slice(0, 60).every((s) => s === 201)).toBe(true);
     expect(statuses[60]).toBe(429);
-    await sequelize.query("DELETE FROM submission_photos WHERE user_id = :id AND submission_id IS NULL", {
+    await sequelize.query("DELETE FROM proposal_photos WHERE user_id = :id AND proposal_id IS NULL", {
       replacements: { id: user!.id },
     });
   });
@@ -521,7 +501,7 @@ describe("a new part with its machine", () => {
     });
     const decided = await send(
       "post",
-      `/api/submissions/${created.body.submission.id}/decision`,
+      `/api/proposals/${created.body.proposal.id}/decision`,
       { action: "approve" },
       { cookie: moderator },
     );
@@ -531,7 +511,7 @@ describe("a new part with its machine", () => {
   });
 });
 
-describe("POST /api/submissions against the worn part's documented sizes", () => {
+describe("POST /api/proposals against the worn part's documented sizes", () => {
   it("flags a 20 × 47 × 14 bearing proposed for a part documented as 15 × 35 × 11", async () => {
     // DIN 625-1 via BOLTS: 6204 is 20 × 47 × 14 mm; 15 × 35 × 11 mm is the size of 6202. The part itself is test data.
     const number = `TST-${randomUUID().slice(0, 8).toUpperCase()}`;
@@ -561,7 +541,7 @@ describe("POST /api/submissions against the worn part's documented sizes", () =>
     expect(flagged).toMatchObject({ level: "warning" });
     expect(flagged.message).toMatch(/15 × 35 × 11 mm/);
 
-    const review = await send("get", `/review/${response.body.submission.id}`, undefined, { cookie: moderator });
+    const review = await send("get", `/review/${response.body.proposal.id}`, undefined, { cookie: moderator });
     expect(review.status).toBe(200);
     expect(review.text).toContain("Not the same size.");
   });
@@ -593,7 +573,7 @@ describe("hourly limits under concurrency", () => {
     const email = "club.member1@understudy.test";
     const cookie = await signIn(email);
     const user = await User.findOne({ where: { email } });
-    const already = await SubmissionPhoto.count({ where: { userId: user!.id } });
+    const already = await ProposalPhoto.count({ where: { userId: user!.id } });
     const responses = await Promise.all(
       Array.from({ length: 75 }, () =>
         send("post", "/api/uploads/presign", { contentType: "image/jpeg", size: 1000 }, { cookie }),
@@ -624,18 +604,18 @@ describe("the same cross proposed at once", () => {
     // approved cross in the catalogue, the second approval counted as a confirmation.
     const { body } = newPartProposal();
     const first = await submit(member, body);
-    const [part] = await sequelize.query<{ id: number }>("SELECT id FROM submissions WHERE id = :id", {
-      replacements: { id: first.body.submission.id },
+    const [part] = await sequelize.query<{ id: number }>("SELECT id FROM proposals WHERE id = :id", {
+      replacements: { id: first.body.proposal.id },
       type: "SELECT" as never,
     });
-    const twin = await Submission.create({
-      ...(await Submission.findByPk(part.id))!.get({ plain: true }),
+    const twin = await Proposal.create({
+      ...(await Proposal.findByPk(part.id))!.get({ plain: true }),
       id: undefined as never,
       userId: (await User.findOne({ where: { email: OTHER } }))!.id,
     });
     const decide = (id: number) =>
-      send("post", `/api/submissions/${id}/decision`, { action: "approve", message: "" }, { cookie: moderator });
-    const [x, y] = await Promise.all([decide(first.body.submission.id), decide(twin.id)]);
+      send("post", `/api/proposals/${id}/decision`, { action: "approve", message: "" }, { cookie: moderator });
+    const [x, y] = await Promise.all([decide(first.body.proposal.id), decide(twin.id)]);
     expect([x.status, y.status]).toEqual([200, 200]);
     expect(x.body.cross.id).toBe(y.body.cross.id);
     const crosses = await Cross.count({ where: { id: x.body.cross.id } });

@@ -2,21 +2,21 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import { sequelize } from "@/db/sequelize";
 import { FITS, type Fit } from "@/lib/catalogue/kinds";
 import {
-  SUBMISSION_STATUSES,
+  PROPOSAL_STATUSES,
   type Measurement,
   type NewPartInput,
   type NewStandardInput,
   type ProposalCheck,
-  type SubmissionStatus,
-} from "@/lib/community/kinds";
+  type ProposalStatus,
+} from "@/lib/proposals/kinds";
 
 const id = () => ({ type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true });
 const json = () => ({ type: DataTypes.JSONB, allowNull: true });
 
-export class Submission extends Model<InferAttributes<Submission>, InferCreationAttributes<Submission>> {
+export class Proposal extends Model<InferAttributes<Proposal>, InferCreationAttributes<Proposal>> {
   declare id: CreationOptional<number>;
   declare userId: string;
-  declare status: CreationOptional<SubmissionStatus>;
+  declare status: CreationOptional<ProposalStatus>;
   declare version: CreationOptional<number>;
   declare originalPartId: number | null;
   declare newPart: NewPartInput | null;
@@ -34,11 +34,11 @@ export class Submission extends Model<InferAttributes<Submission>, InferCreation
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
-Submission.init(
+Proposal.init(
   {
     id: id(),
     userId: DataTypes.STRING(40),
-    status: { type: DataTypes.ENUM(...SUBMISSION_STATUSES), defaultValue: "pending" },
+    status: { type: DataTypes.ENUM(...PROPOSAL_STATUSES), defaultValue: "pending" },
     version: { type: DataTypes.INTEGER, defaultValue: 1 },
     originalPartId: DataTypes.INTEGER,
     newPart: json(),
@@ -56,13 +56,13 @@ Submission.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize, modelName: "Submission", tableName: "submissions" },
+  { sequelize, modelName: "Proposal", tableName: "proposals" },
 );
 
-export class SubmissionPhoto extends Model<InferAttributes<SubmissionPhoto>, InferCreationAttributes<SubmissionPhoto>> {
+export class ProposalPhoto extends Model<InferAttributes<ProposalPhoto>, InferCreationAttributes<ProposalPhoto>> {
   declare id: CreationOptional<number>;
   declare userId: string;
-  declare submissionId: number | null;
+  declare proposalId: number | null;
   declare objectKey: string;
   declare contentType: string;
   declare sizeBytes: number;
@@ -70,11 +70,11 @@ export class SubmissionPhoto extends Model<InferAttributes<SubmissionPhoto>, Inf
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
-SubmissionPhoto.init(
+ProposalPhoto.init(
   {
     id: id(),
     userId: DataTypes.STRING(40),
-    submissionId: DataTypes.INTEGER,
+    proposalId: DataTypes.INTEGER,
     objectKey: DataTypes.STRING(200),
     contentType: DataTypes.STRING(60),
     sizeBytes: DataTypes.INTEGER,
@@ -82,7 +82,7 @@ SubmissionPhoto.init(
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },
-  { sequelize, modelName: "SubmissionPhoto", tableName: "submission_photos" },
+  { sequelize, modelName: "ProposalPhoto", tableName: "proposal_photos" },
 );
 
 export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {

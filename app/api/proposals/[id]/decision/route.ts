@@ -1,9 +1,9 @@
 import { requirePermission } from "@/lib/auth/session";
-import { decide } from "@/lib/community/submissions";
+import { decide } from "@/lib/proposals/proposals";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
 import { idParam } from "@/lib/validation/ids";
-import { decisionInput } from "@/lib/validation/submissions";
+import { decisionInput } from "@/lib/validation/proposals";
 
 export const runtime = "nodejs";
 

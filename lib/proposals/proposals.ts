@@ -9,24 +9,24 @@ import {
   PartUsage,
   sequelize,
   StandardPart,
-  Submission,
-  SubmissionPhoto,
+  Proposal,
+  ProposalPhoto,
   User,
 } from "@/db";
 import { recordAudit } from "@/lib/audit/record";
 import { searchForms } from "@/lib/catalogue/normalise";
-import { checkAgainstPart, checkStandard } from "@/lib/community/checks";
-import type { Decision, NewPartInput, NewStandardInput, ProposalCheck, SubmissionStatus } from "@/lib/community/kinds";
+import { checkAgainstPart, checkStandard } from "@/lib/proposals/checks";
+import type { Decision, NewPartInput, NewStandardInput, ProposalCheck, ProposalStatus } from "@/lib/proposals/kinds";
 import { takeTurn } from "@/lib/concurrency/take-turn";
-import { checkUploadedPhotos, deleteStoredPhotos } from "@/lib/community/photos";
+import { checkUploadedPhotos, deleteStoredPhotos } from "@/lib/proposals/photos";
 import { env } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 import { sendMail, trySend } from "@/lib/mail/send";
 import { decisionMail } from "@/lib/mail/templates";
-import type { SubmissionInput } from "@/lib/validation/submissions";
+import type { ProposalInput } from "@/lib/validation/proposals";
 
 const HOUR_MS = 60 * 60 * 1000;
-const OPEN: SubmissionStatus[] = ["pending", "changes_requested"];
+const OPEN: ProposalStatus[] = ["pending", "changes_requested"];
 
 interface Actor {
   id: string;
@@ -76,7 +76,7 @@ async function withPartSizeCheck(original: ResolvedOriginal, standard: ResolvedS
   return check ? { ...standard, checks: [check, ...standard.checks] } : standard;
 }
 
-async function resolveOriginal(input: SubmissionInput["original"]): Promise<ResolvedOriginal> {
+async function resolveOriginal(input: ProposalInput["original"]): Promise<ResolvedOriginal> {
   if (input.mode === "existing") {
     const part = await OriginalPart.findByPk(input.partId!, { attributes: ["id"] });
     if (!part)
@@ -123,7 +123,7 @@ async function resolveOriginal(input: SubmissionInput["original"]): Promise<Reso
   };
 }
 
-async function resolveStandard(input: SubmissionInput["standard"]): Promise<ResolvedStandard> {
+async function resolveStandard(input: ProposalInput["standard"]): Promise<ResolvedStandard> {
   if (input.mode === "existing") {
     const standard = await StandardPart.findByPk(input.standardPartId!, { attributes: ["id"] });
     if (!standard)
@@ -158,18 +158,18 @@ async function resolveStandard(input: SubmissionInput["standard"]): Promise<Reso
 export type SubmitOutcome =
   | {
       outcome: "submitted";
-      submission: { id: number; status: SubmissionStatus };
+      proposal: { id: number; status: ProposalStatus };
       checks: ProposalCheck[];
       photosMissing: number[];
     }
   | { outcome: "confirmed"; crossId: number; partId: number; message: string }
-  | { outcome: "confirmed_pending"; submissionId: number; message: string };
+  | { outcome: "confirmed_pending"; proposalId: number; message: string };
 
 /** The open or approved record this proposal repeats, if any. */
 async function findDuplicate(
   original: ResolvedOriginal,
   standard: ResolvedStandard,
-  excludeSubmissionId: number | null,
+  excludeProposalId: number | null,
   transaction?: Transaction,
 ) {
   if (original.partId && standard.standardPartId) {
@@ -181,7 +181,7 @@ async function findDuplicate(
     if (cross) return { kind: "cross" as const, id: cross.id };
   }
   const [row] = await sequelize.query<{ id: number; user_id: string }>(
-    `SELECT id, user_id FROM submissions
+    `SELECT id, user_id FROM proposals
      WHERE status IN ('pending', 'changes_requested') AND (:exclude::int IS NULL OR id <> :exclude)
        AND ${
          original.partId
@@ -196,7 +196,7 @@ async function findDuplicate(
      ORDER BY id LIMIT 1`,
     {
       replacements: {
-        exclude: excludeSubmissionId,
+        exclude: excludeProposalId,
         partId: original.partId,
         makerId: String(original.newPart?.makerId ?? ""),
         number: original.newPart?.numberNormalized ?? "",
@@ -208,22 +208,22 @@ async function findDuplicate(
       transaction,
     },
   );
-  return row ? { kind: "submission" as const, id: row.id, userId: row.user_id } : null;
+  return row ? { kind: "proposal" as const, id: row.id, userId: row.user_id } : null;
 }
 
 async function addConfirmation(
-  target: { crossId?: number; submissionId?: number },
+  target: { crossId?: number; proposalId?: number },
   userId: string,
   note: string,
   transaction?: Transaction,
 ): Promise<boolean> {
   const rows = await sequelize.query<{ id: number }>(
-    `INSERT INTO confirmations (cross_id, submission_id, user_id, note, created_at, updated_at)
-     VALUES (:crossId, :submissionId, :userId, :note, now(), now()) ON CONFLICT DO NOTHING RETURNING id`,
+    `INSERT INTO confirmations (cross_id, proposal_id, user_id, note, created_at, updated_at)
+     VALUES (:crossId, :proposalId, :userId, :note, now(), now()) ON CONFLICT DO NOTHING RETURNING id`,
     {
       replacements: {
         crossId: target.crossId ?? null,
-        submissionId: target.submissionId ?? null,
+        proposalId: target.proposalId ?? null,
         userId,
         note: note || null,
       },
@@ -235,16 +235,16 @@ async function addConfirmation(
 }
 
 /** Within the transaction that saves a proposal: the member's proposals take turns, so the count cannot be raced. */
-async function assertSubmissionRate(userId: string, transaction: Transaction): Promise<void> {
+async function assertProposalRate(userId: string, transaction: Transaction): Promise<void> {
   await takeTurn(transaction, `proposal:${userId}`);
-  const recent = await Submission.count({
+  const recent = await Proposal.count({
     where: { userId, createdAt: { [Op.gt]: new Date(Date.now() - HOUR_MS) } },
     transaction,
   });
-  if (recent >= env.SUBMISSIONS_PER_HOUR) {
+  if (recent >= env.PROPOSALS_PER_HOUR) {
     throw new AppError(
       "rate_limited",
-      `You have sent ${env.SUBMISSIONS_PER_HOUR} proposals in the last hour. ` +
+      `You have sent ${env.PROPOSALS_PER_HOUR} proposals in the last hour. ` +
         `Thank you! Wait a while before sending more.`,
       { retryAfterSeconds: 3600 },
     );
@@ -252,7 +252,7 @@ async function assertSubmissionRate(userId: string, transaction: Transaction): P
 }
 
 /** The columns a proposal's form fills, for a new proposal and for one changed after being sent back. */
-function proposalFields(original: ResolvedOriginal, standard: ResolvedStandard, input: SubmissionInput) {
+function proposalFields(original: ResolvedOriginal, standard: ResolvedStandard, input: ProposalInput) {
   return {
     originalPartId: original.partId,
     newPart: original.newPart,
@@ -265,7 +265,7 @@ function proposalFields(original: ResolvedOriginal, standard: ResolvedStandard, 
   };
 }
 
-function snapshot(s: Submission): Record<string, unknown> {
+function snapshot(s: Proposal): Record<string, unknown> {
   return {
     status: s.status,
     version: s.version,
@@ -286,7 +286,7 @@ function snapshot(s: Submission): Record<string, unknown> {
  * proposal, becomes the member's confirmation of it instead. Photos that did not reach storage are left out and
  * listed in `photosMissing`; the text is saved regardless.
  */
-export async function createSubmission(user: Actor, input: SubmissionInput): Promise<SubmitOutcome> {
+export async function createProposal(user: Actor, input: ProposalInput): Promise<SubmitOutcome> {
   const original = await resolveOriginal(input.original);
   const standard = await withPartSizeCheck(original, await resolveStandard(input.standard));
   const photos = await checkUploadedPhotos(user.id, input.photoIds, null);
@@ -306,7 +306,7 @@ export async function createSubmission(user: Actor, input: SubmissionInput): Pro
           : "This cross is already in the catalogue and you have confirmed it before.",
       };
     }
-    if (duplicate?.kind === "submission") {
+    if (duplicate?.kind === "proposal") {
       if (duplicate.userId === user.id) {
         throw new AppError(
           "conflict",
@@ -314,31 +314,31 @@ export async function createSubmission(user: Actor, input: SubmissionInput): Pro
           { field: "original" },
         );
       }
-      const added = await addConfirmation({ submissionId: duplicate.id }, user.id, input.notes, transaction);
+      const added = await addConfirmation({ proposalId: duplicate.id }, user.id, input.notes, transaction);
       return {
         outcome: "confirmed_pending",
-        submissionId: duplicate.id,
+        proposalId: duplicate.id,
         message: added
           ? "Another member has proposed the same cross and it is waiting for " +
             "review. Your report was added to it as a confirmation."
           : "Another member has proposed the same cross, and you have already confirmed it.",
       };
     }
-    await assertSubmissionRate(user.id, transaction);
-    const created = await Submission.create(
+    await assertProposalRate(user.id, transaction);
+    const created = await Proposal.create(
       { userId: user.id, ...proposalFields(original, standard, input) },
       { transaction },
     );
     if (photos.usable.length > 0)
-      await SubmissionPhoto.update(
-        { submissionId: created.id },
+      await ProposalPhoto.update(
+        { proposalId: created.id },
         { where: { id: photos.usable, userId: user.id }, transaction },
       );
     await recordAudit(
       {
         actorId: user.id,
-        action: "submission.create",
-        subjectType: "submission",
+        action: "proposal.create",
+        subjectType: "proposal",
         subjectId: created.id,
         after: snapshot(created),
       },
@@ -346,7 +346,7 @@ export async function createSubmission(user: Actor, input: SubmissionInput): Pro
     );
     return {
       outcome: "submitted",
-      submission: { id: created.id, status: created.status },
+      proposal: { id: created.id, status: created.status },
       checks: standard.checks,
       photosMissing: photos.missing,
     };
@@ -365,8 +365,8 @@ function crossKey(original: ResolvedOriginal, standard: ResolvedStandard): strin
 }
 
 /** The submitter changes a proposal a moderator sent back; it goes back into the queue as pending. */
-export async function updateSubmission(user: Actor, id: number, input: SubmissionInput) {
-  const existing = await Submission.findByPk(id);
+export async function updateProposal(user: Actor, id: number, input: ProposalInput) {
+  const existing = await Proposal.findByPk(id);
   if (!existing || existing.userId !== user.id) throw new AppError("not_found", "You have no proposal with that id.");
   if (existing.status !== "changes_requested") {
     throw new AppError(
@@ -390,7 +390,7 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
 
   const updated = await sequelize.transaction(async (transaction) => {
     const before = snapshot(existing);
-    const [count, rows] = await Submission.update(
+    const [count, rows] = await Proposal.update(
       {
         ...proposalFields(original, standard, input),
         status: "pending",
@@ -401,21 +401,18 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
     );
     if (count === 0)
       throw new AppError("conflict", "This proposal changed while you were editing it. Reload the page and try again.");
-    const removed = await SubmissionPhoto.findAll({
-      where: { submissionId: id, id: { [Op.notIn]: photos.usable.length ? photos.usable : [0] } },
+    const removed = await ProposalPhoto.findAll({
+      where: { proposalId: id, id: { [Op.notIn]: photos.usable.length ? photos.usable : [0] } },
       transaction,
     });
-    await SubmissionPhoto.destroy({ where: { id: removed.map((p) => p.id) }, transaction });
+    await ProposalPhoto.destroy({ where: { id: removed.map((p) => p.id) }, transaction });
     if (photos.usable.length > 0)
-      await SubmissionPhoto.update(
-        { submissionId: id },
-        { where: { id: photos.usable, userId: user.id }, transaction },
-      );
+      await ProposalPhoto.update({ proposalId: id }, { where: { id: photos.usable, userId: user.id }, transaction });
     await recordAudit(
       {
         actorId: user.id,
-        action: "submission.edit",
-        subjectType: "submission",
+        action: "proposal.edit",
+        subjectType: "proposal",
         subjectId: id,
         before,
         after: snapshot(rows[0]),
@@ -427,25 +424,25 @@ export async function updateSubmission(user: Actor, id: number, input: Submissio
   await deleteStoredPhotos(updated.removedKeys);
   return {
     outcome: "submitted" as const,
-    submission: { id, status: updated.row.status },
+    proposal: { id, status: updated.row.status },
     checks: standard.checks,
     photosMissing: photos.missing,
   };
 }
 
 /** A member withdraws a proposal of theirs that has not been decided. */
-export async function deleteSubmission(user: Actor, id: number): Promise<void> {
+export async function deleteProposal(user: Actor, id: number): Promise<void> {
   const keys = await sequelize.transaction(async (transaction) => {
-    const existing = await Submission.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+    const existing = await Proposal.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!existing || existing.userId !== user.id) throw new AppError("not_found", "You have no proposal with that id.");
     if (!OPEN.includes(existing.status))
       throw new AppError("conflict", "A decided proposal stays on record and cannot be withdrawn.");
-    const photos = await SubmissionPhoto.findAll({ where: { submissionId: id }, transaction });
+    const photos = await ProposalPhoto.findAll({ where: { proposalId: id }, transaction });
     await recordAudit(
       {
         actorId: user.id,
-        action: "submission.withdraw",
-        subjectType: "submission",
+        action: "proposal.withdraw",
+        subjectType: "proposal",
         subjectId: id,
         before: snapshot(existing),
       },
@@ -457,14 +454,14 @@ export async function deleteSubmission(user: Actor, id: number): Promise<void> {
   await deleteStoredPhotos(keys);
 }
 
-const STATUS_FOR: Record<Decision, SubmissionStatus> = {
+const STATUS_FOR: Record<Decision, ProposalStatus> = {
   approve: "approved",
   reject: "rejected",
   request_changes: "changes_requested",
 };
 
 async function numberAndStandard(
-  s: Submission,
+  s: Proposal,
   transaction?: Transaction,
 ): Promise<{ partNumber: string; standard: string }> {
   const part = s.originalPartId
@@ -480,7 +477,7 @@ async function numberAndStandard(
 }
 
 /** Puts an approved proposal into the catalogue: the part and standard part if new, and the approved cross. */
-async function landInCatalogue(s: Submission, transaction: Transaction): Promise<{ partId: number; crossId: number }> {
+async function landInCatalogue(s: Proposal, transaction: Transaction): Promise<{ partId: number; crossId: number }> {
   // Two approvals of the same cross take turns: the second finds the part, standard part and cross the first made.
   // The database's one-approved-cross rule (migration 0006) stands behind this.
   await takeTurn(
@@ -555,12 +552,12 @@ async function landInCatalogue(s: Submission, transaction: Transaction): Promise
   });
   // Members who confirmed the proposal now confirm the cross; one who had already confirmed it keeps the older one.
   await sequelize.query(
-    `UPDATE confirmations c SET cross_id = :crossId WHERE c.submission_id = :id
+    `UPDATE confirmations c SET cross_id = :crossId WHERE c.proposal_id = :id
        AND NOT EXISTS (SELECT 1 FROM confirmations o WHERE o.cross_id = :crossId AND o.user_id = c.user_id)`,
     { replacements: { crossId: cross.id, id: s.id }, transaction },
   );
   if (!created) await addConfirmation({ crossId: cross.id }, s.userId, "", transaction);
-  await Submission.update(
+  await Proposal.update(
     { originalPartId: partId, standardPartId: standardId, crossId: cross.id },
     { where: { id: s.id }, transaction },
   );
@@ -576,7 +573,7 @@ export async function decide(
   id: number,
   decision: { action: Decision; message: string; version?: number },
 ) {
-  const current = await Submission.findByPk(id);
+  const current = await Proposal.findByPk(id);
   if (!current) throw new AppError("not_found", "There is no proposal with that id.");
   if (current.userId === moderator.id)
     throw new AppError("forbidden", "Another moderator must decide your own proposals.");
@@ -586,7 +583,7 @@ export async function decide(
 
   const result = await sequelize.transaction(async (transaction) => {
     const [rows] = (await sequelize.query(
-      `UPDATE submissions SET status = :status, version = version + 1, moderator_message = :message, decided_by =
+      `UPDATE proposals SET status = :status, version = version + 1, moderator_message = :message, decided_by =
         :moderator, decided_at = now(), updated_at = now()
        WHERE id = :id AND status = 'pending' AND version = :version RETURNING id`,
       {
@@ -602,23 +599,23 @@ export async function decide(
     )) as [Array<{ id: number }>, unknown];
     if (rows.length === 0) return null;
     const landed = decision.action === "approve" ? await landInCatalogue(current, transaction) : null;
-    const after = await Submission.findByPk(id, { transaction });
+    const after = await Proposal.findByPk(id, { transaction });
     await recordAudit(
       {
         actorId: moderator.id,
-        action: `submission.${decision.action}`,
-        subjectType: "submission",
+        action: `proposal.${decision.action}`,
+        subjectType: "proposal",
         subjectId: id,
         before: snapshot(current),
         after: snapshot(after!),
       },
       transaction,
     );
-    return { submission: after!, landed };
+    return { proposal: after!, landed };
   });
 
   if (!result) {
-    const now = await Submission.findByPk(id);
+    const now = await Proposal.findByPk(id);
     if (!now) throw new AppError("not_found", "There is no proposal with that id.");
     if (now.status !== "pending")
       throw new AppError(
@@ -628,10 +625,10 @@ export async function decide(
     throw new AppError("conflict", "This proposal changed since you opened it. Reload it and decide again.");
   }
 
-  const submitter = await User.findByPk(result.submission.userId);
+  const submitter = await User.findByPk(result.proposal.userId);
   let mailSent = false;
   if (submitter?.notifyByEmail) {
-    const names = await numberAndStandard(result.submission);
+    const names = await numberAndStandard(result.proposal);
     // Approved: straight to the part page, where the cross now shows. Sent back: to the form. Rejected: the proposal
     // itself.
     const url =
@@ -652,7 +649,7 @@ export async function decide(
     );
   }
   return {
-    submission: { id, status: result.submission.status, version: result.submission.version },
+    proposal: { id, status: result.proposal.status, version: result.proposal.version },
     cross: result.landed ? { id: result.landed.crossId, partId: result.landed.partId } : null,
     mailSent,
   };

@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { STANDARD_KINDS, type StandardKind } from "@/lib/catalogue/kinds";
-import { checkStandard } from "@/lib/community/checks";
-import { MEASURED_DIMENSIONS, type Measurement } from "@/lib/community/kinds";
-import type { SubmissionFormValues } from "@/lib/validation/submissions";
+import { checkStandard } from "@/lib/proposals/checks";
+import { MEASURED_DIMENSIONS, type Measurement } from "@/lib/proposals/kinds";
+import type { ProposalFormValues } from "@/lib/validation/proposals";
 
 /** What a calculator hands the proposal form: the standard part it worked out and what was measured. */
 export interface ProposalPrefill {
@@ -43,7 +43,7 @@ export function proposalHref(prefill: ProposalPrefill): string {
  */
 export function readProposalPrefill(
   params: Record<string, string | string[] | undefined>,
-): Pick<SubmissionFormValues, "standard" | "measurements"> | null {
+): Pick<ProposalFormValues, "standard" | "measurements"> | null {
   const q = prefillQuery.parse({ kind: one(params.kind), designation: one(params.designation), m: one(params.m) });
   if (!q.kind || !q.designation) return null;
   const checked = checkStandard({ kind: q.kind, designation: q.designation });

@@ -6,10 +6,10 @@ import {
   MEASURED_DIMENSIONS,
   PHOTO_MAX_BYTES,
   PHOTO_TYPES,
-  PHOTOS_PER_SUBMISSION,
-} from "@/lib/community/kinds";
+  PHOTOS_PER_PROPOSAL,
+} from "@/lib/proposals/kinds";
 
-// One schema for the proposal form in the browser and for POST/PATCH /api/submissions on the server.
+// One schema for the proposal form in the browser and for POST/PATCH /api/proposals on the server.
 
 const mm = (what: string) =>
   z
@@ -88,7 +88,7 @@ export const measurementSchema = z.object({
   unit: z.enum(["mm", "in"], { error: "The unit is mm or in." }),
 });
 
-export const submissionInput = z.object({
+export const proposalInput = z.object({
   original,
   standard,
   fit: z.enum(FITS, { error: "Choose how it fitted." }),
@@ -96,11 +96,11 @@ export const submissionInput = z.object({
   notes: z.string().trim().max(2000, "Notes are at most 2000 characters.").default(""),
   photoIds: z
     .array(positiveId("the photo"))
-    .max(PHOTOS_PER_SUBMISSION, `At most ${PHOTOS_PER_SUBMISSION} photos.`)
+    .max(PHOTOS_PER_PROPOSAL, `At most ${PHOTOS_PER_PROPOSAL} photos.`)
     .default([]),
 });
-export type SubmissionInput = z.output<typeof submissionInput>;
-export type SubmissionFormValues = z.input<typeof submissionInput>;
+export type ProposalInput = z.output<typeof proposalInput>;
+export type ProposalFormValues = z.input<typeof proposalInput>;
 
 export const decisionInput = z
   .object({
@@ -132,7 +132,7 @@ export const presignInput = z.object({
   fileName: z.string().trim().max(200, "A file name is at most 200 characters.").optional(),
 });
 
-export const submissionsQuery = z.object({
+export const proposalsQuery = z.object({
   mine: z.enum(["1", "true"]).optional(),
   status: z.enum(["pending", "changes_requested", "approved", "rejected"]).optional(),
   category: z.enum(PART_CATEGORIES).optional(),

@@ -20,7 +20,7 @@ export async function sendProposalDigest(): Promise<DigestResult> {
     const items = await sequelize.query<{ id: number; part_number: string; standard: string; created_at: Date }>(
       `SELECT s.id, COALESCE(p.number, s.new_part->>'number') AS part_number, COALESCE(sp.designation,
         s.new_standard->>'designation') AS standard, s.created_at
-       FROM submissions s LEFT JOIN original_parts p ON p.id = s.original_part_id LEFT JOIN standard_parts sp ON sp.id
+       FROM proposals s LEFT JOIN original_parts p ON p.id = s.original_part_id LEFT JOIN standard_parts sp ON sp.id
          = s.standard_part_id
        WHERE s.status = 'pending' AND s.digest_sent_at IS NULL
        ORDER BY s.created_at, s.id
@@ -29,7 +29,7 @@ export async function sendProposalDigest(): Promise<DigestResult> {
     );
     if (items.length === 0) return { proposals: 0, recipients: 0, sent: 0 };
     const [{ waiting }] = await sequelize.query<{ waiting: string }>(
-      "SELECT count(*) AS waiting FROM submissions WHERE status = 'pending'",
+      "SELECT count(*) AS waiting FROM proposals WHERE status = 'pending'",
       { type: QueryTypes.SELECT, transaction },
     );
     const reviewers = await sequelize.query<{ email: string }>(
@@ -48,7 +48,7 @@ export async function sendProposalDigest(): Promise<DigestResult> {
       if (await trySend(() => sendMail(digestMail(r.email, list, `${env.APP_URL}/review`, Number(waiting))))) sent += 1;
     }
     if (sent > 0 || reviewers.length === 0) {
-      await sequelize.query("UPDATE submissions SET digest_sent_at = now() WHERE id IN (:ids)", {
+      await sequelize.query("UPDATE proposals SET digest_sent_at = now() WHERE id IN (:ids)", {
         replacements: { ids: items.map((i) => i.id) },
         transaction,
       });
