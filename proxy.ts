@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { SESSION_COOKIE } from "@/lib/auth/cookie";
+import { SESSION_COOKIE, SESSION_COOKIE_ATTRIBUTES, SESSION_DAYS } from "@/lib/auth/cookie";
+import { env, isNextDev } from "@/lib/env";
 import { contentSecurityPolicy, photoStoreOrigin } from "@/lib/http/csp";
 import { isOwnOrigin, MAX_BODY_BYTES } from "@/lib/http/origin";
 
@@ -39,7 +40,7 @@ export function proxy(request: NextRequest) {
         { status: 413 },
       );
     }
-    if (!isOwnOrigin(request.headers, request.nextUrl, process.env.APP_URL)) {
+    if (!isOwnOrigin(request.headers, request.nextUrl, env.APP_URL)) {
       return NextResponse.json(
         {
           error: "forbidden_origin",
@@ -54,8 +55,8 @@ export function proxy(request: NextRequest) {
   // A fresh nonce for every page: Next reads it from the request's policy and puts it on its own scripts.
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const policy = contentSecurityPolicy(nonce, {
-    development: process.env.NODE_ENV === "development",
-    photoStore: photoStoreOrigin(process.env.S3_ENDPOINT),
+    development: isNextDev,
+    photoStore: photoStoreOrigin(env.S3_ENDPOINT),
   });
   const requestHeaders = new Headers(request.headers);
   requestHeaders.set("content-security-policy", policy);
@@ -64,11 +65,8 @@ export function proxy(request: NextRequest) {
   const sessionId = request.cookies.get(SESSION_COOKIE)?.value;
   if (request.method === "GET" && sessionId) {
     response.cookies.set(SESSION_COOKIE, sessionId, {
-      path: "/",
-      maxAge: 60 * 60 * 24 * 30,
-      sameSite: "lax",
-      httpOnly: true,
-      secure: process.env.APP_ENV === "production",
+      ...SESSION_COOKIE_ATTRIBUTES,
+      maxAge: 60 * 60 * 24 * SESSION_DAYS,
     });
   }
   return response;

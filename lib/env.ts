@@ -6,6 +6,8 @@ const flag = z.enum(["true", "false", "1", "0", ""]).transform((value) => value 
 
 const schema = z.object({
   APP_ENV: z.enum(["development", "demo", "test", "production"]).default("development"),
+  // Set by Next itself: `next dev` runs in development.
+  NODE_ENV: z.enum(["development", "production", "test"]).default("production"),
   APP_URL: z.url().default("http://localhost:3000"),
   PORT: z.coerce.number().int().min(1).max(65535).default(3000),
 
@@ -70,3 +72,6 @@ export const env: Env = parseEnv(process.env);
 
 /** Demo data, the captured-mail pages and other local conveniences exist everywhere but production. */
 export const isProduction = env.APP_ENV === "production";
+
+/** `next dev`: the page script needs eval for its fast refresh. */
+export const isNextDev = env.NODE_ENV === "development";

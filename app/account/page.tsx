@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { signOutAction } from "@/app/actions";
 import { NotificationsToggle } from "@/components/account/notifications-toggle";
 import { Button } from "@/components/ui/button";
-import { User } from "@/db";
+import { notificationsOf } from "@/lib/account/notifications";
 import { hasPermission } from "@/lib/auth/roles";
 import { requirePagePermission } from "@/lib/auth/session";
 
@@ -16,7 +16,7 @@ const roleText = {
 
 export default async function AccountPage() {
   const user = await requirePagePermission("account:use", "/account");
-  const row = await User.findByPk(user.id, { attributes: ["notifyByEmail"] });
+  const notifyByEmail = await notificationsOf(user.id);
   return (
     <div className="max-w-2xl space-y-6">
       <h1 className="text-3xl">Your account</h1>
@@ -35,10 +35,7 @@ export default async function AccountPage() {
         <div className="grid gap-1 p-4 sm:grid-cols-[10rem_1fr]">
           <dt className="font-bold">Notifications</dt>
           <dd>
-            <NotificationsToggle
-              initial={row?.notifyByEmail ?? true}
-              reviewer={hasPermission(user.role, "proposals:review")}
-            />
+            <NotificationsToggle initial={notifyByEmail} reviewer={hasPermission(user.role, "proposals:review")} />
           </dd>
         </div>
       </dl>

@@ -2,9 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ProposalForm } from "@/components/proposals/proposal-form";
 import { Cautions } from "@/components/safety/cautions";
-import { OriginalPart, Maker } from "@/db";
 import { requirePagePermission } from "@/lib/auth/session";
-import { loadFormChoices } from "@/lib/proposals/form-choices";
+import { loadFormChoices, pickedPartFor } from "@/lib/proposals/form-choices";
 import { readProposalPrefill } from "@/lib/proposals/prefill";
 
 export const metadata: Metadata = { title: "Propose a cross" };
@@ -20,10 +19,7 @@ export default async function ProposePage({
   const back = new URLSearchParams(Object.entries(params).flatMap(([k, v]) => (typeof v === "string" ? [[k, v]] : [])));
   await requirePagePermission("proposals:create", `/propose${back.size > 0 ? `?${back}` : ""}`);
   const prefill = readProposalPrefill(params);
-  const choices = await loadFormChoices();
-  const partId = Number(partParam);
-  const part = Number.isInteger(partId) && partId > 0 && partId < 2 ** 31 ? await OriginalPart.findByPk(partId) : null;
-  const maker = part ? await Maker.findByPk(part.makerId) : null;
+  const [choices, part] = await Promise.all([loadFormChoices(), pickedPartFor(partParam)]);
 
   return (
     <div className="grid gap-8 lg:grid-cols-[1fr_20rem]">
@@ -48,22 +44,7 @@ export default async function ProposePage({
             notes: "",
             photoIds: [],
           }}
-          pickedPart={
-            part && maker
-              ? {
-                  id: part.id,
-                  number: part.number,
-                  maker: maker.name,
-                  description: part.description,
-                  dims: {
-                    innerMm: part.innerMm,
-                    outerMm: part.outerMm,
-                    widthMm: part.widthMm,
-                    lengthMm: part.lengthMm,
-                  },
-                }
-              : null
-          }
+          pickedPart={part}
           pickedStandard={null}
           photos={[]}
         />

@@ -5,10 +5,11 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
-import { Maker } from "@/db";
 import { requirePagePermission } from "@/lib/auth/session";
-import { CATEGORY_NAMES, PART_CATEGORIES, type PartCategory } from "@/lib/catalogue/kinds";
+import { CATEGORY_NAMES, PART_CATEGORIES } from "@/lib/catalogue/kinds";
+import { makerChoices } from "@/lib/catalogue/browse";
 import { listQueue } from "@/lib/proposals/views";
+import { queuePageQuery } from "@/lib/validation/proposals";
 
 export const metadata: Metadata = { title: "Review queue" };
 
@@ -27,14 +28,9 @@ export default async function ReviewQueuePage({
 }) {
   await requirePagePermission("proposals:review", "/review");
   const params = await searchParams;
-  const category = (PART_CATEGORIES as readonly string[]).includes(params.category ?? "")
-    ? (params.category as PartCategory)
-    : undefined;
-  const makerId = Number(params.maker) > 0 && Number(params.maker) < 2 ** 31 ? Number(params.maker) : undefined;
-  const q = params.q?.trim().slice(0, 80) || undefined;
-  const page = Math.min(Math.max(Math.floor(Number(params.page)) || 1, 1), 10_000);
+  const { category, maker: makerId, q, page } = queuePageQuery.parse(params);
   const [makers, queue] = await Promise.all([
-    Maker.findAll({ attributes: ["id", "name"], order: [["name", "ASC"]] }),
+    makerChoices(),
     listQueue({ category, makerId, q, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
   ]);
   const pages = Math.max(1, Math.ceil(queue.total / PAGE_SIZE));

@@ -1,15 +1,14 @@
 import { Lucia, TimeSpan } from "lucia";
 import { sequelizeAdapter } from "@/lib/auth/adapter";
-import { SESSION_COOKIE } from "@/lib/auth/cookie";
+import { SESSION_COOKIE, SESSION_COOKIE_ATTRIBUTES, SESSION_DAYS } from "@/lib/auth/cookie";
 import type { Role } from "@/lib/auth/roles";
-import { isProduction } from "@/lib/env";
 
 export const lucia = new Lucia(sequelizeAdapter, {
-  sessionExpiresIn: new TimeSpan(30, "d"),
+  sessionExpiresIn: new TimeSpan(SESSION_DAYS, "d"),
   sessionCookie: {
     name: SESSION_COOKIE,
     expires: true,
-    attributes: { secure: isProduction, sameSite: "lax" },
+    attributes: { secure: SESSION_COOKIE_ATTRIBUTES.secure, sameSite: SESSION_COOKIE_ATTRIBUTES.sameSite },
   },
   getUserAttributes: (attributes) => ({
     email: attributes.email,

@@ -62,6 +62,18 @@ export function whyNotCsvText(bytes: Uint8Array): string | null {
   return null;
 }
 
+/** An uploaded file taken in: the target is the one asked for, or the widest the role allows; its dry run is next. */
+export async function startImport(actor: Actor, file: File, fields: { target?: ImportTarget; mappingId?: number }) {
+  const target = fields.target ?? (hasPermission(actor.role, "imports:commit") ? "catalogue" : "review_queue");
+  const created = await createImport(
+    actor,
+    { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) },
+    target,
+    fields.mappingId,
+  );
+  return created.id;
+}
+
 export async function createImport(
   actor: Actor,
   file: { name: string; bytes: Uint8Array },

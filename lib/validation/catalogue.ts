@@ -17,8 +17,6 @@ export const lookupQuery = z.object({
     .default(10),
 });
 
-export const partIdParam = z.object({ id: idFromText("part") });
-
 export const standardPartsQuery = z.object({
   q: z
     .string({ error: "Type a designation." })

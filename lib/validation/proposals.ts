@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { FITS, PART_CATEGORIES, STANDARD_KINDS } from "@/lib/catalogue/kinds";
-import { positiveId } from "@/lib/validation/ids";
+import { idFromText, positiveId } from "@/lib/validation/ids";
 import {
   DECISIONS,
   MEASURED_DIMENSIONS,
@@ -136,12 +136,7 @@ export const proposalsQuery = z.object({
   mine: z.enum(["1", "true"]).optional(),
   status: z.enum(["pending", "changes_requested", "approved", "rejected"]).optional(),
   category: z.enum(PART_CATEGORIES).optional(),
-  maker: z.coerce
-    .number({ error: "maker is a maker's id." })
-    .int("maker is a maker's id.")
-    .positive("maker is a maker's id.")
-    .max(2_147_483_647, "No maker has that id.")
-    .optional(),
+  maker: idFromText("maker").optional(),
   q: z.string().trim().max(80, "q is at most 80 characters.").optional(),
   limit: z.coerce
     .number({ error: "limit must be a number." })
@@ -155,6 +150,20 @@ export const proposalsQuery = z.object({
     .min(0, "offset is at least 0.")
     .max(1_000_000, "offset is at most 1000000.")
     .default(0),
+});
+
+/** The review queue page's filters, from its address; a value that cannot be read is left out, not an error. */
+export const queuePageQuery = z.object({
+  category: z.enum(PART_CATEGORIES).optional().catch(undefined),
+  maker: idFromText("maker").optional().catch(undefined),
+  q: z
+    .string()
+    .trim()
+    .max(80)
+    .optional()
+    .catch(undefined)
+    .transform((v) => v || undefined),
+  page: z.coerce.number().int().min(1).max(10_000).catch(1).default(1),
 });
 
 export const notificationsInput = z.object({

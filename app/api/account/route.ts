@@ -1,5 +1,4 @@
-import { User } from "@/db";
-import { recordAudit } from "@/lib/audit/record";
+import { setNotifications } from "@/lib/account/notifications";
 import { requirePermission } from "@/lib/auth/session";
 import { handle, readJson } from "@/lib/http/handle";
 import { parseWith } from "@/lib/validation/parse";
@@ -11,13 +10,5 @@ export const runtime = "nodejs";
 export const PATCH = handle(async (request) => {
   const user = await requirePermission("account:use");
   const { notifyByEmail } = parseWith(notificationsInput, await readJson(request));
-  await User.update({ notifyByEmail }, { where: { id: user.id } });
-  await recordAudit({
-    actorId: user.id,
-    action: "account.notifications",
-    subjectType: "user",
-    subjectId: user.id,
-    after: { notifyByEmail },
-  });
-  return Response.json({ notifyByEmail });
+  return Response.json(await setNotifications(user.id, notifyByEmail));
 });
