@@ -1,30 +1,36 @@
 "use client";
 
 import { useState } from "react";
-import { sendJson } from "@/lib/http/post-json";
+import { useApiForm } from "@/lib/hooks/use-api-form";
+import { notificationsInput } from "@/lib/validation/proposals";
 
 /** Whether Understudy e-mails the member about their proposals (and reviewers their summary); saved at once. */
 export function NotificationsToggle({ initial, reviewer }: { initial: boolean; reviewer: boolean }) {
-  const [on, setOn] = useState(initial);
-  const [state, setState] = useState<"idle" | "saving" | "saved" | "failed">("idle");
+  const [saved, setSaved] = useState(false);
+  const { form, onSubmit, formError, pending } = useApiForm({
+    schema: notificationsInput,
+    endpoint: "/api/account",
+    method: "PATCH",
+    defaultValues: { notifyByEmail: initial },
+    onSuccess: () => setSaved(true),
+    onError: () => {
+      form.setValue("notifyByEmail", !form.getValues("notifyByEmail"));
+      return false;
+    },
+  });
+  const field = form.register("notifyByEmail");
   return (
-    <div className="space-y-1">
+    <form className="space-y-1" onSubmit={onSubmit} noValidate>
       <label className="flex cursor-pointer items-start gap-3">
         <input
           type="checkbox"
-          checked={on}
-          disabled={state === "saving"}
+          disabled={pending}
           className="mt-1 h-5 w-5 accent-brass"
+          {...field}
           onChange={async (e) => {
-            const next = e.target.checked;
-            setOn(next);
-            setState("saving");
-            const result = await sendJson("PATCH", "/api/account", { notifyByEmail: next });
-            if (result.ok) setState("saved");
-            else {
-              setOn(!next);
-              setState("failed");
-            }
+            setSaved(false);
+            await field.onChange(e);
+            await onSubmit();
           }}
         />
         <span>
@@ -37,14 +43,8 @@ export function NotificationsToggle({ initial, reviewer }: { initial: boolean; r
         </span>
       </label>
       <p className="text-sm text-ink-soft" role="status">
-        {state === "saving"
-          ? "Saving…"
-          : state === "saved"
-            ? "Saved."
-            : state === "failed"
-              ? "Not saved: try again."
-              : ""}
+        {pending ? "Saving…" : formError ? `Not saved: ${formError}` : saved ? "Saved." : ""}
       </p>
-    </div>
+    </form>
   );
 }

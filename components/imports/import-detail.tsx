@@ -3,27 +3,15 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import useSWR from "swr";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import {
-  IMPORT_FIELDS,
-  STATUS_WORDS,
-  TARGET_WORDS,
-  type ImportCounts,
-  type ImportMappingValue,
-} from "@/lib/imports/kinds";
+import { IMPORT_FIELDS, STATUS_WORDS, TARGET_WORDS, type ImportCounts } from "@/lib/imports/kinds";
 import type { ImportView } from "@/lib/imports/imports";
-import { sendJson } from "@/lib/http/post-json";
-
-const BUSY = ["uploaded", "parsing", "committing"];
-
-async function fetchImport(url: string): Promise<ImportView> {
-  const response = await fetch(url);
-  if (!response.ok)
-    throw new Error((await response.json().catch(() => ({}))).message ?? "The import could not be loaded.");
-  return response.json();
-}
+import { Field } from "@/components/ui/field";
+import { useApiAction } from "@/lib/hooks/use-api-action";
+import { useApiForm } from "@/lib/hooks/use-api-form";
+import { useImport, useImportRows } from "@/lib/hooks/use-import";
+import { mappingBody, savedMappingBody } from "@/lib/validation/imports";
 
 function Progress({ view }: { view: ImportView }) {
   const p = view.progress;
@@ -112,11 +100,27 @@ function NewNames({ title, names = [], total }: { title: string; names?: string[
   );
 }
 
+const columnOrNull = (value: unknown) => (value ? String(value) : null);
+
+/** The columns of the file each field is read from: correct them and run the dry run again, or save them by name. */
 function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => void }) {
-  const [mapping, setMapping] = useState<ImportMappingValue>(view.mapping);
-  const [name, setName] = useState("");
   const [message, setMessage] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const rerun = useApiForm({
+    schema: mappingBody,
+    endpoint: `/api/imports/${view.id}`,
+    method: "PATCH",
+    defaultValues: { mapping: view.mapping as Record<string, string | null> },
+    onSuccess: onSaved,
+  });
+  const save = useApiForm({
+    schema: savedMappingBody,
+    endpoint: "/api/import-mappings",
+    toBody: (v) => ({ name: v.name, mapping: rerun.form.getValues("mapping") }),
+    defaultValues: { name: "", mapping: {} },
+    onSuccess: (data: { name: string }) =>
+      setMessage(`Saved as “${data.name}”; choose it when you import the next file from the same source.`),
+  });
+  const mapping = rerun.form.watch("mapping");
   return (
     <section aria-labelledby="mapping-heading" className="space-y-3 rounded-lg border border-rule bg-ground-raised p-4">
       <h2 id="mapping-heading" className="text-xl">
@@ -126,74 +130,52 @@ function MappingEditor({ view, onSaved }: { view: ImportView; onSaved: () => voi
         Each field of the catalogue and the column of your file it is read from. Fields marked * are needed. Change any
         that are wrong and run the dry run again.
       </p>
-      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-        {IMPORT_FIELDS.map((f) => (
-          <div key={f.key} className="space-y-1">
-            <label htmlFor={`map-${f.key}`} className="block text-sm font-bold">
-              {f.label}
-              {f.required ? " *" : ""}
-            </label>
-            <select
-              id={`map-${f.key}`}
-              value={mapping[f.key] ?? ""}
-              onChange={(e) => setMapping({ ...mapping, [f.key]: e.target.value || null })}
-              className={
-                `block min-h-11 w-full rounded-md border-2 bg-ground px-2 ` +
-                `${f.required && !mapping[f.key] ? "border-caution" : "border-rule-strong"}`
-              }
-            >
-              <option value="">(not in this file)</option>
-              {view.headers.filter(Boolean).map((h) => (
-                <option key={h} value={h}>
-                  {h}
-                </option>
-              ))}
-            </select>
-          </div>
-        ))}
-      </div>
-      <div className="flex flex-wrap items-end gap-3">
-        <Button
-          type="button"
-          variant="secondary"
-          pending={busy}
-          onClick={async () => {
-            setBusy(true);
-            const result = await sendJson("PATCH", `/api/imports/${view.id}`, { mapping });
-            setBusy(false);
-            if (result.ok) onSaved();
-            else setMessage(result.error.message);
-          }}
-        >
+      <form onSubmit={rerun.onSubmit} noValidate className="space-y-3">
+        {rerun.formError && (
+          <Notice tone="caution" role="alert">
+            {rerun.formError}
+          </Notice>
+        )}
+        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+          {IMPORT_FIELDS.map((f) => (
+            <div key={f.key} className="space-y-1">
+              <label htmlFor={`map-${f.key}`} className="block text-sm font-bold">
+                {f.label}
+                {f.required ? " *" : ""}
+              </label>
+              <select
+                id={`map-${f.key}`}
+                className={`block min-h-11 w-full rounded-md border-2 bg-ground px-2 ${
+                  f.required && !mapping[f.key] ? "border-caution" : "border-rule-strong"
+                }`}
+                {...rerun.form.register(`mapping.${f.key}`, { setValueAs: columnOrNull })}
+              >
+                <option value="">(not in this file)</option>
+                {view.headers.filter(Boolean).map((h) => (
+                  <option key={h} value={h}>
+                    {h}
+                  </option>
+                ))}
+              </select>
+            </div>
+          ))}
+        </div>
+        <Button type="submit" variant="secondary" pending={rerun.pending}>
           Run the dry run again
         </Button>
-        <div className="space-y-1">
-          <label htmlFor="mapping-name" className="block text-sm font-bold">
-            Save this mapping as
-          </label>
-          <input
-            id="mapping-name"
-            value={name}
-            onChange={(e) => setName(e.target.value)}
-            placeholder="e.g. club list 1962"
-            className="min-h-11 rounded-md border-2 border-rule-strong bg-ground px-2"
-          />
-        </div>
-        <Button
-          type="button"
-          variant="secondary"
-          onClick={async () => {
-            const result = await sendJson<{ name: string }>("POST", "/api/import-mappings", { name, mapping });
-            setMessage(
-              result.ok
-                ? `Saved as “${result.data.name}”; choose it when you import the next file from the same source.`
-                : result.error.message,
-            );
-          }}
-        >
+      </form>
+      <form onSubmit={save.onSubmit} noValidate className="flex flex-wrap items-start gap-3">
+        <Field
+          id="mapping-name"
+          label="Save this mapping as"
+          placeholder="e.g. club list 1962"
+          error={save.form.formState.errors.name?.message ?? save.formError ?? undefined}
+          {...save.form.register("name")}
+        />
+        <Button type="submit" variant="secondary" pending={save.pending} className="mt-8">
           Save
         </Button>
-      </div>
+      </form>
       {message && <p role="status">{message}</p>}
     </section>
   );
@@ -210,14 +192,7 @@ const TABLE_WORDS: Record<string, string> = {
 
 /** What a committed import wrote, by file line, with links to what can be opened. */
 function WrittenRows({ id }: { id: number }) {
-  const { data } = useSWR(
-    `/api/imports/${id}/rows`,
-    async (url: string) =>
-      (await fetch(url)).json() as Promise<{
-        changes: Array<{ line: number; table: string; recordId: number; action: string }>;
-        total: number;
-      }>,
-  );
+  const data = useImportRows(id);
   if (!data || data.total === 0) return null;
   return (
     <details className="rounded-lg border border-rule bg-ground-raised p-4">
@@ -242,15 +217,11 @@ function WrittenRows({ id }: { id: number }) {
 
 /** One import: progress while the server works, then the dry run to check, commit, and roll back. */
 export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmin: boolean }) {
-  const { data, mutate } = useSWR(`/api/imports/${initial.id}`, fetchImport, {
-    fallbackData: initial,
-    refreshInterval: (latest) => (latest && BUSY.includes(latest.status) ? 700 : 0),
-  });
-  const view = data ?? initial;
+  const { view, busy: busyOnServer, mutate } = useImport(initial);
+  const action = useApiAction();
   const router = useRouter();
-  const [error, setError] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
-  const busyOnServer = BUSY.includes(view.status);
+  const error = action.error?.message ?? null;
+  const busy = action.pending;
   const mayCommit = view.target === "review_queue" || isAdmin;
 
   return (
@@ -310,12 +281,7 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
             type="button"
             pending={busy}
             onClick={async () => {
-              setBusy(true);
-              setError(null);
-              const result = await sendJson("POST", `/api/imports/${view.id}/commit`, {});
-              setBusy(false);
-              if (!result.ok) setError(result.error.message);
-              await mutate();
+              if (await action.run("POST", `/api/imports/${view.id}/commit`, {})) await mutate();
             }}
           >
             Commit {(view.counts.rows - view.counts.rejected).toLocaleString("en-GB")} rows
@@ -336,9 +302,8 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
                 )
               )
                 return;
-              const result = await sendJson("DELETE", `/api/imports/${view.id}`);
-              if (result.ok) router.push("/admin/imports?discarded=1");
-              else setError(result.error.message);
+              const result = await action.run("DELETE", `/api/imports/${view.id}`);
+              if (result?.ok) router.push("/admin/imports?discarded=1");
             }}
           >
             Discard this import
@@ -363,11 +328,7 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
                   )
                 )
                   return;
-                setBusy(true);
-                const result = await sendJson("POST", `/api/imports/${view.id}/rollback`, {});
-                setBusy(false);
-                if (!result.ok) setError(result.error.message);
-                await mutate();
+                if (await action.run("POST", `/api/imports/${view.id}/rollback`, {})) await mutate();
               }}
             >
               Roll back this import

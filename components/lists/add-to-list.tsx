@@ -1,35 +1,50 @@
 "use client";
 
 import Link from "next/link";
-import { useId, useState } from "react";
-import useSWR from "swr";
-import { postJson } from "@/lib/http/post-json";
+import { useEffect, useId, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { FieldError } from "@/components/ui/field";
+import { useApiForm } from "@/lib/hooks/use-api-form";
+import { useLists } from "@/lib/hooks/use-lists";
 import type { MeasuredKind } from "@/lib/lists/standard-item";
-
-interface ListSummary {
-  id: number;
-  title: string;
-}
-
-const fetchLists = async (url: string): Promise<ListSummary[]> => {
-  const response = await fetch(url);
-  if (!response.ok) return [];
-  return ((await response.json()) as { lists: ListSummary[] }).lists;
-};
+import { addToListForm } from "@/lib/validation/lists";
 
 /** What goes on the list: a catalogue part (under its latest number), or a standard part a calculator worked out. */
 export type ListItem = { partId: number } | { standard: { kind: MeasuredKind; designation: string; note?: string } };
 
-/** Puts this part on one of the member's job lists (or a new one). */
+type Added = { merged: boolean; superseded: boolean };
+
+/** Puts this part on one of the member's job lists (or a new one), in one request either way. */
 export function AddToList({ item, number, compact = false }: { item: ListItem; number: string; compact?: boolean }) {
   const [open, setOpen] = useState(false);
-  const { data: lists, mutate } = useSWR(open ? "/api/lists" : null, fetchLists);
-  const [choice, setChoice] = useState("");
-  const [title, setTitle] = useState("");
-  const [quantity, setQuantity] = useState("1");
+  const { lists, loaded, revalidate } = useLists(open);
   const [done, setDone] = useState<{ id: number; text: string } | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const id = useId();
+  const { form, onSubmit, formError, pending } = useApiForm({
+    schema: addToListForm,
+    endpoint: (v) => (v.list === "new" ? "/api/lists" : `/api/lists/${v.list}/lines`),
+    toBody: (v) =>
+      v.list === "new"
+        ? { title: v.title, firstLine: { ...item, quantity: v.quantity } }
+        : { ...item, quantity: v.quantity },
+    defaultValues: { list: "", title: "", quantity: "1" },
+    onSuccess: (data: ({ id: number; line: Added } | Added) & { lineId?: number }, v) => {
+      const added = "line" in data ? data.line : data;
+      const listId = "line" in data ? data.id : Number(v.list);
+      void revalidate();
+      const text = added.merged
+        ? `${number} was already on the list; quantity raised.`
+        : added.superseded
+          ? `Added under ${number}'s latest number.`
+          : `${number} added.`;
+      setDone({ id: listId, text });
+    },
+  });
+
+  // Once the member's lists have come, the first is chosen (or "a new list" when there are none).
+  useEffect(() => {
+    if (loaded && !form.getValues("list")) form.setValue("list", lists[0] ? String(lists[0].id) : "new");
+  }, [loaded, lists, form]);
 
   if (!open) {
     return (
@@ -49,34 +64,13 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
       </p>
     );
   }
-  const selected = choice || (lists && lists[0] ? String(lists[0].id) : "new");
+  const errors = form.formState.errors;
+  const chosen = form.watch("list");
   return (
     <form
       className="flex flex-wrap items-end gap-2 rounded-md border border-rule bg-ground p-2"
-      onSubmit={async (e) => {
-        e.preventDefault();
-        setError(null);
-        let listId = Number(selected);
-        if (selected === "new") {
-          const created = await postJson<{ id: number }>("/api/lists", { title });
-          if (!created.ok) return setError(created.error.message);
-          listId = created.data.id;
-          await mutate();
-        }
-        const added = await postJson<{ superseded: boolean; merged: boolean }>(`/api/lists/${listId}/lines`, {
-          ...item,
-          quantity: Number(quantity) || 1,
-        });
-        if (!added.ok) return setError(added.error.message);
-        setDone({
-          id: listId,
-          text: added.data.merged
-            ? `${number} was already on the list; quantity raised.`
-            : added.data.superseded
-              ? `Added under ${number}'s latest number.`
-              : `${number} added.`,
-        });
-      }}
+      onSubmit={onSubmit}
+      noValidate
     >
       <div>
         <label htmlFor={`${id}-list`} className="block text-sm font-bold">
@@ -84,11 +78,10 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
         </label>
         <select
           id={`${id}-list`}
-          value={selected}
-          onChange={(e) => setChoice(e.target.value)}
           className="min-h-10 max-w-56 rounded-md border-2 border-rule-strong bg-ground-raised px-2"
+          {...form.register("list")}
         >
-          {(lists ?? []).map((l) => (
+          {lists.map((l) => (
             <option key={l.id} value={l.id}>
               {l.title}
             </option>
@@ -96,19 +89,19 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
           <option value="new">A new list…</option>
         </select>
       </div>
-      {selected === "new" && (
+      {chosen === "new" && (
         <div>
           <label htmlFor={`${id}-title`} className="block text-sm font-bold">
             New list&apos;s title
           </label>
           <input
             id={`${id}-title`}
-            value={title}
-            onChange={(e) => setTitle(e.target.value)}
-            required
-            minLength={2}
+            aria-invalid={errors.title ? true : undefined}
+            aria-describedby={errors.title ? `${id}-title-error` : undefined}
             className="min-h-10 rounded-md border-2 border-rule-strong bg-ground-raised px-2"
+            {...form.register("title")}
           />
+          {errors.title?.message && <FieldError id={`${id}-title-error`}>{errors.title.message}</FieldError>}
         </div>
       )}
       <div>
@@ -118,20 +111,22 @@ export function AddToList({ item, number, compact = false }: { item: ListItem; n
         <input
           id={`${id}-qty`}
           inputMode="numeric"
-          value={quantity}
-          onChange={(e) => setQuantity(e.target.value)}
+          aria-invalid={errors.quantity ? true : undefined}
+          aria-describedby={errors.quantity ? `${id}-qty-error` : undefined}
           className="min-h-10 w-16 rounded-md border-2 border-rule-strong bg-ground-raised px-2 num"
+          {...form.register("quantity")}
         />
+        {errors.quantity?.message && <FieldError id={`${id}-qty-error`}>{errors.quantity.message}</FieldError>}
       </div>
-      <button type="submit" className="min-h-10 rounded-md bg-brass px-3 font-bold text-white">
+      <Button type="submit" pending={pending} className="min-h-10 px-3 py-1">
         Add
-      </button>
+      </Button>
       <button type="button" className="min-h-10 text-sm underline" onClick={() => setOpen(false)}>
         Cancel
       </button>
-      {error && (
+      {formError && (
         <p className="w-full text-sm font-bold text-caution" role="alert">
-          {error}
+          {formError}
         </p>
       )}
     </form>

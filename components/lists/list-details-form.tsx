@@ -4,8 +4,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
 import { SelectField } from "@/components/ui/select-field";
-import { sendJson } from "@/lib/http/post-json";
+import { useApiForm } from "@/lib/hooks/use-api-form";
+import { listPatch } from "@/lib/validation/lists";
+
+const idOrNull = (value: unknown) => (value ? Number(value) : null);
 
 /** Renames the job, changes its machine, the machine's serial or the notes. */
 export function ListDetailsForm({
@@ -24,53 +28,34 @@ export function ListDetailsForm({
   machines: Array<{ id: number; label: string }>;
 }) {
   const router = useRouter();
-  const [values, setValues] = useState({
-    title,
-    machineId: machineId ? String(machineId) : "",
-    machineSerial: machineSerial ?? "",
-    notes: notes ?? "",
+  const [saved, setSaved] = useState(false);
+  const { form, onSubmit, formError, pending } = useApiForm({
+    schema: listPatch,
+    endpoint: `/api/lists/${id}`,
+    method: "PATCH",
+    defaultValues: { title, machineId, machineSerial: machineSerial ?? "", notes: notes ?? "" },
+    onSuccess: () => {
+      setSaved(true);
+      router.refresh();
+    },
   });
-  const [state, setState] = useState<{ busy: boolean; error: string | null; field: string | null; saved: boolean }>({
-    busy: false,
-    error: null,
-    field: null,
-    saved: false,
-  });
+  const errors = form.formState.errors;
+  const hasMachine = Boolean(form.watch("machineId"));
   return (
     <details className="no-print rounded-lg border border-rule bg-ground-raised p-4">
       <summary className="cursor-pointer font-bold">Change the title, machine, serial or notes</summary>
-      <form
-        className="mt-3 space-y-3"
-        onSubmit={async (e) => {
-          e.preventDefault();
-          setState({ busy: true, error: null, field: null, saved: false });
-          const result = await sendJson("PATCH", `/api/lists/${id}`, {
-            title: values.title,
-            machineId: values.machineId ? Number(values.machineId) : null,
-            machineSerial: values.machineId ? values.machineSerial : null,
-            notes: values.notes,
-          });
-          setState({
-            busy: false,
-            error: result.ok ? null : result.error.message,
-            field: result.ok ? null : (result.error.field ?? null),
-            saved: result.ok,
-          });
-          if (result.ok) router.refresh();
-        }}
-      >
-        <Field
-          id="edit-title"
-          label="What is the job?"
-          value={values.title}
-          onChange={(e) => setValues({ ...values, title: e.target.value })}
-          error={state.field !== "machineSerial" ? (state.error ?? undefined) : undefined}
-        />
+      <form className="mt-3 space-y-3" onSubmit={onSubmit} onChange={() => setSaved(false)} noValidate>
+        {formError && (
+          <Notice tone="caution" role="alert">
+            {formError}
+          </Notice>
+        )}
+        <Field id="edit-title" label="What is the job?" error={errors.title?.message} {...form.register("title")} />
         <SelectField
           id="edit-machine"
           label="Machine"
-          value={values.machineId}
-          onChange={(e) => setValues({ ...values, machineId: e.target.value })}
+          error={errors.machineId?.message}
+          {...form.register("machineId", { setValueAs: idOrNull })}
         >
           <option value="">Not for one machine</option>
           {machines.map((m) => (
@@ -79,15 +64,14 @@ export function ListDetailsForm({
             </option>
           ))}
         </SelectField>
-        {values.machineId && (
+        {hasMachine && (
           <Field
             id="edit-serial"
             label="Serial number (optional)"
             hint="As on the machine's plate. With it, “Add the rest of the assembly” picks the parts for that serial."
-            value={values.machineSerial}
-            onChange={(e) => setValues({ ...values, machineSerial: e.target.value })}
-            error={state.field === "machineSerial" ? (state.error ?? undefined) : undefined}
+            error={errors.machineSerial?.message}
             mono
+            {...form.register("machineSerial")}
           />
         )}
         <div className="space-y-1">
@@ -98,16 +82,15 @@ export function ListDetailsForm({
             id="edit-notes"
             rows={3}
             maxLength={2000}
-            value={values.notes}
-            onChange={(e) => setValues({ ...values, notes: e.target.value })}
             className="block w-full rounded-md border-2 border-rule-strong bg-ground px-3 py-2"
+            {...form.register("notes")}
           />
         </div>
         <div className="flex items-center gap-3">
-          <Button type="submit" variant="secondary" pending={state.busy}>
+          <Button type="submit" variant="secondary" pending={pending}>
             Save
           </Button>
-          {state.saved && <span role="status">Saved.</span>}
+          {saved && <span role="status">Saved.</span>}
         </div>
       </form>
     </details>

@@ -3,7 +3,6 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
-import useSWR from "swr";
 import { FitBadge } from "@/components/parts/fit-badge";
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field";
@@ -11,6 +10,9 @@ import { Notice } from "@/components/ui/notice";
 import { SortableTable } from "@/components/ui/sortable-table";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import { sendJson } from "@/lib/http/post-json";
+import { AddByNumber, addedText, type Added } from "@/components/lists/add-by-number";
+import { useApiAction } from "@/lib/hooks/use-api-action";
+import { useList } from "@/lib/hooks/use-lists";
 import type { ListLine, ListView, NumberChoice, SerialChoice } from "@/lib/lists/lists";
 
 const WIDE = "(min-width: 768px)";
@@ -28,12 +30,6 @@ function useWideScreen(): boolean {
     () => window.matchMedia(WIDE).matches,
     () => true,
   );
-}
-
-async function fetchList(url: string): Promise<ListView> {
-  const response = await fetch(url);
-  if (!response.ok) throw new Error("The list could not be loaded.");
-  return response.json();
 }
 
 /** A text field of a line saved when it loses focus: notes, supplier, supplier's number, unit price. */
@@ -128,6 +124,8 @@ type Message = {
   tone: "success" | "caution";
   text: string;
   numbers?: NumberChoice[];
+  /** The quantity typed with the number, for the part chosen from `numbers`. */
+  quantity?: number;
   serials?: { line: ListLine; choices: SerialChoice[] };
   undo?: { lineId: number; number: string };
 };
@@ -137,50 +135,24 @@ const UNDO_SHOWN_MS = 10_000;
 
 /** The job list as its owner works on it: add by number, edit lines inline, pick equivalents, share, export. */
 export function ListEditor({ initial }: { initial: ListView }) {
-  const { data, mutate } = useSWR(`/api/lists/${initial.id}`, fetchList, {
-    fallbackData: initial,
-    revalidateOnFocus: false,
-  });
-  const view = data ?? initial;
+  const { view, mutate } = useList(initial);
   const wide = useWideScreen();
-  const [number, setNumber] = useState("");
-  const [quantity, setQuantity] = useState("1");
+  const action = useApiAction();
   const [message, setMessage] = useState<Message | null>(null);
   useEffect(() => {
     if (!message?.undo) return;
     const timer = setTimeout(() => setMessage((m) => (m?.undo ? null : m)), UNDO_SHOWN_MS);
     return () => clearTimeout(timer);
   }, [message]);
-  const [adding, setAdding] = useState(false);
 
-  /** Adds by typed number or by a chosen part; says what the number was read as, or offers the parts it may be. */
-  const add = async (item: { number: string } | { partId: number }): Promise<boolean> => {
-    setMessage(null);
-    const result = await sendJson<{
-      superseded: boolean;
-      merged: boolean;
-      read: string | null;
-      latestNumber: string | null;
-    }>("POST", `/api/lists/${view.id}/lines`, { ...item, quantity: Number(quantity) || 1 });
-    if (!result.ok) {
-      setMessage({
-        tone: "caution",
-        text: result.error.message,
-        numbers: result.error.field === "number" ? (result.error.choices as NumberChoice[] | undefined) : undefined,
-      });
-      return false;
-    }
-    const { merged, superseded, read, latestNumber } = result.data;
-    const readAs = read ? `Read as ${read}. ` : "";
-    const text = merged
-      ? "Already on the list: its quantity was raised."
-      : superseded
-        ? `That number is superseded: added as ${latestNumber}.`
-        : "Added.";
-    setMessage({ tone: "success", text: `${readAs}${text}` });
-    setQuantity("1");
+  /** Adds one of the parts a typed number may mean, at the quantity typed with it. */
+  const addChosen = async (partId: number, quantity: number) => {
+    const result = await action.run<Added>("POST", `/api/lists/${view.id}/lines`, { partId, quantity });
+    if (!result) return;
+    setMessage(
+      result.ok ? { tone: "success", text: addedText(result.data) } : { tone: "caution", text: result.error.message },
+    );
     await mutate();
-    return true;
   };
   const [shareUrl, setShareUrl] = useState<string | null>(
     initial.shareToken ? `/lists/shared/${initial.id}?token=${initial.shareToken}` : null,
@@ -192,6 +164,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
   );
 
   // The same cells serve the table on wide screens and the cards on a phone.
+  const { run, pending } = action;
   const cells = useMemo(() => {
     const patch = async (line: ListLine, body: Record<string, unknown>) => {
       const result = await sendJson("PATCH", `/api/lists/${view.id}/lines/${line.id}`, body);
@@ -199,7 +172,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
       return result.ok ? null : result.error.message;
     };
     const addAssembly = async (line: ListLine, serial?: string) => {
-      const result = await sendJson<{
+      const result = await run<{
         added: number;
         machine: string;
         assembly: string;
@@ -207,6 +180,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
         serials: string | null;
         skipped: string[];
       }>("POST", `/api/lists/${view.id}/lines/${line.id}/assembly`, serial ? { serial } : {});
+      if (!result) return;
       await mutate();
       if (!result.ok) {
         const choices =
@@ -228,7 +202,8 @@ export function ListEditor({ initial }: { initial: ListView }) {
       });
     };
     const remove = async (line: ListLine) => {
-      const result = await sendJson("DELETE", `/api/lists/${view.id}/lines/${line.id}`);
+      const result = await run("DELETE", `/api/lists/${view.id}/lines/${line.id}`);
+      if (!result) return;
       await mutate();
       setMessage(
         result.ok
@@ -367,13 +342,18 @@ export function ListEditor({ initial }: { initial: ListView }) {
               Add the rest of the assembly
             </button>
           )}
-          <button type="button" className="text-left underline" onClick={() => void remove(l)}>
+          <button
+            type="button"
+            className="text-left underline disabled:opacity-60"
+            disabled={pending}
+            onClick={() => void remove(l)}
+          >
             Remove
           </button>
         </div>
       ),
     };
-  }, [view.id, mutate]);
+  }, [view.id, mutate, run, pending]);
 
   const columns = useMemo<Array<ColumnDef<ListLine>>>(
     () => [
@@ -422,45 +402,14 @@ export function ListEditor({ initial }: { initial: ListView }) {
 
   return (
     <div className="space-y-6">
-      <form
-        className="flex flex-wrap items-end gap-3 rounded-lg border border-rule bg-ground-raised p-4"
-        onSubmit={async (e) => {
-          e.preventDefault();
-          setAdding(true);
-          setMessage(null);
-          const result = await add({ number });
-          setAdding(false);
-          if (result) setNumber("");
+      <AddByNumber
+        listId={view.id}
+        onAdded={(text) => {
+          setMessage({ tone: "success", text });
+          void mutate();
         }}
-      >
-        <div className="min-w-56 flex-1 space-y-1">
-          <label htmlFor="add-number" className="block font-bold">
-            Add a part by factory number
-          </label>
-          <input
-            id="add-number"
-            value={number}
-            onChange={(e) => setNumber(e.target.value)}
-            required
-            className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 num text-lg"
-          />
-        </div>
-        <div className="w-24 space-y-1">
-          <label htmlFor="add-quantity" className="block font-bold">
-            Qty
-          </label>
-          <input
-            id="add-quantity"
-            inputMode="numeric"
-            value={quantity}
-            onChange={(e) => setQuantity(e.target.value)}
-            className="block min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground px-3 num text-lg"
-          />
-        </div>
-        <Button type="submit" pending={adding}>
-          Add
-        </Button>
-      </form>
+        onChoices={(text, numbers, quantity) => setMessage({ tone: "caution", text, numbers, quantity })}
+      />
       {message && (
         <Notice tone={message.tone} role={message.tone === "caution" ? "alert" : "status"}>
           <span className="block">{message.text}</span>
@@ -471,7 +420,8 @@ export function ListEditor({ initial }: { initial: ListView }) {
                   key={c.partId}
                   type="button"
                   variant="secondary"
-                  onClick={() => void add({ partId: c.partId }).then((ok) => ok && setNumber(""))}
+                  disabled={action.pending}
+                  onClick={() => void addChosen(c.partId, message.quantity ?? 1)}
                 >
                   <span className="num">{c.number}</span>
                   <span className="ml-2 text-sm font-normal">
@@ -502,7 +452,8 @@ export function ListEditor({ initial }: { initial: ListView }) {
               className="mt-2"
               onClick={async () => {
                 const undo = message.undo!;
-                const result = await sendJson("POST", `/api/lists/${view.id}/lines/${undo.lineId}/restore`, {});
+                const result = await action.run("POST", `/api/lists/${view.id}/lines/${undo.lineId}/restore`, {});
+                if (!result) return;
                 await mutate();
                 setMessage(
                   result.ok
@@ -616,7 +567,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
                 type="button"
                 className="text-sm underline"
                 onClick={async () => {
-                  await sendJson("POST", `/api/lists/${view.id}/share`, { enabled: false });
+                  await action.run("POST", `/api/lists/${view.id}/share`, { enabled: false });
                   setShareUrl(null);
                 }}
               >
@@ -628,10 +579,10 @@ export function ListEditor({ initial }: { initial: ListView }) {
               type="button"
               variant="secondary"
               onClick={async () => {
-                const result = await sendJson<{ token: string }>("POST", `/api/lists/${view.id}/share`, {
+                const result = await action.run<{ token: string }>("POST", `/api/lists/${view.id}/share`, {
                   enabled: true,
                 });
-                if (result.ok) setShareUrl(`/lists/shared/${view.id}?token=${result.data.token}`);
+                if (result?.ok) setShareUrl(`/lists/shared/${view.id}?token=${result.data.token}`);
               }}
             >
               Make a read-only link

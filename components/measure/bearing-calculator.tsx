@@ -11,9 +11,9 @@ import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
-import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
-import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
-import type { SizedPart } from "@/lib/catalogue/find-by-size";
+import { useDebounced } from "@/lib/hooks/use-api";
+import { useBearingDecode, useBearingMatch } from "@/lib/hooks/use-calculators";
+import type { DecodedBearing } from "@/lib/standards/bearings";
 import { useLengthUnit } from "@/lib/hooks/use-length-unit";
 import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
 
@@ -69,12 +69,8 @@ export function BearingCalculator() {
   const settledDesignation = useDebounced(designation);
   const settled = useDebounced(sizes);
 
-  const decode = useCalculation<DecodedBearing>(
-    calculationUrl("/api/bearings/decode", { designation: settledDesignation }, ["designation"]),
-  );
-  const match = useCalculation<{ candidates: BearingCandidate[]; warnings: string[]; catalogueParts: SizedPart[] }>(
-    calculationUrl("/api/bearings/match", { ...settled, unit }, ["bore", "od"]),
-  );
+  const decode = useBearingDecode(settledDesignation);
+  const match = useBearingMatch({ ...settled, unit });
   const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
   const otherError = unplacedError(match.error, ["bore", "od", "width", "tolerance"]);
 

@@ -9,9 +9,10 @@ import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
-import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
+import { useDebounced } from "@/lib/hooks/use-api";
+import { useBeltDecode, useBeltSection, useDrive } from "@/lib/hooks/use-calculators";
 import { BELT_SECTIONS } from "@/lib/standards/belt-sections";
-import type { DecodedBelt, SectionCandidate } from "@/lib/standards/belts";
+import type { DecodedBelt } from "@/lib/standards/belts";
 import type { DriveResult } from "@/lib/standards/drive";
 import { useLengthUnit } from "@/lib/hooks/use-length-unit";
 import { convertTypedSizes, inchLabel, measuredValues, type LengthUnit } from "@/lib/standards/units";
@@ -57,12 +58,8 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
   const settledSection = useDebounced(section);
   const settledDrive = useDebounced(drive);
 
-  const decoded = useCalculation<DecodedBelt>(
-    calculationUrl("/api/belts/decode", { designation: settledDesignation }, ["designation"]),
-  );
-  const identified = useCalculation<{ candidates: SectionCandidate[] }>(
-    calculationUrl("/api/belts/identify", { ...settledSection, unit }, ["top"]),
-  );
+  const decoded = useBeltDecode(settledDesignation);
+  const identified = useBeltSection({ ...settledSection, unit });
   const driveParams = {
     large: settledDrive.large,
     small: settledDrive.small,
@@ -71,7 +68,7 @@ export function BeltCalculator({ measuringNotes }: { measuringNotes: string[] })
     section: settledDrive.section,
     unit,
   };
-  const solved = useCalculation<DriveAnswer>(calculationUrl("/api/belts/drive", driveParams, ["large", "small", know]));
+  const solved = useDrive<DriveAnswer>(driveParams, ["large", "small", know]);
   const setD = (name: keyof typeof drive) => (value: string) => setDrive((d) => ({ ...d, [name]: value }));
   const driveOther = unplacedError(solved.error, ["large", "small", "center", "length", "smallMax", "section"]);
 

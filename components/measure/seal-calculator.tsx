@@ -11,7 +11,8 @@ import { SizeField } from "@/components/measure/size-field";
 import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
-import { calculationUrl, useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
+import { useDebounced } from "@/lib/hooks/use-api";
+import { usePressFit, useSealMatch } from "@/lib/hooks/use-calculators";
 import { useLengthUnit } from "@/lib/hooks/use-length-unit";
 import type { PressFit, SealCandidate, SealOrder, ShaftCheck } from "@/lib/standards/seals";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
@@ -43,19 +44,17 @@ export function SealCalculator() {
   const settled = useDebounced(sizes);
   const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
 
-  const match = useCalculation<SealMatch>(
-    calculationUrl(
-      "/api/seals/match",
-      { shaft: settled.shaft, bore: settled.bore, width: settled.width, unit, grooved, spring, dustLip, outside },
-      ["shaft", "bore"],
-    ),
-  );
-  const fit = useCalculation<PressFit>(
-    calculationUrl("/api/seals/press-fit", { bore: settled.bore, sealOd: settled.sealOd, unit, outside }, [
-      "bore",
-      "sealOd",
-    ]),
-  );
+  const match = useSealMatch<SealMatch>({
+    shaft: settled.shaft,
+    bore: settled.bore,
+    width: settled.width,
+    unit,
+    grooved,
+    spring,
+    dustLip,
+    outside,
+  });
+  const fit = usePressFit<PressFit>({ bore: settled.bore, sealOd: settled.sealOd, unit, outside });
   const otherError = unplacedError(match.error, ["shaft", "bore", "width"]);
 
   return (

@@ -4,7 +4,7 @@ import { useId, useState } from "react";
 import { FieldError } from "@/components/ui/field";
 import type { StandardPartHit } from "@/lib/catalogue/find-standard";
 import { CATEGORY_NAMES, type StandardKind } from "@/lib/catalogue/kinds";
-import { useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
+import { useStandardParts } from "@/lib/hooks/use-lookup";
 import { useLookup } from "@/lib/hooks/use-lookup";
 import { standardSizes } from "@/lib/catalogue/sizes";
 import type { StandardDims } from "@/lib/proposals/checks";
@@ -156,14 +156,9 @@ export function StandardPicker({
   error?: string;
 }) {
   const [query, setQuery] = useState("");
-  const settled = useDebounced(query.trim(), 250);
-  const path = settled
-    ? `/api/standard-parts?${new URLSearchParams({ q: settled, limit: "8", ...(kind ? { kind } : {}) })}`
-    : null;
-  const { data, isLoading } = useCalculation<{ results: StandardPartHit[] }>(path);
+  const { results, isLoading, settled } = useStandardParts<StandardPartHit>(query, kind);
   const id = useId();
   if (picked) return <Picked title={picked.designation} detail={picked.sizes} onClear={() => onPick(null)} />;
-  const results = data?.results ?? [];
   return (
     <div className="space-y-2">
       <SearchBox

@@ -1,32 +1,33 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { sendJson } from "@/lib/http/post-json";
+import { useApiAction } from "@/lib/hooks/use-api-action";
 
-/** Withdraws an undecided proposal after the member confirms it. */
+/** Withdraws an undecided proposal after the member confirms it, then shows the list of their proposals. */
 export function WithdrawButton({ id }: { id: number }) {
   const router = useRouter();
-  const [error, setError] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const { run, pending, error } = useApiAction();
   return (
     <span className="inline-flex flex-col">
       <button
         type="button"
         className="text-left underline disabled:opacity-60"
-        disabled={busy}
+        disabled={pending}
         onClick={async () => {
           if (!window.confirm("Withdraw this proposal? Its text and photos are deleted.")) return;
-          setBusy(true);
-          const result = await sendJson("DELETE", `/api/proposals/${id}`);
-          setBusy(false);
-          if (result.ok) router.refresh();
-          else setError(result.error.message);
+          const result = await run("DELETE", `/api/proposals/${id}`);
+          if (!result?.ok) return;
+          router.push("/proposals");
+          router.refresh();
         }}
       >
         Withdraw
       </button>
-      {error && <span className="text-sm font-bold text-caution">{error}</span>}
+      {error && (
+        <span className="text-sm font-bold text-caution" role="alert">
+          {error.message}
+        </span>
+      )}
     </span>
   );
 }

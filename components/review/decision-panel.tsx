@@ -1,11 +1,12 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { FieldError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { useApiForm } from "@/lib/hooks/use-api-form";
 import type { Decision } from "@/lib/proposals/kinds";
-import { postJson } from "@/lib/http/post-json";
+import { decisionInput } from "@/lib/validation/proposals";
 
 const LABELS: Record<Decision, string> = {
   approve: "Approve",
@@ -13,38 +14,29 @@ const LABELS: Record<Decision, string> = {
   reject: "Reject",
 };
 
-/** Approve, send back or reject; the version read with the page goes along, so a decision made meanwhile wins. */
+/**
+ * Approve, send back or reject; the version read with the page goes along, so a decision made meanwhile wins. What a
+ * decision needs (a message to reject or send back) is the shared schema's rule, said in its words.
+ */
 export function DecisionPanel({ id, version }: { id: number; version: number }) {
   const router = useRouter();
-  const [message, setMessage] = useState("");
-  const [pending, setPending] = useState<Decision | null>(null);
-  const [error, setError] = useState<string | null>(null);
-
-  async function decide(action: Decision) {
-    setError(null);
-    if (action !== "approve" && message.trim().length < 3) {
-      setError(action === "reject" ? "Give the member a reason for the rejection." : "Tell the member what to change.");
-      return;
-    }
-    setPending(action);
-    const result = await postJson<{ proposal: { status: string } }>(`/api/proposals/${id}/decision`, {
-      action,
-      message,
-      version,
-    });
-    setPending(null);
-    if (result.ok) {
-      router.push(`/review?done=${result.data.proposal.status}`);
+  const { form, onSubmit, formError, pending } = useApiForm({
+    schema: decisionInput,
+    endpoint: `/api/proposals/${id}/decision`,
+    defaultValues: { action: "approve" as Decision, message: "", version },
+    onSuccess: (data: { proposal: { status: string } }) => {
+      router.push(`/review?done=${data.proposal.status}`);
       router.refresh();
-    } else {
-      setError(result.error.message);
-    }
-  }
-
+    },
+  });
+  const chosen = form.watch("action");
+  const error = form.formState.errors.message?.message;
   return (
-    <section
+    <form
       aria-labelledby="decide-heading"
       className="space-y-3 rounded-lg border-2 border-brass bg-ground-raised p-4"
+      onSubmit={onSubmit}
+      noValidate
     >
       <h2 id="decide-heading" className="text-xl">
         Your decision
@@ -59,31 +51,32 @@ export function DecisionPanel({ id, version }: { id: number; version: number }) 
         <textarea
           id="decision-message"
           rows={4}
-          value={message}
-          aria-describedby="decision-message-hint"
-          onChange={(e) => setMessage(e.target.value)}
+          aria-describedby={error ? "decision-message-hint decision-message-error" : "decision-message-hint"}
+          aria-invalid={error ? true : undefined}
           className="block w-full rounded-md border-2 border-rule-strong bg-ground px-3 py-2 text-lg focus:border-brass"
+          {...form.register("message")}
         />
+        {error && <FieldError id="decision-message-error">{error}</FieldError>}
       </div>
-      {error && (
+      {formError && (
         <Notice tone="caution" role="alert">
-          {error}
+          {formError}
         </Notice>
       )}
       <div className="flex flex-wrap gap-3">
         {(["approve", "request_changes", "reject"] as const).map((action) => (
           <Button
             key={action}
-            type="button"
+            type="submit"
             variant={action === "approve" ? "primary" : "secondary"}
-            pending={pending === action}
-            disabled={pending !== null}
-            onClick={() => decide(action)}
+            pending={pending && chosen === action}
+            disabled={pending}
+            onClick={() => form.setValue("action", action)}
           >
             {LABELS[action]}
           </Button>
         ))}
       </div>
-    </section>
+    </form>
   );
 }

@@ -13,7 +13,10 @@ import { sendJson } from "@/lib/http/post-json";
  */
 export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(options: {
   schema: z.ZodType<TOutput, TInput>;
-  endpoint: string;
+  /** Where to send it; a function when the values decide (an existing list or a new one). */
+  endpoint: string | ((values: TOutput) => string);
+  /** The body, when it is not the values as they are. */
+  toBody?: (values: TOutput) => unknown;
   /** POST unless given: PATCH for a form that changes what exists. */
   method?: "POST" | "PATCH";
   defaultValues: TInput;
@@ -30,10 +33,16 @@ export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(optio
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
-    const result = await sendJson<TResponse>(options.method ?? "POST", options.endpoint, values);
+    const endpoint = typeof options.endpoint === "function" ? options.endpoint(values) : options.endpoint;
+    const result = await sendJson<TResponse>(
+      options.method ?? "POST",
+      endpoint,
+      options.toBody ? options.toBody(values) : values,
+    );
     if (result.ok) return options.onSuccess(result.data, values);
     if (options.onError?.(result.error, result.status)) return;
-    const fields = result.error.fields ?? {};
+    const { field, message } = result.error;
+    const fields = result.error.fields ?? (field ? { [field]: message } : {});
     const known = Object.keys(options.defaultValues);
     let placed = false;
     // Nested names ("original.number") land on the input of that path when its top-level field is the form's.

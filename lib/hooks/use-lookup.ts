@@ -1,7 +1,7 @@
 "use client";
 
 import type { LookupResult } from "@/lib/catalogue/find-parts";
-import { useCalculation, useDebounced } from "@/lib/hooks/use-calculation";
+import { useApi, useDebounced } from "@/lib/hooks/use-api";
 
 /**
  * Parts matching what is typed (a number, part of one, or words), asked for once typing pauses; an empty box asks
@@ -14,12 +14,21 @@ export function useLookup(query: string, limit = 8, makerId: number | null = nul
     limit: String(limit),
     ...(makerId ? { maker: String(makerId) } : {}),
   });
-  const path = settled ? `/api/parts/lookup?${params}` : null;
-  const { data, error, isLoading } = useCalculation<{ results: LookupResult[] }>(path);
+  const { data, error, isLoading } = useApi<{ results: LookupResult[] }>(
+    settled ? `/api/parts/lookup?${params}` : null,
+  );
   return {
     results: data?.results ?? [],
     error,
     isLoading: isLoading || (query.trim() !== settled && query.trim() !== ""),
     settled,
   };
+}
+
+/** Standard parts by designation, for the proposal form's picker. */
+export function useStandardParts<T>(query: string, kind?: string) {
+  const settled = useDebounced(query.trim(), 250);
+  const params = new URLSearchParams({ q: settled, limit: "8", ...(kind ? { kind } : {}) });
+  const { data, isLoading } = useApi<{ results: T[] }>(settled ? `/api/standard-parts?${params}` : null);
+  return { results: data?.results ?? [], isLoading, settled };
 }

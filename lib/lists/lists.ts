@@ -133,9 +133,16 @@ async function serialFor(machineId: number | null, text: string | null | undefin
   return parseSerial(text, machine?.serialPrefix ?? null);
 }
 
+/** A new list; with `firstLine`, the part it was started from goes on it too, or, if that fails, no list is left. */
 export async function createList(
   userId: string,
-  input: { title: string; machineId?: number | null; machineSerial?: string | null; notes?: string },
+  input: {
+    title: string;
+    machineId?: number | null;
+    machineSerial?: string | null;
+    notes?: string;
+    firstLine?: Parameters<typeof addLine>[2];
+  },
 ) {
   if (input.machineId && !(await Machine.findByPk(input.machineId)))
     throw new AppError("validation_failed", "There is no machine with that id.", { field: "machineId" });
@@ -147,7 +154,13 @@ export async function createList(
     machineSerial,
     notes: input.notes || null,
   });
-  return { id: list.id, title: list.title };
+  if (!input.firstLine) return { id: list.id, title: list.title, line: null };
+  try {
+    return { id: list.id, title: list.title, line: await addLine(userId, list.id, input.firstLine) };
+  } catch (error) {
+    await list.destroy();
+    throw error;
+  }
 }
 
 export async function updateList(

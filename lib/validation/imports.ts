@@ -1,14 +1,10 @@
 import { z } from "zod";
 import { IMPORT_TARGETS } from "@/lib/imports/kinds";
+import { idFromText } from "@/lib/validation/ids";
 
 export const importUploadFields = z.object({
   target: z.enum(IMPORT_TARGETS, { error: "target is catalogue or review_queue." }).optional(),
-  mappingId: z.coerce
-    .number({ error: "mappingId is a saved mapping's id." })
-    .int("mappingId is a saved mapping's id.")
-    .positive("mappingId is a saved mapping's id.")
-    .max(2_147_483_647, "No mapping has that id.")
-    .optional(),
+  mappingId: idFromText("saved mapping").optional(),
 });
 
 export const mappingBody = z.object({

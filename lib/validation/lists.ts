@@ -56,6 +56,27 @@ export const lineInput = z
     path: ["number"],
   });
 
+/** The job list's "Add a part by factory number" form. */
+export const addByNumberForm = z.object({
+  number: z.string().trim().min(1, "Type a factory number.").max(60, "A factory number is at most 60 characters."),
+  quantity: z.coerce.number({ error: "The quantity is a whole number." }).pipe(quantity),
+});
+
+/** A new list, with the first part on it when it is started from a part or a calculator ("Add to a job list"). */
+export const newListInput = listInput.extend({ firstLine: lineInput.optional() });
+
+/** The "Add to a job list" form: an existing list by id, or "new" with a title; the quantity to add. */
+export const addToListForm = z
+  .object({
+    list: z.string().min(1, "Choose a list."),
+    title: z.string().trim().max(120, "A title is at most 120 characters.").default(""),
+    quantity: z.coerce.number({ error: "The quantity is a whole number." }).pipe(quantity),
+  })
+  .refine((v) => v.list !== "new" || v.title.length >= 2, {
+    message: "Give the new list a title, e.g. water pump rebuild.",
+    path: ["title"],
+  });
+
 export const linePatch = z.object({
   quantity: quantity.optional(),
   notes: z.string().trim().max(500, "Notes are at most 500 characters.").optional(),

@@ -1,7 +1,7 @@
 import { requirePermission } from "@/lib/auth/session";
 import { handle, readJson } from "@/lib/http/handle";
 import { createList, listLists } from "@/lib/lists/lists";
-import { listInput } from "@/lib/validation/lists";
+import { newListInput } from "@/lib/validation/lists";
 import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";
@@ -13,6 +13,6 @@ export const GET = handle(async () => {
 
 export const POST = handle(async (request) => {
   const user = await requirePermission("lists:manage");
-  const input = parseWith(listInput, await readJson(request));
+  const input = parseWith(newListInput, await readJson(request));
   return Response.json(await createList(user.id, input), { status: 201 });
 });

@@ -1,0 +1,30 @@
+"use client";
+
+import { apiUrl, useApi } from "@/lib/hooks/use-api";
+import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
+import type { DecodedBelt, SectionCandidate } from "@/lib/standards/belts";
+import type { SizedPart } from "@/lib/catalogue/find-by-size";
+
+type Params = Record<string, string | boolean | undefined>;
+
+/** The calculators' resources, one hook each; every one asks nothing until its required fields are filled in. */
+export const useBearingDecode = (designation: string) =>
+  useApi<DecodedBearing>(apiUrl("/api/bearings/decode", { designation }, ["designation"]));
+
+export const useBearingMatch = (params: Params) =>
+  useApi<{ candidates: BearingCandidate[]; warnings: string[]; catalogueParts: SizedPart[] }>(
+    apiUrl("/api/bearings/match", params, ["bore", "od"]),
+  );
+
+export const useSealMatch = <T>(params: Params) => useApi<T>(apiUrl("/api/seals/match", params, ["shaft", "bore"]));
+
+export const usePressFit = <T>(params: Params) => useApi<T>(apiUrl("/api/seals/press-fit", params, ["bore", "sealOd"]));
+
+export const useBeltDecode = (designation: string) =>
+  useApi<DecodedBelt>(apiUrl("/api/belts/decode", { designation }, ["designation"]));
+
+export const useBeltSection = (params: Params) =>
+  useApi<{ candidates: SectionCandidate[] }>(apiUrl("/api/belts/identify", params, ["top"]));
+
+export const useDrive = <T>(params: Params, required: string[]) =>
+  useApi<T>(apiUrl("/api/belts/drive", params, required));
