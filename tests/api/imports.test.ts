@@ -325,7 +325,9 @@ describe("other files", () => {
     expect(queue.body.proposals).toEqual([
       expect.objectContaining({ partNumber: number, standard: "6200-2RS", submitter: "moderator@understudy.test" }),
     ]);
-    expect(await Proposal.count({ where: { status: "pending" } })).toBeGreaterThan(0);
+    const queued = await Proposal.findByPk(queue.body.proposals[0].id);
+    const moderatorRow = await User.findOne({ where: { email: "moderator@understudy.test" } });
+    expect(queued).toMatchObject({ status: "pending", userId: moderatorRow!.id, crossId: null });
   });
 });
 

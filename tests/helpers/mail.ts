@@ -20,6 +20,18 @@ export async function waitForMail(to: string, subjectIncludes: string, timeoutMs
   throw new Error(`No mail "${subjectIncludes}" reached ${to} within ${timeoutMs} ms`);
 }
 
+/** Waits until this address has `count` messages, and gives them; fails at the deadline. */
+export async function waitForMailCount(to: string, count: number, timeoutMs = 10_000): Promise<CapturedMail[]> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const response = await fetch(`${MAIL_API}/messages?to=${encodeURIComponent(to)}`);
+    const { messages } = (await response.json()) as { messages: CapturedMail[] };
+    if (messages.length >= count) return messages;
+    await new Promise((r) => setTimeout(r, 150));
+  }
+  throw new Error(`${to} did not reach ${count} messages within ${timeoutMs} ms`);
+}
+
 export async function mailCount(to: string): Promise<number> {
   const response = await fetch(`${MAIL_API}/messages?to=${encodeURIComponent(to)}`);
   return ((await response.json()) as { messages: unknown[] }).messages.length;
