@@ -8,6 +8,7 @@ import * as hashedSessions from "@/db/migrations/0007-hashed-sessions";
 import * as serialsWordsAndOrders from "@/db/migrations/0008-serials-words-and-orders";
 import * as nearNumberIndex from "@/db/migrations/0009-near-number-index";
 import * as proposals from "@/db/migrations/0010-proposals";
+import * as normalised from "@/db/migrations/0011-normalised";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -21,4 +22,5 @@ export const migrations = [
   { name: "0008-serials-words-and-orders", ...serialsWordsAndOrders },
   { name: "0009-near-number-index", ...nearNumberIndex },
   { name: "0010-proposals", ...proposals },
+  { name: "0011-normalised", ...normalised },
 ];

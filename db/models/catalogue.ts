@@ -89,7 +89,7 @@ export class OriginalPart extends Model<InferAttributes<OriginalPart>, InferCrea
   declare id: CreationOptional<number>;
   declare makerId: number;
   declare number: string;
-  declare numberNormalized: string;
+  declare numberNormalised: string;
   declare numberKey: string;
   declare description: string;
   declare category: PartCategory;
@@ -106,7 +106,7 @@ OriginalPart.init(
     id: id(),
     makerId: DataTypes.INTEGER,
     number: DataTypes.STRING(60),
-    numberNormalized: DataTypes.STRING(60),
+    numberNormalised: DataTypes.STRING(60),
     numberKey: DataTypes.STRING(60),
     description: DataTypes.STRING(200),
     category: DataTypes.ENUM(...PART_CATEGORIES),

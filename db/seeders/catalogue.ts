@@ -63,7 +63,7 @@ export async function seedDemoCatalogue(log: (message: string) => void = () => {
       demo.parts.map(({ key: _key, makerKey, ...p }) => {
         const maker = makers.get(makerKey)!;
         const forms = searchForms(p.number, maker.prefixes);
-        return { ...p, makerId: maker.id, numberNormalized: forms.normalised, numberKey: forms.key };
+        return { ...p, makerId: maker.id, numberNormalised: forms.normalised, numberKey: forms.key };
       }),
       { ...t, returning: true },
     );

@@ -41,7 +41,7 @@ export async function seedLargeCatalogue(parts: number, log: (message: string) =
     await q("CREATE INDEX ON targets (i)");
     log(`inserting ${parts} parts…`);
     await q(
-      `INSERT INTO original_parts (maker_id, number, number_normalized, number_key, description, category, inner_mm,
+      `INSERT INTO original_parts (maker_id, number, number_normalised, number_key, description, category, inner_mm,
         outer_mm, width_mm, created_at, updated_at)
        SELECT m.id, 'SY-' || lpad(g::text, 6, '0') || '-' || chr(65 + g % 5),
               lpad(g::text, 6, '0') || chr(65 + g % 5),

@@ -38,7 +38,7 @@ interface PartRow {
   maker_id: number;
   maker: string;
   number: string;
-  number_normalized: string;
+  number_normalised: string;
   number_key: string;
   description: string;
   category: PartCategory;
@@ -48,7 +48,7 @@ interface PartRow {
   length_mm: number | null;
 }
 
-const COLUMNS = `p.id, p.maker_id, m.name AS maker, p.number, p.number_normalized, p.number_key, p.description,
+const COLUMNS = `p.id, p.maker_id, m.name AS maker, p.number, p.number_normalised, p.number_key, p.description,
   p.category,
   p.inner_mm, p.outer_mm, p.width_mm, p.length_mm`;
 
@@ -133,9 +133,9 @@ export async function lookUpParts(
   const [numberRows, wordRows] = await Promise.all([
     sequelize.query<PartRow>(
       `SELECT ${COLUMNS} ${from}
-       WHERE (p.number_normalized IN (:forms) OR p.number_key IN (:keys)
-              OR (:prefixes AND (p.number_normalized LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter}
-       ORDER BY length(p.number_normalized), p.number_normalized LIMIT 200`,
+       WHERE (p.number_normalised IN (:forms) OR p.number_key IN (:keys)
+              OR (:prefixes AND (p.number_normalised LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter}
+       ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200`,
       {
         replacements: {
           forms,
@@ -169,14 +169,14 @@ export async function lookUpParts(
     });
   };
   const asTyped = query.trim().toUpperCase();
-  const isSame = (row: PartRow) => forms.includes(row.number_normalized) || keys.includes(row.number_key);
+  const isSame = (row: PartRow) => forms.includes(row.number_normalised) || keys.includes(row.number_key);
   for (const row of numberRows.filter(isSame)) {
     const matchedBy: MatchedBy =
-      row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalized) ? "normalised" : "misread";
+      row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalised) ? "normalised" : "misread";
     add(row, matchedBy, 1);
   }
   const hit = found.size > 0;
-  for (const row of numberRows) add(row, "prefix", stripped.length / Math.max(row.number_normalized.length, 1));
+  for (const row of numberRows) add(row, "prefix", stripped.length / Math.max(row.number_normalised.length, 1));
 
   // Second round: similar numbers. After a hit, those one character away (they share the first or the last half
   // of the number exactly, which the prefix and reversed-number indexes find quickly); otherwise, when there is

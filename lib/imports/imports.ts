@@ -6,6 +6,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { hasPermission, type Role } from "@/lib/auth/roles";
 import { AppError } from "@/lib/errors";
 import { runPass, type Rejection } from "@/lib/imports/engine";
+import type { ChunkWriter } from "@/lib/imports/write";
 import {
   IMPORT_MAX_BYTES,
   type ImportCounts,
@@ -267,7 +268,7 @@ export async function startCommit(actor: Actor, id: number): Promise<Import> {
  * Writes every accepted row in one transaction: all of it lands, or, on any failure, nothing does and the import
  * says why. Rows the catalogue already holds unchanged are left alone, so the same file twice changes nothing.
  */
-export async function runCommit(actor: Actor, id: number, options: { failAfterRows?: number } = {}): Promise<void> {
+export async function runCommit(actor: Actor, id: number, options: { writer?: ChunkWriter } = {}): Promise<void> {
   const row = (await Import.findByPk(id))!;
   try {
     const counts = await sequelize.transaction(async (transaction) => {
@@ -286,7 +287,7 @@ export async function runCommit(actor: Actor, id: number, options: { failAfterRo
         mapping: row.mapping,
         transaction,
         onProgress: progressWriter(id, "committing", row.sizeBytes),
-        failAfterRows: options.failAfterRows,
+        writer: options.writer,
       });
       await recordAudit(
         {

@@ -40,7 +40,7 @@ export interface NewPartInput {
   machineId?: number | null;
   assemblyId?: number | null;
   /** The number as the catalogue compares it (letters and digits, maker prefix removed). */
-  numberNormalized: string;
+  numberNormalised: string;
 }
 
 export interface NewStandardInput {

@@ -105,7 +105,7 @@ async function resolveOriginal(input: ProposalInput["original"]): Promise<Resolv
     });
   // A "new" part the catalogue already holds is that part: the proposal is about it.
   const known = await OriginalPart.findOne({
-    where: { makerId: maker.id, numberNormalized: normalised },
+    where: { makerId: maker.id, numberNormalised: normalised },
     attributes: ["id"],
   });
   if (known) return { partId: known.id, newPart: null };
@@ -118,7 +118,7 @@ async function resolveOriginal(input: ProposalInput["original"]): Promise<Resolv
       category: input.category!,
       machineId: input.machineId ?? null,
       assemblyId: input.machineId ? input.assemblyId! : null,
-      numberNormalized: normalised,
+      numberNormalised: normalised,
     },
   };
 }
@@ -186,7 +186,7 @@ async function findDuplicate(
        AND ${
          original.partId
            ? "original_part_id = :partId"
-           : "new_part->>'makerId' = :makerId AND new_part->>'numberNormalized' = " + ":number"
+           : "new_part->>'makerId' = :makerId AND new_part->>'numberNormalised' = " + ":number"
        }
        AND ${
          standard.standardPartId
@@ -199,7 +199,7 @@ async function findDuplicate(
         exclude: excludeProposalId,
         partId: original.partId,
         makerId: String(original.newPart?.makerId ?? ""),
-        number: original.newPart?.numberNormalized ?? "",
+        number: original.newPart?.numberNormalised ?? "",
         standardId: standard.standardPartId,
         kind: standard.newStandard?.kind ?? "",
         designation: standard.newStandard?.designation.toUpperCase() ?? "",
@@ -357,7 +357,7 @@ export async function createProposal(user: Actor, input: ProposalInput): Promise
 function crossKey(original: ResolvedOriginal, standard: ResolvedStandard): string {
   const part = original.partId
     ? `p${original.partId}`
-    : `n${original.newPart?.makerId}:${original.newPart?.numberNormalized}`;
+    : `n${original.newPart?.makerId}:${original.newPart?.numberNormalised}`;
   const target = standard.standardPartId
     ? `s${standard.standardPartId}`
     : `n${standard.newStandard?.kind}:${standard.newStandard?.designation.toUpperCase()}`;
@@ -493,11 +493,11 @@ async function landInCatalogue(s: Proposal, transaction: Transaction): Promise<{
     const maker = await Maker.findByPk(np.makerId, { transaction });
     const { normalised, key } = searchForms(np.number, maker?.prefixes ?? []);
     const [part] = await OriginalPart.findOrCreate({
-      where: { makerId: np.makerId, numberNormalized: normalised },
+      where: { makerId: np.makerId, numberNormalised: normalised },
       defaults: {
         makerId: np.makerId,
         number: np.number,
-        numberNormalized: normalised,
+        numberNormalised: normalised,
         numberKey: key,
         description: np.description,
         category: np.category,

@@ -5,6 +5,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Cross, Import, Maker, OriginalPart, PartUsage, sequelize, StandardPart, Proposal, User } from "@/db";
 import { runCommit, startCommit } from "@/lib/imports/imports";
+import { catalogueWriter, type ChunkWriter } from "@/lib/imports/write";
 import { getObject } from "@/lib/storage/s3";
 import { APP_URL, send, signIn } from "../helpers/api";
 
@@ -227,7 +228,14 @@ describe("importing the sample club spreadsheet", () => {
     const adminUser = await User.findOne({ where: { email: "admin@understudy.test" } });
     const actor = { id: adminUser!.id, role: "admin" as const };
     await startCommit(actor, response.body.id);
-    await runCommit(actor, response.body.id, { failAfterRows: 1 });
+    // The commit's writer writes the first chunk, then the database fails: the transaction must take it all back.
+    const failing: ChunkWriter = {
+      async write(plan, context) {
+        await catalogueWriter.write(plan, context);
+        throw new Error("Forced failure after the first chunk");
+      },
+    };
+    await runCommit(actor, response.body.id, { writer: failing });
     expect(await catalogueSnapshot()).toEqual(unchanged);
     const body = await settled(admin, response.body.id);
     expect(body.status).toBe("parsed");

@@ -53,7 +53,7 @@ describe("one ranking of a part's crosses, along its supersession chain", () => 
       const part = await OriginalPart.create({
         makerId: maker.id,
         number,
-        numberNormalized: number.replace(/-/g, ""),
+        numberNormalised: number.replace(/-/g, ""),
         numberKey: number.replace(/-/g, ""),
         description: "Ranking test bearing",
         category: "bearing",

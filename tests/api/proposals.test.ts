@@ -524,7 +524,7 @@ describe("POST /api/proposals against the worn part's documented sizes", () => {
     const part = await OriginalPart.create({
       makerId,
       number,
-      numberNormalized: number.replace(/-/g, ""),
+      numberNormalised: number.replace(/-/g, ""),
       numberKey: number.replace(/-/g, ""),
       description: "Test water pump bearing",
       category: "bearing",
