@@ -100,130 +100,156 @@ function wordsQuery(query: string): string | null {
   return tokens.map((t, i) => (i === tokens.length - 1 && /\p{L}/u.test(t) ? `${t}:*` : t)).join(" & ");
 }
 
+/** What was typed, read as a number: its forms, its look-alike keys, and the makers its prefix names. */
+interface Typed {
+  query: string;
+  stripped: string;
+  forms: string[];
+  keys: string[];
+  key: string;
+  namedMakers: Set<number>;
+  makerId: number | null;
+}
+
+type Found = Map<number, { row: PartRow; matchedBy: MatchedBy; score: number }>;
+
+const FROM = "FROM original_parts p JOIN makers m ON m.id = p.maker_id";
+const makerFilter = (typed: Typed) => (typed.makerId ? "AND p.maker_id = :makerId" : "");
+
 /**
  * Finds original parts for what a person typed: a factory number from a worn stamping, part of one, or words.
  *
  * In order: exact, reformatted and look-alike matches; numbers that start with what was typed; similar numbers, which
  * still follow an exact hit because one wrong digit may match another real number; and parts found by words through
- * PostgreSQL full-text search. When the typed number
- * starts with a maker's prefix, that maker's numbers come before others'. `makerId` keeps the results to one maker.
+ * PostgreSQL full-text search. When the typed number starts with a maker's prefix, that maker's numbers come before
+ * others'. `makerId` keeps the results to one maker.
  */
 export async function lookUpParts(
   query: string,
   options: { limit: number; makerId?: number | null },
 ): Promise<LookupResult[]> {
-  const typed = normaliseNumber(query);
-  if (typed === "") return [];
-  const makerId = options.makerId ?? null;
-  const prefixes = await makerPrefixes();
-  const prefixHit = prefixes
-    .filter((p) => typed.startsWith(p.prefix) && /\d/.test(typed.slice(p.prefix.length)))
-    .sort((a, b) => b.prefix.length - a.prefix.length);
-  const stripped = prefixHit.length > 0 ? typed.slice(prefixHit[0].prefix.length) : typed;
-  const namedMakers = new Set(prefixHit.filter((p) => p.prefix === prefixHit[0].prefix).map((p) => p.makerId));
-  const forms = [...new Set([typed, stripped])];
-  const keys = [...new Set(forms.map(lookAlikeKey))];
-  const key = lookAlikeKey(stripped);
-  const makerFilter = makerId ? "AND p.maker_id = :makerId" : "";
+  const typed = await readTyped(query, options.makerId ?? null);
+  if (!typed) return [];
   const tsquery = WORDY.test(query) ? wordsQuery(query) : null;
-  const from = `FROM original_parts p JOIN makers m ON m.id = p.maker_id`;
-
-  // First round: the number itself (exact, reformatted, look-alike) and numbers that start with it, in one query;
-  // words beside it.
-  const [numberRows, wordRows] = await Promise.all([
-    sequelize.query<PartRow>(
-      `SELECT ${COLUMNS} ${from}
-       WHERE (p.number_normalised IN (:forms) OR p.number_key IN (:keys)
-              OR (:prefixes AND (p.number_normalised LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter}
-       ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200`,
-      {
-        replacements: {
-          forms,
-          keys,
-          prefixes: stripped.length >= 2,
-          like: `${stripped}%`,
-          likeKey: `${key}%`,
-          makerId,
-        },
-        type: QueryTypes.SELECT,
-      },
-    ),
-    tsquery
-      ? sequelize.query<PartRow & { rank: number }>(
-          `SELECT ${COLUMNS}, ts_rank(p.search_document, q) AS rank ${from}, to_tsquery('english', :tsquery) q
-           WHERE p.search_document @@ q ${makerFilter} ORDER BY rank DESC, p.number LIMIT 60`,
-          { replacements: { tsquery, makerId }, type: QueryTypes.SELECT },
-        )
-      : Promise.resolve([]),
-  ]);
-
-  const found = new Map<number, { row: PartRow; matchedBy: MatchedBy; score: number }>();
+  const [numberRows, wordRows] = await Promise.all([findNumbers(typed), tsquery ? findWords(typed, tsquery) : []]);
+  const found: Found = new Map();
   const add = (row: PartRow, matchedBy: MatchedBy, within: number) => {
     if (found.has(row.id)) return;
     // A maker named by the typed prefix goes first within its band.
-    const named = namedMakers.size === 0 || namedMakers.has(row.maker_id) ? 0.01 : 0;
-    found.set(row.id, {
-      row,
-      matchedBy,
-      score: Math.round((BAND[matchedBy] - 0.05 + Math.max(0, Math.min(within, 1)) * 0.04 + named) * 1000) / 1000,
-    });
+    const named = typed.namedMakers.size === 0 || typed.namedMakers.has(row.maker_id) ? 0.01 : 0;
+    const score = Math.round((BAND[matchedBy] - 0.05 + Math.max(0, Math.min(within, 1)) * 0.04 + named) * 1000) / 1000;
+    found.set(row.id, { row, matchedBy, score });
   };
   const asTyped = query.trim().toUpperCase();
-  const isSame = (row: PartRow) => forms.includes(row.number_normalised) || keys.includes(row.number_key);
+  const isSame = (row: PartRow) => typed.forms.includes(row.number_normalised) || typed.keys.includes(row.number_key);
   for (const row of numberRows.filter(isSame)) {
-    const matchedBy: MatchedBy =
-      row.number.toUpperCase() === asTyped ? "exact" : forms.includes(row.number_normalised) ? "normalised" : "misread";
-    add(row, matchedBy, 1);
+    const reformatted = typed.forms.includes(row.number_normalised) ? "normalised" : "misread";
+    add(row, row.number.toUpperCase() === asTyped ? "exact" : reformatted, 1);
   }
   const hit = found.size > 0;
-  for (const row of numberRows) add(row, "prefix", stripped.length / Math.max(row.number_normalised.length, 1));
-
-  // Second round: similar numbers. After a hit, those one character away (they share the first or the last half
-  // of the number exactly, which the prefix and reversed-number indexes find quickly); otherwise, when there is
-  // room, trigram candidates from PostgreSQL ranked by fuse.js.
-  if (hit && key.length >= 4) {
-    const half = Math.floor(key.length / 2);
-    const near = await sequelize.query<PartRow & { distance: number }>(
-      `SELECT ${COLUMNS}, levenshtein(p.number_key, :key) AS distance ${from}
-       WHERE (p.number_key LIKE :head OR reverse(p.number_key) LIKE :tail) AND levenshtein(p.number_key, :key) BETWEEN
-         1 AND :allowed ${makerFilter}
-       ORDER BY levenshtein(p.number_key, :key), p.number_key LIMIT 60`,
-      {
-        replacements: {
-          key,
-          head: `${key.slice(0, half)}%`,
-          tail: `${[...key.slice(half)].reverse().join("")}%`,
-          allowed: key.length >= 8 ? 2 : 1,
-          makerId,
-        },
-        type: QueryTypes.SELECT,
-      },
-    );
-    for (const row of near) add(row, "similar", 1 - row.distance / key.length);
-  } else if (!hit && found.size < options.limit && key.length >= 3) {
-    // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
-    const nearRows = await sequelize.query<PartRow>(
-      `SELECT ${COLUMNS} ${from} WHERE p.number_key % :key ${makerFilter} ` +
-        `ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
-      {
-        replacements: { key, makerId },
-        type: QueryTypes.SELECT,
-      },
-    );
-    const fuse = new Fuse(nearRows, {
-      keys: ["number_key"],
-      includeScore: true,
-      threshold: 0.45,
-      ignoreLocation: true,
-    });
-    for (const hit of fuse.search(key)) add(hit.item, "similar", 1 - (hit.score ?? 1));
+  for (const row of numberRows) add(row, "prefix", typed.stripped.length / Math.max(row.number_normalised.length, 1));
+  if (hit && typed.key.length >= 4) {
+    for (const row of await findOneEditAway(typed)) add(row, "similar", 1 - row.distance / typed.key.length);
+  } else if (!hit && found.size < options.limit && typed.key.length >= 3) {
+    for (const { row, closeness } of await findSimilar(typed)) add(row, "similar", closeness);
   }
   const topRank = Math.max(...wordRows.map((r) => r.rank), 0) || 1;
   for (const row of wordRows) add(row, "words", row.rank / topRank);
+  return toResults(found, options.limit);
+}
 
+async function readTyped(query: string, makerId: number | null): Promise<Typed | null> {
+  const typedNumber = normaliseNumber(query);
+  if (typedNumber === "") return null;
+  const prefixHit = (await makerPrefixes())
+    .filter((p) => typedNumber.startsWith(p.prefix) && /\d/.test(typedNumber.slice(p.prefix.length)))
+    .sort((a, b) => b.prefix.length - a.prefix.length);
+  const stripped = prefixHit.length > 0 ? typedNumber.slice(prefixHit[0].prefix.length) : typedNumber;
+  const namedMakers = new Set(prefixHit.filter((p) => p.prefix === prefixHit[0].prefix).map((p) => p.makerId));
+  const forms = [...new Set([typedNumber, stripped])];
+  return {
+    query,
+    stripped,
+    forms,
+    keys: [...new Set(forms.map(lookAlikeKey))],
+    key: lookAlikeKey(stripped),
+    namedMakers,
+    makerId,
+  };
+}
+
+/** The number itself (exact, reformatted, look-alike) and the numbers that start with it, in one query. */
+function findNumbers(typed: Typed): Promise<PartRow[]> {
+  return sequelize.query<PartRow>(
+    `SELECT ${COLUMNS} ${FROM}
+     WHERE (p.number_normalised IN (:forms) OR p.number_key IN (:keys)
+            OR (:prefixes AND (p.number_normalised LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter(typed)}
+     ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200`,
+    {
+      replacements: {
+        forms: typed.forms,
+        keys: typed.keys,
+        prefixes: typed.stripped.length >= 2,
+        like: `${typed.stripped}%`,
+        likeKey: `${typed.key}%`,
+        makerId: typed.makerId,
+      },
+      type: QueryTypes.SELECT,
+    },
+  );
+}
+
+/** Parts found by words, through the full-text index of their descriptions, places, machines and makers. */
+function findWords(typed: Typed, tsquery: string): Promise<Array<PartRow & { rank: number }>> {
+  return sequelize.query<PartRow & { rank: number }>(
+    `SELECT ${COLUMNS}, ts_rank(p.search_document, q) AS rank ${FROM}, to_tsquery('english', :tsquery) q
+     WHERE p.search_document @@ q ${makerFilter(typed)} ORDER BY rank DESC, p.number LIMIT 60`,
+    { replacements: { tsquery, makerId: typed.makerId }, type: QueryTypes.SELECT },
+  );
+}
+
+/**
+ * After a hit, the numbers one character away (two for long ones): they share the first or the last half of the
+ * number exactly, which the prefix and reversed-number indexes find quickly; `levenshtein()` keeps the near ones.
+ */
+function findOneEditAway(typed: Typed): Promise<Array<PartRow & { distance: number }>> {
+  const { key } = typed;
+  const half = Math.floor(key.length / 2);
+  return sequelize.query<PartRow & { distance: number }>(
+    `SELECT ${COLUMNS}, levenshtein(p.number_key, :key) AS distance ${FROM}
+     WHERE (p.number_key LIKE :head OR reverse(p.number_key) LIKE :tail)
+       AND levenshtein(p.number_key, :key) BETWEEN 1 AND :allowed ${makerFilter(typed)}
+     ORDER BY levenshtein(p.number_key, :key), p.number_key LIMIT 60`,
+    {
+      replacements: {
+        key,
+        head: `${key.slice(0, half)}%`,
+        tail: `${[...key.slice(half)].reverse().join("")}%`,
+        allowed: key.length >= 8 ? 2 : 1,
+        makerId: typed.makerId,
+      },
+      type: QueryTypes.SELECT,
+    },
+  );
+}
+
+/** With no hit: trigram candidates from PostgreSQL, ranked by fuse.js. */
+async function findSimilar(typed: Typed): Promise<Array<{ row: PartRow; closeness: number }>> {
+  // The % operator's threshold (0.3) is set on each pooled connection in db/sequelize.ts.
+  const rows = await sequelize.query<PartRow>(
+    `SELECT ${COLUMNS} ${FROM} WHERE p.number_key % :key ${makerFilter(typed)}
+     ORDER BY similarity(p.number_key, :key) DESC LIMIT 60`,
+    { replacements: { key: typed.key, makerId: typed.makerId }, type: QueryTypes.SELECT },
+  );
+  const fuse = new Fuse(rows, { keys: ["number_key"], includeScore: true, threshold: 0.45, ignoreLocation: true });
+  return fuse.search(typed.key).map((hit) => ({ row: hit.item, closeness: 1 - (hit.score ?? 1) }));
+}
+
+/** The best first, each with its latest number and the shared ranking's best answer. */
+async function toResults(found: Found, limit: number): Promise<LookupResult[]> {
   const ranked = [...found.values()]
     .sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number))
-    .slice(0, options.limit);
+    .slice(0, limit);
   if (ranked.length === 0) return [];
   const ids = ranked.map((r) => r.row.id);
   const [latest, crosses] = await Promise.all([latestNumbers(ids), rankCrosses(ids)]);

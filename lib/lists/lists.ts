@@ -243,6 +243,46 @@ function sameToken(stored: string | null, given: string): boolean {
   return a.length === b.length && timingSafeEqual(a, b);
 }
 
+interface ListMachine {
+  id: number;
+  model: string;
+  maker: string;
+  maker_id: number;
+  serial_prefix: string | null;
+}
+
+interface LineRow {
+  id: number;
+  part_id: number | null;
+  standard_item: StandardItem | null;
+  standard_part_id: number | null;
+  quantity: number;
+  notes: string | null;
+  supplier: string | null;
+  supplier_number: string | null;
+  unit_price: string | null;
+  ordered: boolean;
+  number: string | null;
+  maker: string | null;
+  maker_id: number | null;
+  description: string | null;
+  category: PartCategory | null;
+  has_assembly: boolean;
+  used_by_maker: boolean;
+}
+
+type SerialRow = { part_id: number; serial_from: number | null; serial_to: number | null };
+
+/** What every line of one list is read against: its machine, serial, equivalents, chain and serial ranges. */
+interface LineContext {
+  machine: ListMachine | null;
+  serial: number | null;
+  serialText: string | null;
+  equivalents: Awaited<ReturnType<typeof equivalentsFor>>;
+  earlier: Map<number, string[]>;
+  ranges: SerialRow[];
+}
+
 /** The list as its owner sees it, or read-only through its share token. */
 export async function getList(access: { userId: string } | { token: string }, id: number): Promise<ListView> {
   const list = await JobList.findByPk(id);
@@ -250,129 +290,138 @@ export async function getList(access: { userId: string } | { token: string }, id
   const allowed =
     "userId" in access ? list?.userId === access.userId : sameToken(list?.shareToken ?? null, access.token);
   if (!list || !allowed) throw new AppError("not_found", "There is no job list with that id.");
-  const machine = list.machineId
-    ? ((
-        await sequelize.query<{
-          id: number;
-          model: string;
-          maker: string;
-          maker_id: number;
-          serial_prefix: string | null;
-        }>(
-          "SELECT m.id, m.model, k.name AS maker, k.id AS maker_id, " +
-            "m.serial_prefix FROM machines m JOIN makers k ON k.id = m.maker_id " +
-            "WHERE m.id = :id",
-          { replacements: { id: list.machineId }, type: QueryTypes.SELECT },
-        )
-      )[0] ?? null)
-    : null;
-  const lines = await sequelize.query<{
-    id: number;
-    part_id: number | null;
-    standard_item: StandardItem | null;
-    standard_part_id: number | null;
-    quantity: number;
-    notes: string | null;
-    supplier: string | null;
-    supplier_number: string | null;
-    unit_price: string | null;
-    ordered: boolean;
-    number: string | null;
-    maker: string | null;
-    maker_id: number | null;
-    description: string | null;
-    category: PartCategory | null;
-    has_assembly: boolean;
-    used_by_maker: boolean;
-  }>(
-    `SELECT x.id, x.part_id, x.standard_item, x.standard_part_id, x.quantity, x.notes, x.supplier, x.supplier_number,
-      x.unit_price::text AS unit_price, x.ordered,
-            p.number, k.name AS maker, k.id AS maker_id, p.description, p.category,
-            EXISTS (SELECT 1 FROM part_usages u JOIN part_usages o ON o.machine_id = u.machine_id AND o.assembly_id =
-              u.assembly_id AND o.part_id <> u.part_id WHERE u.part_id = p.id) AS has_assembly,
-            EXISTS (SELECT 1 FROM part_usages u JOIN machines ma ON ma.id = u.machine_id WHERE u.part_id = p.id AND
-              ma.maker_id = :makerId) AS used_by_maker
-     FROM job_list_lines x LEFT JOIN original_parts p ON p.id = x.part_id LEFT JOIN makers k ON k.id = p.maker_id
-     WHERE x.list_id = :id AND x.removed_at IS NULL ORDER BY x.id`,
-    { replacements: { id, makerId: machine?.maker_id ?? 0 }, type: QueryTypes.SELECT },
-  );
+  const machine = list.machineId ? await loadListMachine(list.machineId) : null;
+  const lines = await loadLineRows(id, machine?.maker_id ?? 0);
   const partIds = lines.flatMap((l) => (l.part_id === null ? [] : [l.part_id]));
+  const serial = machine ? list.machineSerial : null;
   const [equivalents, earlier, ranges] = await Promise.all([
     equivalentsFor(partIds),
     earlierNumbers(partIds),
-    machine && list.machineSerial !== null && partIds.length > 0
-      ? sequelize.query<{ part_id: number; serial_from: number | null; serial_to: number | null }>(
-          "SELECT part_id, serial_from, serial_to FROM part_usages WHERE " +
-            "machine_id = :machineId AND part_id IN (:partIds)",
-          { replacements: { machineId: machine.id, partIds }, type: QueryTypes.SELECT },
-        )
-      : Promise.resolve([]),
+    machine && serial !== null && partIds.length > 0 ? loadSerialRanges(machine.id, partIds) : Promise.resolve([]),
   ]);
-  const serialText =
-    machine && list.machineSerial !== null ? showSerial(list.machineSerial, machine.serial_prefix) : null;
-  const view: ListLine[] = lines.map((l) => {
-    const order = {
-      supplier: l.supplier,
-      supplierNumber: l.supplier_number,
-      unitPrice: l.unit_price,
-      ordered: l.ordered,
-    };
-    // The table's check constraint: a line has a factory part or a measured item, never both.
-    if (l.part_id === null) return { ...measuredLine(l.id, l.standard_item!, l.quantity, l.notes), ...order };
-    const { options, first } = equivalents.get(l.part_id) ?? { options: [], first: null };
-    const chosen = options.find((o) => o.standardPartId === l.standard_part_id) ?? options[0] ?? null;
-    const number = l.number!;
-    const method = !chosen && first?.repairMethod ? first.repairMethod : null;
-    const warnings: string[] = [];
-    if (!chosen)
-      warnings.push(
-        method
-          ? `${number}: no standard part to order; the catalogue's answer is work: ${method}`
-          : `${number}: no approved standard part yet. Measure it, or size it in the calculators.`,
-      );
-    else if (chosen.fit === "with_modification")
-      warnings.push(
-        `${number} → ${chosen.designation}: fits with modification. Read the notes on the part's page before ordering.`,
-      );
-    else if (chosen.fit === "dimensions_only")
-      warnings.push(`${number} → ${chosen.designation}: a size match only; nobody has reported fitting it yet.`);
-    if (machine && !l.used_by_maker && l.maker_id !== machine.maker_id) {
-      warnings.push(
-        `${number} is a ${l.maker} part that no ${machine.maker} machine uses: check it belongs on this list.`,
-      );
-    }
-    if (machine && serialText !== null) {
-      const own = ranges.filter((r) => r.part_id === l.part_id);
-      if (
-        own.length > 0 &&
-        !own.some((r) => coversSerial({ serialFrom: r.serial_from, serialTo: r.serial_to }, list.machineSerial!))
-      ) {
-        const fitted = own
-          .map((r) => serialRangeText({ serialFrom: r.serial_from, serialTo: r.serial_to }, machine.serial_prefix))
-          .join(" and ");
-        warnings.push(`${number} was fitted to the ${machine.model} ${fitted}; this list is for serial ${serialText}.`);
-      }
-    }
-    return {
-      id: l.id,
-      partId: l.part_id,
-      measured: null,
-      number,
-      earlierNumbers: earlier.get(l.part_id) ?? [],
-      maker: l.maker!,
-      description: l.description!,
-      category: l.category!,
-      categoryName: CATEGORY_NAMES[l.category!],
-      quantity: l.quantity,
-      notes: l.notes,
-      ...order,
-      equivalents: options,
-      chosen,
-      method,
-      warnings,
-      hasAssembly: l.has_assembly,
-    };
-  });
+  const serialText = machine && serial !== null ? showSerial(serial, machine.serial_prefix) : null;
+  const context: LineContext = { machine, serial, serialText, equivalents, earlier, ranges };
+  const view = lines.map((l) => lineView(l, context));
+  return {
+    id: list.id,
+    title: list.title,
+    notes: list.notes,
+    machine: machine && {
+      id: machine.id,
+      model: machine.model,
+      maker: machine.maker,
+      makerId: machine.maker_id,
+      serialPrefix: machine.serial_prefix,
+    },
+    machineSerial: serialText,
+    readOnly,
+    shareToken: readOnly ? null : list.shareToken,
+    updatedAt: list.updatedAt.toISOString(),
+    lines: view,
+    totals: listTotals(view),
+    warnings: view.filter((l) => l.warnings.length > 0).length,
+    cautions: await listCautions(view, partIds),
+  };
+}
+
+async function loadListMachine(machineId: number): Promise<ListMachine | null> {
+  const [machine] = await sequelize.query<ListMachine>(
+    `SELECT m.id, m.model, k.name AS maker, k.id AS maker_id, m.serial_prefix
+     FROM machines m JOIN makers k ON k.id = m.maker_id WHERE m.id = :id`,
+    { replacements: { id: machineId }, type: QueryTypes.SELECT },
+  );
+  return machine ?? null;
+}
+
+/** The list's lines with their parts, and whether any machine of the list's maker uses each part. */
+function loadLineRows(listId: number, makerId: number): Promise<LineRow[]> {
+  return sequelize.query<LineRow>(
+    `SELECT x.id, x.part_id, x.standard_item, x.standard_part_id, x.quantity, x.notes, x.supplier, x.supplier_number,
+            x.unit_price::text AS unit_price, x.ordered, p.number, k.name AS maker, k.id AS maker_id, p.description,
+            p.category,
+            EXISTS (SELECT 1 FROM part_usages u JOIN part_usages o ON o.machine_id = u.machine_id
+                    AND o.assembly_id = u.assembly_id AND o.part_id <> u.part_id
+                    WHERE u.part_id = p.id) AS has_assembly,
+            EXISTS (SELECT 1 FROM part_usages u JOIN machines ma ON ma.id = u.machine_id
+                    WHERE u.part_id = p.id AND ma.maker_id = :makerId) AS used_by_maker
+     FROM job_list_lines x LEFT JOIN original_parts p ON p.id = x.part_id LEFT JOIN makers k ON k.id = p.maker_id
+     WHERE x.list_id = :listId AND x.removed_at IS NULL ORDER BY x.id`,
+    { replacements: { listId, makerId }, type: QueryTypes.SELECT },
+  );
+}
+
+function loadSerialRanges(machineId: number, partIds: number[]): Promise<SerialRow[]> {
+  return sequelize.query<SerialRow>(
+    "SELECT part_id, serial_from, serial_to FROM part_usages WHERE machine_id = :machineId AND part_id IN (:partIds)",
+    { replacements: { machineId, partIds }, type: QueryTypes.SELECT },
+  );
+}
+
+function lineView(l: LineRow, context: LineContext): ListLine {
+  const order = {
+    supplier: l.supplier,
+    supplierNumber: l.supplier_number,
+    unitPrice: l.unit_price,
+    ordered: l.ordered,
+  };
+  // The table's check constraint: a line has a factory part or a measured item, never both.
+  if (l.part_id === null) return { ...measuredLine(l.id, l.standard_item!, l.quantity, l.notes), ...order };
+  const { options, first } = context.equivalents.get(l.part_id) ?? { options: [], first: null };
+  const chosen = options.find((o) => o.standardPartId === l.standard_part_id) ?? options[0] ?? null;
+  const method = !chosen && first?.repairMethod ? first.repairMethod : null;
+  return {
+    id: l.id,
+    partId: l.part_id,
+    measured: null,
+    number: l.number!,
+    earlierNumbers: context.earlier.get(l.part_id) ?? [],
+    maker: l.maker!,
+    description: l.description!,
+    category: l.category!,
+    categoryName: CATEGORY_NAMES[l.category!],
+    quantity: l.quantity,
+    notes: l.notes,
+    ...order,
+    equivalents: options,
+    chosen,
+    method,
+    warnings: lineWarnings(l, chosen, method, context),
+    hasAssembly: l.has_assembly,
+  };
+}
+
+/** What to check before ordering a line, each saying which number it is about. */
+function lineWarnings(l: LineRow, chosen: Equivalent | null, method: string | null, context: LineContext): string[] {
+  const number = l.number!;
+  const { machine, serial, serialText } = context;
+  const warnings: string[] = [];
+  if (!chosen) {
+    warnings.push(
+      method
+        ? `${number}: no standard part to order; the catalogue's answer is work: ${method}`
+        : `${number}: no approved standard part yet. Measure it, or size it in the calculators.`,
+    );
+  } else if (chosen.fit === "with_modification") {
+    const read = "Read the notes on the part's page before ordering.";
+    warnings.push(`${number} → ${chosen.designation}: fits with modification. ${read}`);
+  } else if (chosen.fit === "dimensions_only") {
+    warnings.push(`${number} → ${chosen.designation}: a size match only; nobody has reported fitting it yet.`);
+  }
+  if (machine && !l.used_by_maker && l.maker_id !== machine.maker_id) {
+    warnings.push(
+      `${number} is a ${l.maker} part that no ${machine.maker} machine uses: check it belongs on this list.`,
+    );
+  }
+  const own = context.ranges.filter((r) => r.part_id === l.part_id);
+  const range = (r: SerialRow) => ({ serialFrom: r.serial_from, serialTo: r.serial_to });
+  if (machine && serial !== null && own.length > 0 && !own.some((r) => coversSerial(range(r), serial))) {
+    const fitted = own.map((r) => serialRangeText(range(r), machine.serial_prefix)).join(" and ");
+    warnings.push(`${number} was fitted to the ${machine.model} ${fitted}; this list is for serial ${serialText}.`);
+  }
+  return warnings;
+}
+
+function listTotals(view: ListLine[]): ListView["totals"] {
   const totals = new Map<PartCategory, { lines: number; quantity: number }>();
   for (const l of view) {
     const t = totals.get(l.category) ?? { lines: 0, quantity: 0 };
@@ -380,41 +429,24 @@ export async function getList(access: { userId: string } | { token: string }, id
     t.quantity += l.quantity;
     totals.set(l.category, t);
   }
+  return [...totals.entries()]
+    .map(([category, t]) => ({ category, name: CATEGORY_NAMES[category], ...t }))
+    .sort((a, b) => a.name.localeCompare(b.name));
+}
+
+/** The cautions for the kinds of part on the list and for the places they are fitted (a water pump: hot coolant). */
+async function listCautions(view: ListLine[], partIds: number[]): Promise<CautionKind[]> {
   const cautions = new Set<CautionKind>();
   for (const l of view) if (CAUTIONS[l.category]) cautions.add(CAUTIONS[l.category]!);
-  // The places the parts are fitted carry their own cautions (a water pump: hot coolant under pressure).
   if (partIds.length > 0) {
     const places = await sequelize.query<{ caution: CautionKind }>(
-      "SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id " +
-        "= u.assembly_id WHERE u.part_id IN (:ids) AND a.caution IS NOT NULL",
+      `SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id = u.assembly_id
+       WHERE u.part_id IN (:ids) AND a.caution IS NOT NULL`,
       { replacements: { ids: partIds }, type: QueryTypes.SELECT },
     );
     for (const p of places) cautions.add(p.caution);
   }
-  return {
-    id: list.id,
-    title: list.title,
-    notes: list.notes,
-    machine: machine
-      ? {
-          id: machine.id,
-          model: machine.model,
-          maker: machine.maker,
-          makerId: machine.maker_id,
-          serialPrefix: machine.serial_prefix,
-        }
-      : null,
-    machineSerial: serialText,
-    readOnly,
-    shareToken: readOnly ? null : list.shareToken,
-    updatedAt: list.updatedAt.toISOString(),
-    lines: view,
-    totals: [...totals.entries()]
-      .map(([category, t]) => ({ category, name: CATEGORY_NAMES[category], ...t }))
-      .sort((a, b) => a.name.localeCompare(b.name)),
-    warnings: view.filter((l) => l.warnings.length > 0).length,
-    cautions: [...cautions],
-  };
+  return [...cautions];
 }
 
 /** A line for a standard part worked out from measurements: what to order is the item itself. */
@@ -813,96 +845,107 @@ export async function addRestOfAssembly(
   const list = await ownList(userId, listId);
   const line = await JobListLine.findOne({ where: { id: lineId, listId, removedAt: null } });
   if (!line) throw new AppError("not_found", "That line is not on this list.");
-  if (line.partId === null)
-    throw new AppError(
-      "validation_failed",
-      "This line is a standard part sized from measurements; it belongs to no assembly.",
-      { field: "lineId" },
-    );
-  const chain = (await chainMembers([line.partId])).get(line.partId)!;
-  const usages = await sequelize.query<{
-    machine_id: number;
-    assembly_id: number;
-    model: string;
-    assembly: string;
-    position: string;
-    serial_prefix: string | null;
-    serial_from: number | null;
-    serial_to: number | null;
-  }>(
-    `SELECT u.machine_id, u.assembly_id, m.model, a.name AS assembly, coalesce(u.position, p.description) AS position,
-      m.serial_prefix, u.serial_from, u.serial_to
-     FROM part_usages u JOIN machines m ON m.id = u.machine_id JOIN assemblies a ON a.id = u.assembly_id JOIN
-       original_parts p ON p.id = u.part_id
-     WHERE u.part_id IN (:chain) ORDER BY (u.machine_id = :machineId) DESC, (u.part_id = :partId) DESC, m.model,
-       a.name`,
-    { replacements: { chain, partId: line.partId, machineId: list.machineId ?? 0 }, type: QueryTypes.SELECT },
-  );
-  const usage = usages[0];
-  if (!usage)
-    throw new AppError(
-      "validation_failed",
-      "The catalogue does not say where this part is fitted, so it has no assembly to add.",
-      { field: "lineId" },
-    );
-  const onListMachine = usage.machine_id === list.machineId;
+  if (line.partId === null) {
+    const reason = "This line is a standard part sized from measurements; it belongs to no assembly.";
+    throw new AppError("validation_failed", reason, { field: "lineId" });
+  }
+  const usage = await placeOfPart(line.partId, list.machineId);
   const serial = input.serial
     ? parseSerial(input.serial, usage.serial_prefix, "serial")
-    : onListMachine
+    : usage.machine_id === list.machineId
       ? list.machineSerial
       : null;
+  const { positions, filled, latestOf } = await openPositions(listId, usage);
+  const own = { serialFrom: usage.serial_from, serialTo: usage.serial_to };
+  const { planned, undecided } = planPositions(positions, latestOf, serial, own);
+  if (undecided.length > 0) {
+    const choices = serialChoices(undecided.flat(), usage.serial_prefix, own);
+    if (choices.length > 1) {
+      const question = `Parts of the ${usage.model} ${usage.assembly.toLowerCase()} changed with the serial number.`;
+      throw new AppError("validation_failed", `${question} Which serial is the machine?`, { field: "serial", choices });
+    }
+    // Records that overlap with no serial between them to tell them apart: the earliest-listed part of each.
+    for (const fitting of undecided) {
+      planned.push({ partId: latestOf.get(fitting[0].part_id)!, quantity: fitting[0].quantity });
+    }
+  }
+  const added = await insertPlanned(listId, planned);
+  return {
+    added,
+    machine: usage.model,
+    assembly: usage.assembly,
+    serial: serial === null ? null : showSerial(serial, usage.serial_prefix),
+    /** When no serial was given, the serials the line's own part was fitted to, which chose the parts. */
+    serials: serial === null ? serialRangeText(own, usage.serial_prefix) : null,
+    skipped: [...filled].filter((p) => p !== usage.position),
+  };
+}
 
+interface PartPlace {
+  machine_id: number;
+  assembly_id: number;
+  model: string;
+  assembly: string;
+  position: string;
+  serial_prefix: string | null;
+  serial_from: number | null;
+  serial_to: number | null;
+}
+
+/** Where a part (or a number of its chain) is fitted: on the list's machine first, else the first machine using it. */
+async function placeOfPart(partId: number, listMachineId: number | null): Promise<PartPlace> {
+  const chain = (await chainMembers([partId])).get(partId)!;
+  const [usage] = await sequelize.query<PartPlace>(
+    `SELECT u.machine_id, u.assembly_id, m.model, a.name AS assembly, coalesce(u.position, p.description) AS position,
+            m.serial_prefix, u.serial_from, u.serial_to
+     FROM part_usages u JOIN machines m ON m.id = u.machine_id JOIN assemblies a ON a.id = u.assembly_id
+       JOIN original_parts p ON p.id = u.part_id
+     WHERE u.part_id IN (:chain)
+     ORDER BY (u.machine_id = :machineId) DESC, (u.part_id = :partId) DESC, m.model, a.name LIMIT 1`,
+    { replacements: { chain, partId, machineId: listMachineId ?? 0 }, type: QueryTypes.SELECT },
+  );
+  if (!usage) {
+    const reason = "The catalogue does not say where this part is fitted, so it has no assembly to add.";
+    throw new AppError("validation_failed", reason, { field: "lineId" });
+  }
+  return usage;
+}
+
+/**
+ * The assembly's positions the list does not fill yet, with the parts recorded for each and every part's latest
+ * number. A position is filled by any line whose part, or any number of its chain, sits in it.
+ */
+async function openPositions(listId: number, usage: PartPlace) {
   const place = await sequelize.query<PlaceUsage>(
     `SELECT u.part_id, coalesce(u.position, p.description) AS position, u.quantity, u.serial_from, u.serial_to
      FROM part_usages u JOIN original_parts p ON p.id = u.part_id
      WHERE u.machine_id = :machineId AND u.assembly_id = :assemblyId ORDER BY u.serial_from NULLS FIRST, u.part_id`,
     { replacements: { machineId: usage.machine_id, assemblyId: usage.assembly_id }, type: QueryTypes.SELECT },
   );
-  // What the list already holds, with every number of each line's chain: a position any of them sits in is filled.
-  const listed = (await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"] })).flatMap(
-    (l) => (l.partId === null ? [] : [l.partId]),
-  );
-  const listedChains = await chainMembers(listed);
-  const onList = new Set([...listedChains.values()].flat());
+  const lines = await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"] });
+  const listed = lines.flatMap((l) => (l.partId === null ? [] : [l.partId]));
+  const onList = new Set([...(await chainMembers(listed)).values()].flat());
   const filled = new Set([usage.position, ...place.filter((u) => onList.has(u.part_id)).map((u) => u.position)]);
-
   const positions = new Map<string, PlaceUsage[]>();
-  for (const u of place)
+  for (const u of place) {
     if (!filled.has(u.position)) positions.set(u.position, [...(positions.get(u.position) ?? []), u]);
-  const latest = await Promise.all(
-    [...new Set(place.map((u) => u.part_id))].map(async (id) => [id, (await loadChain(id)).latestId] as const),
-  );
-  const latestOf = new Map(latest);
-
-  const own = { serialFrom: usage.serial_from, serialTo: usage.serial_to };
-  const { planned, undecided } = planPositions(positions, latestOf, serial, own);
-  if (undecided.length > 0) {
-    const choices = serialChoices(undecided.flat(), usage.serial_prefix, own);
-    if (choices.length > 1) {
-      throw new AppError(
-        "validation_failed",
-        `Parts of the ${usage.model} ${usage.assembly.toLowerCase()} changed ` +
-          `with the serial number. Which serial is the machine?`,
-        {
-          field: "serial",
-          choices,
-        },
-      );
-    }
-    // Records that overlap with no serial between them to tell them apart: the earliest-listed part of each.
-    for (const fitting of undecided)
-      planned.push({ partId: latestOf.get(fitting[0].part_id)!, quantity: fitting[0].quantity });
   }
+  const ids = [...new Set(place.map((u) => u.part_id))];
+  const latestOf = new Map(await Promise.all(ids.map(async (id) => [id, (await loadChain(id)).latestId] as const)));
+  return { positions, filled, latestOf };
+}
 
+/** Every planned line written in one transaction (all of the assembly lands, or none), skipping parts listed since. */
+async function insertPlanned(listId: number, planned: Array<{ partId: number; quantity: number }>): Promise<number> {
   const best = await equivalentsFor(planned.map((p) => p.partId));
-  // Work out every line first (reads), then write them all in one transaction: all of the assembly lands, or none.
-  const added = await sequelize.transaction(async (transaction) => {
+  return sequelize.transaction(async (transaction) => {
     await lockList(listId, transaction);
-    const now = new Set(
-      (await JobListLine.findAll({ where: { listId, removedAt: null }, attributes: ["partId"], transaction })).map(
-        (l) => l.partId,
-      ),
-    );
+    const lines = await JobListLine.findAll({
+      where: { listId, removedAt: null },
+      attributes: ["partId"],
+      transaction,
+    });
+    const now = new Set(lines.map((l) => l.partId));
     const rows = planned
       .filter((p) => !now.has(p.partId))
       .map((p) => ({
@@ -917,15 +960,6 @@ export async function addRestOfAssembly(
     await JobList.update({ updatedAt: new Date() }, { where: { id: listId }, transaction });
     return rows.length;
   });
-  return {
-    added,
-    machine: usage.model,
-    assembly: usage.assembly,
-    serial: serial === null ? null : showSerial(serial, usage.serial_prefix),
-    /** When no serial was given, the serials the line's own part was fitted to, which chose the parts. */
-    serials: serial === null ? serialRangeText(own, usage.serial_prefix) : null,
-    skipped: [...filled].filter((p) => p !== usage.position),
-  };
 }
 
 /** One row a line: what to order, by standard designation and sizes, with the shop's own supplier details. */
