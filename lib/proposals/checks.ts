@@ -85,133 +85,130 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
     widthMm: input.widthMm ?? null,
     lengthMm: input.lengthMm ?? null,
   };
-  const checks: ProposalCheck[] = [];
   const designation = input.designation.trim().replace(/\s+/g, " ");
+  if (input.kind === "bearing") return checkBearing(designation, entered);
+  if (input.kind === "v_belt") return checkBelt(designation, entered);
+  if (input.kind === "lip_seal") return checkSeal(designation, entered);
+  return { kind: input.kind, designation, ...entered, attributes: {}, checks: [] };
+}
 
-  if (input.kind === "bearing") {
-    try {
-      const decoded = decodeBearing(designation);
-      const engine = { innerMm: decoded.boreMm, outerMm: decoded.outsideDiameterMm, widthMm: decoded.widthMm };
-      checks.push({
+/** A designation the engine cannot read keeps the sizes entered, with the engine's reason as a warning. */
+function unread(
+  kind: "bearing" | "v_belt",
+  designation: string,
+  entered: StandardDims,
+  error: unknown,
+): CheckedStandard {
+  if (!(error instanceof StandardsInputError)) throw error;
+  const message = `${error.message} The sizes entered are kept as given.`;
+  return {
+    kind,
+    designation,
+    ...entered,
+    attributes: {},
+    checks: [{ level: "warning", field: "standard.designation", message }],
+  };
+}
+
+function checkBearing(designation: string, entered: StandardDims): CheckedStandard {
+  try {
+    const decoded = decodeBearing(designation);
+    const engine = { innerMm: decoded.boreMm, outerMm: decoded.outsideDiameterMm, widthMm: decoded.widthMm };
+    const sizes = `${engine.innerMm} × ${engine.outerMm} × ${engine.widthMm} mm`;
+    const checks: ProposalCheck[] = [
+      {
+        level: "ok",
+        field: "standard.designation",
+        message: `${decoded.designation}: ${decoded.seriesName}, ${sizes}, ${decoded.closures.text}.`,
+      },
+    ];
+    compareEntered(decoded.designation, engine, entered, checks);
+    const attributes = { closures: decoded.closures.text };
+    return { kind: "bearing", designation: decoded.designation, ...engine, lengthMm: null, attributes, checks };
+  } catch (error) {
+    return unread("bearing", designation, entered, error);
+  }
+}
+
+function checkBelt(designation: string, entered: StandardDims): CheckedStandard {
+  try {
+    const belt = decodeBelt(designation);
+    const toMmLen = (v: number) => (belt.unit === "in" ? round(v * MM_PER_INCH, 1) : v);
+    const engine = {
+      widthMm: belt.unit === "in" ? round(belt.topWidth * MM_PER_INCH, 2) : belt.topWidth,
+      lengthMm: toMmLen(belt.pitchLength),
+    };
+    const checks: ProposalCheck[] = [
+      {
         level: "ok",
         field: "standard.designation",
         message:
-          `${decoded.designation}: ${decoded.seriesName}, ${engine.innerMm} × ` +
-          `${engine.outerMm} × ${engine.widthMm} mm, ${decoded.closures.text}.`,
-      });
-      compareEntered(decoded.designation, engine, entered, checks);
-      return {
-        kind: "bearing",
-        designation: decoded.designation,
-        ...engine,
-        lengthMm: null,
-        attributes: { closures: decoded.closures.text },
-        checks,
-      };
-    } catch (error) {
-      if (!(error instanceof StandardsInputError)) throw error;
-      checks.push({
-        level: "warning",
-        field: "standard.designation",
-        message: `${error.message} The sizes entered are kept as given.`,
-      });
-      return { kind: "bearing", designation, ...entered, attributes: {}, checks };
+          `${belt.designation}: section ${belt.section}, ` +
+          `pitch length ${engine.lengthMm} mm, top width ${engine.widthMm} mm.`,
+      },
+    ];
+    // A belt's length may be given as inside, pitch or outside; only a length that matches none of them disagrees.
+    const lengths = [belt.insideLength, belt.pitchLength, belt.outsideLength].map(toMmLen);
+    if (entered.lengthMm != null && !lengths.some((l) => Math.abs(l - entered.lengthMm!) <= 2)) {
+      const given = `${lengths[0]} mm inside, ${lengths[1]} mm pitch and ${lengths[2]} mm outside`;
+      const message = `${belt.designation} is ${given}; ${entered.lengthMm} mm was entered. One of them is wrong.`;
+      checks.push({ level: "warning", field: "standard.lengthMm", message });
     }
+    compareEntered(belt.designation, { widthMm: engine.widthMm }, { widthMm: entered.widthMm }, checks);
+    const attributes = { section: belt.section };
+    return {
+      kind: "v_belt",
+      designation: belt.designation,
+      innerMm: null,
+      outerMm: null,
+      ...engine,
+      attributes,
+      checks,
+    };
+  } catch (error) {
+    return unread("v_belt", designation, entered, error);
   }
+}
 
-  if (input.kind === "v_belt") {
-    try {
-      const belt = decodeBelt(designation);
-      const toMmLen = (v: number) => (belt.unit === "in" ? round(v * MM_PER_INCH, 1) : v);
-      const engine = {
-        widthMm: belt.unit === "in" ? round(belt.topWidth * MM_PER_INCH, 2) : belt.topWidth,
-        lengthMm: toMmLen(belt.pitchLength),
-      };
-      checks.push({
-        level: "ok",
-        field: "standard.designation",
-        message:
-          `${belt.designation}: section ${belt.section}, pitch length ` +
-          `${engine.lengthMm} mm, top width ${engine.widthMm} mm.`,
-      });
-      // A belt's length may be given as inside, pitch or outside; only a length that matches none of them disagrees.
-      const lengths = [belt.insideLength, belt.pitchLength, belt.outsideLength].map(toMmLen);
-      if (entered.lengthMm != null && !lengths.some((l) => Math.abs(l - entered.lengthMm!) <= 2)) {
-        checks.push({
-          level: "warning",
-          field: "standard.lengthMm",
-          message:
-            `${belt.designation} is ${lengths[0]} mm inside, ${lengths[1]} mm pitch ` +
-            `and ${lengths[2]} mm outside; ${entered.lengthMm} mm was entered. One ` +
-            `of them is wrong.`,
-        });
-      }
-      compareEntered(belt.designation, { widthMm: engine.widthMm }, { widthMm: entered.widthMm }, checks);
-      return {
-        kind: "v_belt",
-        designation: belt.designation,
-        innerMm: null,
-        outerMm: null,
-        ...engine,
-        attributes: { section: belt.section },
-        checks,
-      };
-    } catch (error) {
-      if (!(error instanceof StandardsInputError)) throw error;
-      checks.push({
-        level: "warning",
-        field: "standard.designation",
-        message: `${error.message} The sizes entered are kept as given.`,
-      });
-      return { kind: "v_belt", designation, ...entered, attributes: {}, checks };
-    }
+/** A seal's shaft × bore × width read from its designation, and whether it is a size one can buy. */
+function checkSeal(designation: string, entered: StandardDims): CheckedStandard {
+  const checks: ProposalCheck[] = [];
+  const size = readSealSize(designation);
+  const dims = { ...entered };
+  if (size) {
+    const { inch, ...read } = size;
+    compareEntered(`${designation}`, read, entered, checks);
+    Object.assign(dims, read);
+    checks.push(sealSizeCheck(read, inch));
+  } else if (entered.innerMm == null || entered.outerMm == null || entered.widthMm == null) {
+    const message =
+      "A lip seal is ordered by shaft × bore × width: " +
+      "write them in the designation (35 × 52 × 7) or enter the three sizes.";
+    checks.push({ level: "warning", field: "standard.designation", message });
   }
+  return { kind: "lip_seal", designation, ...dims, attributes: {}, checks };
+}
 
-  if (input.kind === "lip_seal") {
-    const size = readSealSize(designation);
-    const dims = { ...entered };
-    if (size) {
-      const { inch, ...read } = size;
-      compareEntered(`${designation}`, read, entered, checks);
-      Object.assign(dims, read);
-      const listed = (
-        inch ? INCH_SEALS.map(([a, b, c]) => [a * MM_PER_INCH, b * MM_PER_INCH, c * MM_PER_INCH]) : METRIC_SEALS
-      ).some(
-        ([a, b, c]) =>
-          Math.abs(a - read.innerMm) < 0.1 && Math.abs(b - read.outerMm) < 0.1 && Math.abs(c - read.widthMm) < 0.1,
-      );
-      const sizes =
-        `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × ` + `width ${round(read.widthMm, 2)} mm`;
-      checks.push(
-        listed
-          ? { level: "ok", field: "standard.designation", message: `${sizes} is a listed standard seal size.` }
-          : inch
-            ? {
-                level: "ok",
-                field: "standard.designation",
-                message:
-                  `${sizes}: an inch seal. Inch seals are made for far more bores than ` +
-                  `our table of common sizes holds; order by these three sizes.`,
-              }
-            : {
-                level: "warning",
-                field: "standard.designation",
-                message: `${sizes} is not in our table of common seal sizes; check that it can be bought.`,
-              },
-      );
-    } else if (entered.innerMm == null || entered.outerMm == null || entered.widthMm == null) {
-      checks.push({
-        level: "warning",
-        field: "standard.designation",
-        message:
-          "A lip seal is ordered by shaft × bore × width: write them in the " +
-          "designation (35 × 52 × 7) or enter the three sizes.",
-      });
-    }
-    return { kind: "lip_seal", designation, ...dims, attributes: {}, checks };
+function sealSizeCheck(read: { innerMm: number; outerMm: number; widthMm: number }, inch: boolean): ProposalCheck {
+  const table = inch
+    ? INCH_SEALS.map(([a, b, c]) => [a * MM_PER_INCH, b * MM_PER_INCH, c * MM_PER_INCH])
+    : METRIC_SEALS;
+  const near = (a: number, b: number) => Math.abs(a - b) < 0.1;
+  const listed = table.some(([a, b, c]) => near(a, read.innerMm) && near(b, read.outerMm) && near(c, read.widthMm));
+  const sizes = `Shaft ${round(read.innerMm, 2)} × bore ${round(read.outerMm, 2)} × width ${round(read.widthMm, 2)} mm`;
+  const field = "standard.designation";
+  if (listed) return { level: "ok", field, message: `${sizes} is a listed standard seal size.` };
+  if (inch) {
+    const message =
+      `${sizes}: an inch seal. Inch seals are made for far more bores than our table of common sizes holds; ` +
+      "order by these three sizes.";
+    return { level: "ok", field, message };
   }
-
-  return { kind: input.kind, designation, ...entered, attributes: {}, checks };
+  return {
+    level: "warning",
+    field,
+    message: `${sizes} is not in our table of common seal sizes; check that it can be bought.`,
+  };
 }
 
 export interface MeasurementDeviation {
