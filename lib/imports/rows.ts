@@ -109,43 +109,93 @@ const DIMENSION_WORDS: Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", st
   lengthMm: "length",
 };
 
+/** The first problem found in a row, with the field whose column it is in. */
+class RowFailure {
+  constructor(
+    readonly field: ImportField | null,
+    readonly reason: string,
+  ) {}
+}
+
+type Cell = (field: ImportField) => string;
+type Dims = Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", number | null>;
+
 /**
  * Reads one spreadsheet row through the column mapping. The first problem found is returned with the column it is
  * in, so that the rejected-rows list can say exactly where to look.
  */
 export function parseImportRow(record: Record<string, string | undefined>, mapping: ImportMappingValue): RowResult {
-  const column = (field: ImportField) => mapping[field] ?? null;
-  const text = (field: ImportField): string => {
-    const c = column(field);
+  const text: Cell = (field) => {
+    const c = mapping[field];
     return c ? (record[c] ?? "").trim() : "";
   };
-  const fail = (field: ImportField | null, reason: string): RowResult => ({
-    ok: false,
-    problem: { column: field ? column(field) : null, reason },
-  });
-
-  const maker = text("maker");
-  if (!maker) return fail("maker", "The maker is empty.");
-  if (maker.length > 120) return fail("maker", "The maker's name is longer than 120 characters.");
-  const number = text("number");
-  if (!number) return fail("number", "The factory number is empty.");
-  if (number.length > 60) return fail("number", "The factory number is longer than 60 characters.");
-  if (!/[A-Za-z0-9]/.test(number)) return fail("number", "The factory number has no letter or digit.");
-
-  let category: PartCategory | null = null;
-  const categoryText = text("category");
-  if (categoryText) {
-    category = CATEGORY_WORDS.get(squash(categoryText)) ?? null;
-    if (!category)
-      return fail("category", `Unknown category "${categoryText}". Use one of: ${PART_CATEGORIES.join(", ")}.`);
+  try {
+    return { ok: true, row: readRow(text) };
+  } catch (error) {
+    if (!(error instanceof RowFailure)) throw error;
+    return {
+      ok: false,
+      problem: { column: error.field ? (mapping[error.field] ?? null) : null, reason: error.reason },
+    };
   }
+}
 
-  const dims: Record<"innerMm" | "outerMm" | "widthMm" | "lengthMm", number | null> = {
-    innerMm: null,
-    outerMm: null,
-    widthMm: null,
-    lengthMm: null,
+function readRow(text: Cell): ParsedRow {
+  const maker = required(text, "maker", "The maker is empty.", 120, "The maker's name is longer than 120 characters.");
+  const number = required(
+    text,
+    "number",
+    "The factory number is empty.",
+    60,
+    "The factory number is longer than 60 characters.",
+  );
+  if (!/[A-Za-z0-9]/.test(number)) throw new RowFailure("number", "The factory number has no letter or digit.");
+  const category = readCategory(text);
+  const dims = readDims(text);
+  const standard = readStandard(text, category, dims);
+  const fitText = text("fit");
+  const fit = readFit(fitText);
+  const notes = optional(text, "notes", 2000, "The notes are longer than 2000 characters.");
+  const description = optional(text, "description", 200, "The description is longer than 200 characters.");
+  return {
+    maker,
+    number,
+    description,
+    category,
+    ...dims,
+    standard,
+    fit,
+    fitGiven: Boolean(fitText),
+    notes,
+    machine: text("machine") || null,
+    assembly: text("assembly") || null,
   };
+}
+
+function required(text: Cell, field: ImportField, empty: string, max: number, long: string): string {
+  const value = text(field);
+  if (!value) throw new RowFailure(field, empty);
+  if (value.length > max) throw new RowFailure(field, long);
+  return value;
+}
+
+function optional(text: Cell, field: ImportField, max: number, long: string): string | null {
+  const value = text(field);
+  if (value.length > max) throw new RowFailure(field, long);
+  return value || null;
+}
+
+function readCategory(text: Cell): PartCategory | null {
+  const categoryText = text("category");
+  if (!categoryText) return null;
+  const category = CATEGORY_WORDS.get(squash(categoryText));
+  if (!category)
+    throw new RowFailure("category", `Unknown category "${categoryText}". Use one of: ${PART_CATEGORIES.join(", ")}.`);
+  return category;
+}
+
+function readDims(text: Cell): Dims {
+  const dims: Dims = { innerMm: null, outerMm: null, widthMm: null, lengthMm: null };
   for (const key of ["innerMm", "outerMm", "widthMm", "lengthMm"] as const) {
     const value = text(key);
     if (!value) continue;
@@ -153,73 +203,43 @@ export function parseImportRow(record: Record<string, string | undefined>, mappi
       dims[key] = Math.round(parseLength(value, "mm").mm * 1000) / 1000;
     } catch (error) {
       if (!(error instanceof StandardsInputError)) throw error;
-      return fail(key, `The ${DIMENSION_WORDS[key]} "${value}" cannot be read as a size.`);
+      throw new RowFailure(key, `The ${DIMENSION_WORDS[key]} "${value}" cannot be read as a size.`);
     }
   }
+  return dims;
+}
 
-  const designation = text("designation");
-  if (!designation) return fail("designation", "The standard designation is empty.");
-  if (designation.length > 80) return fail("designation", "The standard designation is longer than 80 characters.");
-  let kind: StandardKind | null = null;
+/** The standard part, read by the engine from its designation; sizes in the row that contradict it reject the row. */
+function readStandard(text: Cell, category: PartCategory | null, dims: Dims): ParsedRow["standard"] {
+  const designation = required(
+    text,
+    "designation",
+    "The standard designation is empty.",
+    80,
+    "The standard designation is longer than 80 characters.",
+  );
   const kindText = text("standardKind");
+  let kind: StandardKind | null = category ? KIND_FOR_CATEGORY[category] : null;
   if (kindText) {
     kind = KIND_WORDS.get(squash(kindText)) ?? null;
-    if (!kind)
-      return fail(
-        "standardKind",
-        `Unknown standard part kind "${kindText}". Use one of: ${STANDARD_KINDS.join(", ")}.`,
-      );
-  } else if (category) {
-    kind = KIND_FOR_CATEGORY[category];
+    const reason = `Unknown standard part kind "${kindText}". Use one of: ${STANDARD_KINDS.join(", ")}.`;
+    if (!kind) throw new RowFailure("standardKind", reason);
   }
-  if (!kind)
-    return fail(
-      kindText ? "standardKind" : "category",
-      "Say what kind of standard part it is: give the category or the standard part kind.",
-    );
-
-  // The engine reads the designation; sizes in the row that contradict it reject the row.
+  if (!kind) {
+    const reason = "Say what kind of standard part it is: give the category or the standard part kind.";
+    throw new RowFailure(kindText ? "standardKind" : "category", reason);
+  }
   const checked = checkStandard({ kind, designation, ...dims });
   const contradiction = checked.checks.find((c) => c.level === "warning" && c.field !== "standard.designation");
-  if (contradiction) {
-    const key = contradiction.field.replace("standard.", "") as ImportField;
-    return fail(key, contradiction.message);
-  }
+  if (contradiction)
+    throw new RowFailure(contradiction.field.replace("standard.", "") as ImportField, contradiction.message);
+  const { innerMm, outerMm, widthMm, lengthMm, attributes } = checked;
+  return { kind, designation: checked.designation, innerMm, outerMm, widthMm, lengthMm, attributes };
+}
 
-  let fit: Fit = "dimensions_only";
-  const fitText = text("fit");
-  if (fitText) {
-    const read = FIT_WORDS.get(squash(fitText));
-    if (!read) return fail("fit", `Unknown fit "${fitText}". Use direct, with modification or dimensions only.`);
-    fit = read;
-  }
-  const notes = text("notes");
-  if (notes.length > 2000) return fail("notes", "The notes are longer than 2000 characters.");
-  const description = text("description");
-  if (description.length > 200) return fail("description", "The description is longer than 200 characters.");
-
-  return {
-    ok: true,
-    row: {
-      maker,
-      number,
-      description: description || null,
-      category,
-      ...dims,
-      standard: {
-        kind,
-        designation: checked.designation,
-        innerMm: checked.innerMm,
-        outerMm: checked.outerMm,
-        widthMm: checked.widthMm,
-        lengthMm: checked.lengthMm,
-        attributes: checked.attributes,
-      },
-      fit,
-      fitGiven: Boolean(fitText),
-      notes: notes || null,
-      machine: text("machine") || null,
-      assembly: text("assembly") || null,
-    },
-  };
+function readFit(fitText: string): Fit {
+  if (!fitText) return "dimensions_only";
+  const read = FIT_WORDS.get(squash(fitText));
+  if (!read) throw new RowFailure("fit", `Unknown fit "${fitText}". Use direct, with modification or dimensions only.`);
+  return read;
 }

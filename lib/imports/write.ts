@@ -38,44 +38,7 @@ export const catalogueWriter: ChunkWriter = {
     const inserted = (table: string, lines: number[], ids: number[]) =>
       ids.forEach((id, i) => changes.push({ line: lines[i], table, id, action: "insert", before: null }));
 
-    const makers = await Maker.bulkCreate(
-      plan.newMakers.map((m) => ({ name: m.name, prefixes: [], country: null, note: null })),
-      { ...t, returning: true },
-    );
-    makers.forEach((row, i) => {
-      const planned = plan.newMakers[i];
-      real.set(planned.placeholder, row.id);
-      context.memory.makers.set(planned.key, row.id);
-      context.names.makers.set(planned.key, { id: row.id, name: row.name, prefixes: [] });
-    });
-    inserted(
-      "makers",
-      plan.newMakers.map((m) => m.line),
-      makers.map((m) => m.id),
-    );
-
-    const standards = await StandardPart.bulkCreate(
-      plan.newStandards.map(({ values: s }) => ({
-        kind: s.kind,
-        designation: s.designation,
-        innerMm: s.innerMm,
-        outerMm: s.outerMm,
-        widthMm: s.widthMm,
-        lengthMm: s.lengthMm,
-        attributes: s.attributes,
-      })),
-      { ...t, returning: true },
-    );
-    standards.forEach((row, i) => {
-      real.set(plan.newStandards[i].placeholder, row.id);
-      context.memory.standards.set(plan.newStandards[i].key, row.id);
-    });
-    inserted(
-      "standard_parts",
-      plan.newStandards.map((s) => s.line),
-      standards.map((s) => s.id),
-    );
-
+    await writeMakersAndStandards(plan, context, real, inserted);
     await writeParts(plan, context, real, ref, inserted);
     for (const u of plan.partUpdates) {
       await OriginalPart.update(u.diff, { where: { id: u.id }, ...t });
@@ -119,6 +82,52 @@ export const catalogueWriter: ChunkWriter = {
     await recordChanges(changes, context);
   },
 };
+
+/** New makers and standard parts first: the parts and crosses of the chunk name them. */
+async function writeMakersAndStandards(
+  plan: ChunkPlan,
+  context: WriteContext,
+  real: Map<number, number>,
+  inserted: (table: string, lines: number[], ids: number[]) => void,
+): Promise<void> {
+  const t = { transaction: context.transaction };
+  const makers = await Maker.bulkCreate(
+    plan.newMakers.map((m) => ({ name: m.name, prefixes: [], country: null, note: null })),
+    { ...t, returning: true },
+  );
+  makers.forEach((row, i) => {
+    const planned = plan.newMakers[i];
+    real.set(planned.placeholder, row.id);
+    context.memory.makers.set(planned.key, row.id);
+    context.names.makers.set(planned.key, { id: row.id, name: row.name, prefixes: [] });
+  });
+  inserted(
+    "makers",
+    plan.newMakers.map((m) => m.line),
+    makers.map((m) => m.id),
+  );
+  const standards = await StandardPart.bulkCreate(
+    plan.newStandards.map(({ values: s }) => ({
+      kind: s.kind,
+      designation: s.designation,
+      innerMm: s.innerMm,
+      outerMm: s.outerMm,
+      widthMm: s.widthMm,
+      lengthMm: s.lengthMm,
+      attributes: s.attributes,
+    })),
+    { ...t, returning: true },
+  );
+  standards.forEach((row, i) => {
+    real.set(plan.newStandards[i].placeholder, row.id);
+    context.memory.standards.set(plan.newStandards[i].key, row.id);
+  });
+  inserted(
+    "standard_parts",
+    plan.newStandards.map((s) => s.line),
+    standards.map((s) => s.id),
+  );
+}
 
 /** New parts in one statement, then where they are used; later chunks see the parts under their real ids. */
 async function writeParts(

@@ -487,60 +487,13 @@ async function landInCatalogue(s: Proposal, transaction: Transaction): Promise<{
       { standardPartId: s.standardPartId, newStandard: s.newStandard as ResolvedStandard["newStandard"], checks: [] },
     ),
   );
-  let partId = s.originalPartId;
-  if (!partId && s.newPart) {
-    const np = s.newPart;
-    const maker = await Maker.findByPk(np.makerId, { transaction });
-    const { normalised, key } = searchForms(np.number, maker?.prefixes ?? []);
-    const [part] = await OriginalPart.findOrCreate({
-      where: { makerId: np.makerId, numberNormalised: normalised },
-      defaults: {
-        makerId: np.makerId,
-        number: np.number,
-        numberNormalised: normalised,
-        numberKey: key,
-        description: np.description,
-        category: np.category,
-        innerMm: null,
-        outerMm: null,
-        widthMm: null,
-        lengthMm: null,
-        dimensionsNote: null,
-      },
-      transaction,
-    });
-    partId = part.id;
-    if (np.machineId && np.assemblyId) {
-      await PartUsage.findOrCreate({
-        where: { partId, machineId: np.machineId, assemblyId: np.assemblyId },
-        defaults: { partId, machineId: np.machineId, assemblyId: np.assemblyId, quantity: 1, serialNote: null },
-        transaction,
-      });
-    }
-  }
-  let standardId = s.standardPartId;
-  if (!standardId && s.newStandard) {
-    const ns = s.newStandard as NewStandardInput & { attributes?: Record<string, unknown> };
-    const [standard] = await StandardPart.findOrCreate({
-      where: { kind: ns.kind, designation: ns.designation },
-      defaults: {
-        kind: ns.kind,
-        designation: ns.designation,
-        innerMm: ns.innerMm ?? null,
-        outerMm: ns.outerMm ?? null,
-        widthMm: ns.widthMm ?? null,
-        lengthMm: ns.lengthMm ?? null,
-        attributes: ns.attributes ?? {},
-      },
-      transaction,
-    });
-    standardId = standard.id;
-  }
+  const partId = s.originalPartId ?? (await landPart(s.newPart!, transaction));
+  const standardId = s.standardPartId ?? (await landStandard(s.newStandard!, transaction));
   const [cross, created] = await Cross.findOrCreate({
-    where: { originalPartId: partId!, standardPartId: standardId!, status: "approved" },
+    where: { originalPartId: partId, standardPartId: standardId, status: "approved" },
     defaults: {
-      originalPartId: partId!,
-      standardPartId: standardId!,
+      originalPartId: partId,
+      standardPartId: standardId,
       repairMethod: null,
       fit: s.fit,
       notes: s.notes,
@@ -561,18 +514,70 @@ async function landInCatalogue(s: Proposal, transaction: Transaction): Promise<{
     { originalPartId: partId, standardPartId: standardId, crossId: cross.id },
     { where: { id: s.id }, transaction },
   );
-  return { partId: partId!, crossId: cross.id };
+  return { partId, crossId: cross.id };
 }
+
+/** The proposal's new part, added (or found, when another approval added it first), with where it is fitted. */
+async function landPart(np: NonNullable<Proposal["newPart"]>, transaction: Transaction): Promise<number> {
+  const maker = await Maker.findByPk(np.makerId, { transaction });
+  const { normalised, key } = searchForms(np.number, maker?.prefixes ?? []);
+  const [part] = await OriginalPart.findOrCreate({
+    where: { makerId: np.makerId, numberNormalised: normalised },
+    defaults: {
+      makerId: np.makerId,
+      number: np.number,
+      numberNormalised: normalised,
+      numberKey: key,
+      description: np.description,
+      category: np.category,
+      innerMm: null,
+      outerMm: null,
+      widthMm: null,
+      lengthMm: null,
+      dimensionsNote: null,
+    },
+    transaction,
+  });
+  if (np.machineId && np.assemblyId) {
+    const where = { partId: part.id, machineId: np.machineId, assemblyId: np.assemblyId };
+    await PartUsage.findOrCreate({
+      where,
+      defaults: { ...where, quantity: 1, serialNote: null, position: np.description },
+      transaction,
+    });
+  }
+  return part.id;
+}
+
+/** The proposal's new standard part, added (or found). */
+async function landStandard(
+  newStandard: NonNullable<Proposal["newStandard"]>,
+  transaction: Transaction,
+): Promise<number> {
+  const ns = newStandard as NewStandardInput & { attributes?: Record<string, unknown> };
+  const [standard] = await StandardPart.findOrCreate({
+    where: { kind: ns.kind, designation: ns.designation },
+    defaults: {
+      kind: ns.kind,
+      designation: ns.designation,
+      innerMm: ns.innerMm ?? null,
+      outerMm: ns.outerMm ?? null,
+      widthMm: ns.widthMm ?? null,
+      lengthMm: ns.lengthMm ?? null,
+      attributes: ns.attributes ?? {},
+    },
+    transaction,
+  });
+  return standard.id;
+}
+
+type DecisionInput = { action: Decision; message: string; version?: number };
 
 /**
  * A moderator's decision. It is a conditional update on a pending row (and on its version when one is given), so
  * when two moderators decide at once exactly one wins and the other is told, with nothing written for them.
  */
-export async function decide(
-  moderator: Actor,
-  id: number,
-  decision: { action: Decision; message: string; version?: number },
-) {
+export async function decide(moderator: Actor, id: number, decision: DecisionInput) {
   const current = await Proposal.findByPk(id);
   if (!current) throw new AppError("not_found", "There is no proposal with that id.");
   if (current.userId === moderator.id)
@@ -580,18 +585,29 @@ export async function decide(
   if (decision.version !== undefined && decision.version !== current.version) {
     throw new AppError("conflict", "This proposal changed since you opened it. Reload it and decide again.");
   }
+  const result = await recordDecision(moderator, current, decision);
+  if (!result) return explainLostDecision(id);
+  const mailSent = await tellSubmitter(result.proposal, decision, result.landed);
+  return {
+    proposal: { id, status: result.proposal.status, version: result.proposal.version },
+    cross: result.landed ? { id: result.landed.crossId, partId: result.landed.partId } : null,
+    mailSent,
+  };
+}
 
-  const result = await sequelize.transaction(async (transaction) => {
+/** The decision, what it lands in the catalogue and its audit entry, in one transaction; null if another won. */
+async function recordDecision(moderator: Actor, current: Proposal, decision: DecisionInput) {
+  return sequelize.transaction(async (transaction) => {
     const [rows] = (await sequelize.query(
-      `UPDATE proposals SET status = :status, version = version + 1, moderator_message = :message, decided_by =
-        :moderator, decided_at = now(), updated_at = now()
+      `UPDATE proposals SET status = :status, version = version + 1, moderator_message = :message,
+              decided_by = :moderator, decided_at = now(), updated_at = now()
        WHERE id = :id AND status = 'pending' AND version = :version RETURNING id`,
       {
         replacements: {
           status: STATUS_FOR[decision.action],
           message: decision.message || null,
           moderator: moderator.id,
-          id,
+          id: current.id,
           version: current.version,
         },
         transaction,
@@ -599,60 +615,53 @@ export async function decide(
     )) as [Array<{ id: number }>, unknown];
     if (rows.length === 0) return null;
     const landed = decision.action === "approve" ? await landInCatalogue(current, transaction) : null;
-    const after = await Proposal.findByPk(id, { transaction });
+    const after = (await Proposal.findByPk(current.id, { transaction }))!;
     await recordAudit(
       {
         actorId: moderator.id,
         action: `proposal.${decision.action}`,
         subjectType: "proposal",
-        subjectId: id,
+        subjectId: current.id,
         before: snapshot(current),
-        after: snapshot(after!),
+        after: snapshot(after),
       },
       transaction,
     );
-    return { proposal: after!, landed };
+    return { proposal: after, landed };
   });
+}
 
-  if (!result) {
-    const now = await Proposal.findByPk(id);
-    if (!now) throw new AppError("not_found", "There is no proposal with that id.");
-    if (now.status !== "pending")
-      throw new AppError(
-        "conflict",
-        `This proposal was already decided (${now.status.replace("_", " ")}). Reload the queue.`,
-      );
-    throw new AppError("conflict", "This proposal changed since you opened it. Reload it and decide again.");
+/** Why a decision wrote nothing: the proposal is gone, decided by another moderator, or changed meanwhile. */
+async function explainLostDecision(id: number): Promise<never> {
+  const now = await Proposal.findByPk(id);
+  if (!now) throw new AppError("not_found", "There is no proposal with that id.");
+  if (now.status !== "pending") {
+    const status = now.status.replace("_", " ");
+    throw new AppError("conflict", `This proposal was already decided (${status}). Reload the queue.`);
   }
+  throw new AppError("conflict", "This proposal changed since you opened it. Reload it and decide again.");
+}
 
-  const submitter = await User.findByPk(result.proposal.userId);
-  let mailSent = false;
-  if (submitter?.notifyByEmail) {
-    const names = await numberAndStandard(result.proposal);
-    // Approved: straight to the part page, where the cross now shows. Sent back: to the form. Rejected: the proposal
-    // itself.
-    const url =
-      decision.action === "request_changes"
-        ? `${env.APP_URL}/proposals/${id}/edit`
-        : result.landed
-          ? `${env.APP_URL}/parts/${result.landed.partId}`
-          : `${env.APP_URL}/proposals/${id}`;
-    mailSent = await trySend(() =>
-      sendMail(
-        decisionMail(submitter.email, {
-          outcome: STATUS_FOR[decision.action] as "approved",
-          ...names,
-          message: decision.message,
-          url,
-        }),
-      ),
-    );
-  }
-  return {
-    proposal: { id, status: result.proposal.status, version: result.proposal.version },
-    cross: result.landed ? { id: result.landed.crossId, partId: result.landed.partId } : null,
-    mailSent,
-  };
+/**
+ * The member's e-mail, unless they turned it off. Approved: straight to the part page, where the cross now shows.
+ * Sent back: to the form. Rejected: the proposal itself.
+ */
+async function tellSubmitter(
+  proposal: Proposal,
+  decision: DecisionInput,
+  landed: { partId: number } | null,
+): Promise<boolean> {
+  const submitter = await User.findByPk(proposal.userId);
+  if (!submitter?.notifyByEmail) return false;
+  const names = await numberAndStandard(proposal);
+  const url =
+    decision.action === "request_changes"
+      ? `${env.APP_URL}/proposals/${proposal.id}/edit`
+      : landed
+        ? `${env.APP_URL}/parts/${landed.partId}`
+        : `${env.APP_URL}/proposals/${proposal.id}`;
+  const outcome = STATUS_FOR[decision.action] as "approved";
+  return trySend(() => sendMail(decisionMail(submitter.email, { outcome, ...names, message: decision.message, url })));
 }
 
 /** A member confirms an approved cross they have fitted; once each. */

@@ -197,119 +197,129 @@ export async function getProposalDetail(id: number, viewer: { id: string; role: 
   const mine = proposal.userId === viewer.id;
   if (!mine && !hasPermission(viewer.role, "proposals:review"))
     throw new AppError("not_found", "There is no proposal with that id.");
-
   const part = proposal.originalPartId ? await OriginalPart.findByPk(proposal.originalPartId) : null;
-  const makerId = part?.makerId ?? proposal.newPart!.makerId;
-  const maker = await Maker.findByPk(makerId);
-  const machine = proposal.newPart?.machineId ? await Machine.findByPk(proposal.newPart.machineId) : null;
-  const assembly = proposal.newPart?.assemblyId ? await Assembly.findByPk(proposal.newPart.assemblyId) : null;
-  const std = proposal.standardPartId ? await StandardPart.findByPk(proposal.standardPartId) : null;
-  const standardPart: StandardView = std
-    ? {
-        id: std.id,
-        kind: std.kind,
-        designation: std.designation,
-        innerMm: std.innerMm,
-        outerMm: std.outerMm,
-        widthMm: std.widthMm,
-        lengthMm: std.lengthMm,
-        isNew: false,
-      }
-    : {
-        id: null,
-        kind: proposal.newStandard!.kind,
-        designation: proposal.newStandard!.designation,
-        innerMm: proposal.newStandard!.innerMm ?? null,
-        outerMm: proposal.newStandard!.outerMm ?? null,
-        widthMm: proposal.newStandard!.widthMm ?? null,
-        lengthMm: proposal.newStandard!.lengthMm ?? null,
-        isNew: true,
-      };
-  const photos = await ProposalPhoto.findAll({ where: { proposalId: id }, order: [["id", "ASC"]] });
-  const existingCrosses = part
-    ? await sequelize.query<{
-        id: number;
-        designation: string | null;
-        repair_method: string | null;
-        fit: Fit;
-        status: string;
-        origin: string;
-        confirmations: string;
-      }>(
-        `SELECT c.id, sp.designation, c.repair_method, c.fit, c.status, c.origin, (SELECT count(*) FROM confirmations f
-          WHERE f.cross_id = c.id) AS confirmations
-         FROM crosses c LEFT JOIN standard_parts sp ON sp.id = c.standard_part_id
-         WHERE c.original_part_id = :partId AND c.status <> 'rejected' ORDER BY c.status, c.fit, c.id`,
-        { replacements: { partId: part.id }, type: QueryTypes.SELECT },
-      )
-    : [];
-  const [record] = await sequelize.query<{ approved: string; rejected: string; open: string }>(
-    `SELECT count(*) FILTER (WHERE status = 'approved') AS approved, count(*) FILTER (WHERE status = 'rejected') AS
-      rejected,
-            count(*) FILTER (WHERE status IN ('pending', 'changes_requested')) AS open
-     FROM proposals WHERE user_id = :userId`,
-    { replacements: { userId: proposal.userId }, type: QueryTypes.SELECT },
-  );
-  const submitter = await User.findByPk(proposal.userId, { attributes: ["email"] });
-
+  const [partView, standardPart, photos, existingCrosses, submitterRecord, submitter] = await Promise.all([
+    partOf(proposal, part),
+    standardOf(proposal),
+    ProposalPhoto.findAll({ where: { proposalId: id }, order: [["id", "ASC"]] }),
+    part ? crossesOf(part.id) : [],
+    recordOf(proposal.userId),
+    User.findByPk(proposal.userId, { attributes: ["email"] }),
+  ]);
+  const partSizes = part && {
+    number: part.number,
+    innerMm: part.innerMm,
+    outerMm: part.outerMm,
+    widthMm: part.widthMm,
+    lengthMm: part.lengthMm,
+  };
   return {
     ...toRow(raw),
     submitter: submitter?.email ?? raw.submitter,
     mine,
-    part: {
-      id: part?.id ?? null,
-      isNew: !part,
-      number: part?.number ?? proposal.newPart!.number,
-      maker: maker?.name ?? "?",
-      makerId,
-      description: part?.description ?? proposal.newPart!.description,
-      category: part?.category ?? proposal.newPart!.category,
-      machine: machine?.model ?? null,
-      machineId: machine?.id ?? null,
-      assembly: assembly?.name ?? null,
-      assemblyId: assembly?.id ?? null,
-      dims: {
-        innerMm: part?.innerMm ?? null,
-        outerMm: part?.outerMm ?? null,
-        widthMm: part?.widthMm ?? null,
-        lengthMm: part?.lengthMm ?? null,
-      },
-    },
+    part: partView,
     standardPart,
     measurements: proposal.measurements,
     deviations: measurementDeviations(proposal.measurements, standardPart),
     notes: proposal.notes,
     checks: proposal.checks.filter((c) => c.field !== PART_SIZES_FIELD),
     // Worked out afresh, so proposals sent before the check existed are flagged too.
-    sizeMismatch: part
-      ? checkAgainstPart(
-          {
-            number: part.number,
-            innerMm: part.innerMm,
-            outerMm: part.outerMm,
-            widthMm: part.widthMm,
-            lengthMm: part.lengthMm,
-          },
-          standardPart,
-        )
-      : null,
+    sizeMismatch: partSizes ? checkAgainstPart(partSizes, standardPart) : null,
     photoList: photos.map((p) => ({ id: p.id, url: `/api/photos/${p.id}`, fileName: p.fileName })),
-    existingCrosses: existingCrosses.map((c) => ({
-      id: c.id,
-      designation: c.designation,
-      repairMethod: c.repair_method,
-      fit: c.fit,
-      status: c.status,
-      origin: c.origin,
-      confirmations: Number(c.confirmations),
-    })),
-    submitterRecord: {
-      approved: Number(record.approved),
-      rejected: Number(record.rejected),
-      open: Number(record.open),
-    },
+    existingCrosses,
+    submitterRecord,
     decidedAt: proposal.decidedAt?.toISOString() ?? null,
   };
+}
+
+/** The worn part: the catalogue's, or the new one the proposal describes, with where it is fitted. */
+async function partOf(proposal: Proposal, part: OriginalPart | null): Promise<ProposalDetail["part"]> {
+  const makerId = part?.makerId ?? proposal.newPart!.makerId;
+  const [maker, machine, assembly] = await Promise.all([
+    Maker.findByPk(makerId),
+    proposal.newPart?.machineId ? Machine.findByPk(proposal.newPart.machineId) : null,
+    proposal.newPart?.assemblyId ? Assembly.findByPk(proposal.newPart.assemblyId) : null,
+  ]);
+  return {
+    id: part?.id ?? null,
+    isNew: !part,
+    number: part?.number ?? proposal.newPart!.number,
+    maker: maker?.name ?? "?",
+    makerId,
+    description: part?.description ?? proposal.newPart!.description,
+    category: part?.category ?? proposal.newPart!.category,
+    machine: machine?.model ?? null,
+    machineId: machine?.id ?? null,
+    assembly: assembly?.name ?? null,
+    assemblyId: assembly?.id ?? null,
+    dims: {
+      innerMm: part?.innerMm ?? null,
+      outerMm: part?.outerMm ?? null,
+      widthMm: part?.widthMm ?? null,
+      lengthMm: part?.lengthMm ?? null,
+    },
+  };
+}
+
+/** The standard part: the catalogue's, or the new one the proposal describes. */
+async function standardOf(proposal: Proposal): Promise<StandardView> {
+  const std = proposal.standardPartId ? await StandardPart.findByPk(proposal.standardPartId) : null;
+  if (std) {
+    const { id, kind, designation, innerMm, outerMm, widthMm, lengthMm } = std;
+    return { id, kind, designation, innerMm, outerMm, widthMm, lengthMm, isNew: false };
+  }
+  const s = proposal.newStandard!;
+  const size = (v: number | null | undefined) => v ?? null;
+  return {
+    id: null,
+    kind: s.kind,
+    designation: s.designation,
+    innerMm: size(s.innerMm),
+    outerMm: size(s.outerMm),
+    widthMm: size(s.widthMm),
+    lengthMm: size(s.lengthMm),
+    isNew: true,
+  };
+}
+
+/** What the catalogue already says for the part: its crosses not rejected, with their confirmations. */
+async function crossesOf(partId: number): Promise<ProposalDetail["existingCrosses"]> {
+  const rows = await sequelize.query<{
+    id: number;
+    designation: string | null;
+    repair_method: string | null;
+    fit: Fit;
+    status: string;
+    origin: string;
+    confirmations: string;
+  }>(
+    `SELECT c.id, sp.designation, c.repair_method, c.fit, c.status, c.origin,
+            (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations
+     FROM crosses c LEFT JOIN standard_parts sp ON sp.id = c.standard_part_id
+     WHERE c.original_part_id = :partId AND c.status <> 'rejected' ORDER BY c.status, c.fit, c.id`,
+    { replacements: { partId }, type: QueryTypes.SELECT },
+  );
+  return rows.map((c) => ({
+    id: c.id,
+    designation: c.designation,
+    repairMethod: c.repair_method,
+    fit: c.fit,
+    status: c.status,
+    origin: c.origin,
+    confirmations: Number(c.confirmations),
+  }));
+}
+
+/** The member's record: how many of their proposals were approved, rejected, and are still open. */
+async function recordOf(userId: string): Promise<ProposalDetail["submitterRecord"]> {
+  const [record] = await sequelize.query<{ approved: string; rejected: string; open: string }>(
+    `SELECT count(*) FILTER (WHERE status = 'approved') AS approved,
+            count(*) FILTER (WHERE status = 'rejected') AS rejected,
+            count(*) FILTER (WHERE status IN ('pending', 'changes_requested')) AS open
+     FROM proposals WHERE user_id = :userId`,
+    { replacements: { userId }, type: QueryTypes.SELECT },
+  );
+  return { approved: Number(record.approved), rejected: Number(record.rejected), open: Number(record.open) };
 }
 
 /** Whether this viewer may see this photo: its uploader, a reviewer, or anyone once its proposal is approved. */
