@@ -172,71 +172,11 @@ export function decodeBearing(input: string): DecodedBearing {
   const text = input.trim().toUpperCase();
   if (text === "") throw new DesignationError("Enter a bearing designation, like 6205-2RS.");
   if (text.length > 40) throw new DesignationError("A bearing designation is at most 40 characters.");
-  const notes: string[] = [];
-  let base: StandardBearing | undefined;
-  let rest = "";
-
-  const inch = /^(R\d{1,2})(.*)$/.exec(text);
-  const metric = /^(618|619|160|60|62|63|64)(\/\d+|\d{2}|\d)(?!\d)(.*)$/.exec(text.replace(/\s+(?=\/)/, ""));
-  const old = /^([234])(\d{2})(?!\d)(.*)$/.exec(text);
-  if (inch && byDesignation.has(inch[1])) {
-    base = byDesignation.get(inch[1]);
-    rest = inch[2];
-  } else if (metric) {
-    base = byDesignation.get(`${metric[1]}${metric[2]}`);
-    rest = metric[3];
-    if (!base) {
-      const bore = boreFromCode(metric[2]);
-      throw new DesignationError(
-        bore === null
-          ? `"${metric[2]}" is not a bore code. Codes are 00, 01, 02, 03, then 04 and up (× 5 mm).`
-          : `Series ${metric[1]} has no ${bore} mm bore in the tables (bore code ` +
-              `${metric[2]}). Check the number, or measure the bearing.`,
-      );
-    }
-  } else if (old) {
-    base = byDesignation.get(`6${old[1]}${old[2]}`);
-    rest = old[3];
-    if (base) {
-      notes.push(
-        `"${old[1]}${old[2]}" is read as ${base.designation}: older numbering ` +
-          `often left out the leading 6 of deep groove ball bearings. This is ` +
-          `common practice, not a standard; check the size.`,
-      );
-    }
-  }
-  if (!base) {
-    throw new DesignationError(
-      `"${input.trim()}" is not a deep groove ball bearing designation we can ` +
-        `read. Try a form like 6205-2RS, 62/22 or R8.`,
-    );
-  }
-
+  const { base, rest, notes } = findBase(text, input);
   const suffixes = readSuffixes(rest);
-  if (suffixes.unknown.length > 0) {
-    notes.push(
-      `Not decoded: ${suffixes.unknown.join(", ")}. Makers add their own ` +
-        `suffix letters (cage, grease, noise grade); keep them when ordering ` +
-        `and ask what they mean.`,
-    );
-  }
-  if (suffixes.closure.kind === "shield")
-    notes.push(
-      "Shields do not touch the inner ring: low drag, but they keep out only " +
-        "coarse dirt. For wet or muddy places a sealed bearing is usual.",
-    );
-  if (suffixes.closure.kind === "contact seal")
-    notes.push(
-      "Rubbing seals keep out water and grit better than shields, at the cost " +
-        "of a little drag and a lower speed limit.",
-    );
-  if (suffixes.snap.groove && !suffixes.snap.ring)
-    notes.push(
-      "N: a snap-ring groove in the outer ring; the ring itself is ordered separately or comes with the NR form.",
-    );
+  notes.push(...suffixNotes(suffixes));
   const envelope = SAME_ENVELOPE[base.series as DeepGrooveSeries];
   if (envelope) notes.push(`Same boundary dimensions, different bearings: ${envelope.join("; ")}.`);
-
   return {
     designation: writeDesignation(base.designation, suffixes),
     input: input.trim(),
@@ -261,6 +201,64 @@ export function decodeBearing(input: string): DecodedBearing {
     unknownSuffixes: suffixes.unknown,
     notes,
   };
+}
+
+/** The bearing the designation's series and bore code name (inch R, metric, or the older numbering), and the rest. */
+function findBase(text: string, input: string): { base: StandardBearing; rest: string; notes: string[] } {
+  const inch = /^(R\d{1,2})(.*)$/.exec(text);
+  const metric = /^(618|619|160|60|62|63|64)(\/\d+|\d{2}|\d)(?!\d)(.*)$/.exec(text.replace(/\s+(?=\/)/, ""));
+  const old = /^([234])(\d{2})(?!\d)(.*)$/.exec(text);
+  if (inch && byDesignation.has(inch[1])) return { base: byDesignation.get(inch[1])!, rest: inch[2], notes: [] };
+  if (metric) {
+    const base = byDesignation.get(`${metric[1]}${metric[2]}`);
+    if (base) return { base, rest: metric[3], notes: [] };
+    const bore = boreFromCode(metric[2]);
+    throw new DesignationError(
+      bore === null
+        ? `"${metric[2]}" is not a bore code. Codes are 00, 01, 02, 03, then 04 and up (× 5 mm).`
+        : `Series ${metric[1]} has no ${bore} mm bore in the tables (bore code ` +
+            `${metric[2]}). Check the number, or measure the bearing.`,
+    );
+  }
+  const base = old ? byDesignation.get(`6${old[1]}${old[2]}`) : undefined;
+  if (old && base) {
+    const note =
+      `"${old[1]}${old[2]}" is read as ${base.designation}: older numbering ` +
+      `often left out the leading 6 of deep groove ball bearings. This is ` +
+      `common practice, not a standard; check the size.`;
+    return { base, rest: old[3], notes: [note] };
+  }
+  throw new DesignationError(
+    `"${input.trim()}" is not a deep groove ball bearing designation we can ` +
+      `read. Try a form like 6205-2RS, 62/22 or R8.`,
+  );
+}
+
+/** What the suffixes mean for a restorer: letters not decoded, shields against seals, a snap-ring groove. */
+function suffixNotes(suffixes: ReturnType<typeof readSuffixes>): string[] {
+  const notes: string[] = [];
+  if (suffixes.unknown.length > 0) {
+    notes.push(
+      `Not decoded: ${suffixes.unknown.join(", ")}. Makers add their own ` +
+        `suffix letters (cage, grease, noise grade); keep them when ordering ` +
+        `and ask what they mean.`,
+    );
+  }
+  if (suffixes.closure.kind === "shield")
+    notes.push(
+      "Shields do not touch the inner ring: low drag, but they keep out only " +
+        "coarse dirt. For wet or muddy places a sealed bearing is usual.",
+    );
+  if (suffixes.closure.kind === "contact seal")
+    notes.push(
+      "Rubbing seals keep out water and grit better than shields, at the cost " +
+        "of a little drag and a lower speed limit.",
+    );
+  if (suffixes.snap.groove && !suffixes.snap.ring)
+    notes.push(
+      "N: a snap-ring groove in the outer ring; the ring itself is ordered separately or comes with the NR form.",
+    );
+  return notes;
 }
 
 export interface BearingCandidate {

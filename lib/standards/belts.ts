@@ -280,47 +280,52 @@ export function identifySection(input: {
     });
   }
   out.sort(byScore);
+  if (out[0]) warnOfLookAlikes(out, input.unit);
+  return out.slice(0, 6);
+}
+
+/**
+ * The trap of similar widths, said on the candidates: sections with nearly the same top as the best but another
+ * depth (whether or not they matched), another angle, or a light-duty belt where a classical one belongs.
+ */
+function warnOfLookAlikes(out: SectionCandidate[], unit: LengthUnit): void {
   const best = out[0];
-  if (best) {
-    // The trap of similar widths: sections with nearly the same top but another depth, whether or not they matched.
-    const bestSection = findSection(best.section);
-    for (const s of BELT_SECTIONS) {
-      if (s === bestSection || s.height === null || bestSection.height === null) continue;
-      const topDiff = Math.abs(toMm(s.topWidth, s.unit) - toMm(bestSection.topWidth, bestSection.unit));
-      const depthDiff = Math.abs(toMm(s.height, s.unit) - toMm(bestSection.height, bestSection.unit));
-      if (topDiff <= 1 && depthDiff > 1) {
-        best.warnings.push(
-          `${s.section} has nearly the same top width but is ` +
-            `${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} ` +
-            `${toMm(s.height, s.unit) > toMm(bestSection.height, bestSection.unit) ? "deeper" : "shallower"}: ` +
-            "it rides at another height in the groove. Measure the thickness to be sure.",
-        );
-      }
-    }
-    for (const other of out.slice(1)) {
-      if (other.angleDeg !== best.angleDeg)
-        other.warnings.push(
-          `Section angle ${other.angleDeg}° against ${best.angleDeg}°: it will not seat the same in the pulley groove.`,
-        );
-      const depthDiff =
-        other.height !== null && best.height !== null
-          ? Math.abs(toMm(other.height, other.unit) - toMm(best.height, best.unit))
-          : 0;
-      if (depthDiff > 1)
-        other.warnings.push(
-          `Similar top width to ${best.section} but ` +
-            `${round(fromMm(depthDiff, input.unit), 2)} ${input.unit} different in ` +
-            `depth: it sits at a different height in the groove and changes the ` +
-            `drive ratio and tension.`,
-        );
-      if (other.family === "light-duty" && best.family === "classical")
-        other.warnings.push(
-          "Light-duty belts are for fractional-horsepower drives; on an engine or " +
-            "tractor drive use the classical section.",
-        );
+  const bestSection = findSection(best.section);
+  for (const s of BELT_SECTIONS) {
+    if (s === bestSection || s.height === null || bestSection.height === null) continue;
+    const topDiff = Math.abs(toMm(s.topWidth, s.unit) - toMm(bestSection.topWidth, bestSection.unit));
+    const depthDiff = Math.abs(toMm(s.height, s.unit) - toMm(bestSection.height, bestSection.unit));
+    if (topDiff <= 1 && depthDiff > 1) {
+      best.warnings.push(
+        `${s.section} has nearly the same top width but is ` +
+          `${round(fromMm(depthDiff, unit), 2)} ${unit} ` +
+          `${toMm(s.height, s.unit) > toMm(bestSection.height, bestSection.unit) ? "deeper" : "shallower"}: ` +
+          "it rides at another height in the groove. Measure the thickness to be sure.",
+      );
     }
   }
-  return out.slice(0, 6);
+  for (const other of out.slice(1)) {
+    if (other.angleDeg !== best.angleDeg)
+      other.warnings.push(
+        `Section angle ${other.angleDeg}° against ${best.angleDeg}°: it will not seat the same in the pulley groove.`,
+      );
+    const depthDiff =
+      other.height !== null && best.height !== null
+        ? Math.abs(toMm(other.height, other.unit) - toMm(best.height, best.unit))
+        : 0;
+    if (depthDiff > 1)
+      other.warnings.push(
+        `Similar top width to ${best.section} but ` +
+          `${round(fromMm(depthDiff, unit), 2)} ${unit} different in ` +
+          `depth: it sits at a different height in the groove and changes the ` +
+          `drive ratio and tension.`,
+      );
+    if (other.family === "light-duty" && best.family === "classical")
+      other.warnings.push(
+        "Light-duty belts are for fractional-horsepower drives; on an engine or " +
+          "tractor drive use the classical section.",
+      );
+  }
 }
 
 /** A belt's measured length, from the ways people measure an old one, as a pitch length. */

@@ -417,6 +417,39 @@ export function sealOrder(input: {
   const label = [shaftText, boreText, widthText].filter(Boolean).join(" × ") + ` ${unit}`;
   const askFor = describeAttributes(input.attributes ?? {});
 
+  const notes = orderNotes(input, { system, unit, shaftNominal, bore, boreMm, width, sealOd, outside });
+  const miss = nearMissFor(shaftCandidates);
+  if (miss) notes.push(miss.message);
+  return {
+    system,
+    unit,
+    shaft,
+    shaftLabel: shaftNominal.label,
+    bore,
+    width,
+    label,
+    sealOd,
+    askFor,
+    notes,
+    source: range.source,
+  };
+}
+
+/** What the order means for the person at the bench: wear, the bore, the new seal's OD to check, width, system. */
+function orderNotes(
+  input: { shaftMm: number; widthMm?: number; unit: LengthUnit; grooved?: boolean },
+  order: {
+    system: "inch" | "metric";
+    unit: LengthUnit;
+    shaftNominal: { nominalMm: number; label: string };
+    bore: number;
+    boreMm: number;
+    width: number | null;
+    sealOd: { min: number; max: number };
+    outside: string;
+  },
+): string[] {
+  const { system, unit, shaftNominal, bore, boreMm, width, sealOd, outside } = order;
   const shaftReading = showLength(fromMm(input.shaftMm, unit), unit);
   const shaftWear = fromMm(input.shaftMm - shaftNominal.nominalMm, unit);
   const notes = [
@@ -459,25 +492,11 @@ export function sealOrder(input: {
         `bore ${showLength(fromMm(boreMm, input.unit), input.unit)}.`,
     );
   }
-  const miss = nearMissFor(shaftCandidates);
-  if (miss) notes.push(miss.message);
   if (input.grooved)
     notes.push(
       "The old lip has worn a groove: fit a repair sleeve of the same seal size, or set the new lip on unworn shaft.",
     );
-  return {
-    system,
-    unit,
-    shaft,
-    shaftLabel: shaftNominal.label,
-    bore,
-    width,
-    label,
-    sealOd,
-    askFor,
-    notes,
-    source: range.source,
-  };
+  return notes;
 }
 
 /** Everything the seal calculator answers for one measurement: the seal to order first, then the sizes nearby. */
