@@ -4,13 +4,13 @@ import { NewListForm } from "@/components/lists/new-list-form";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
 import { machineChoices } from "@/lib/catalogue/browse";
-import { listLists } from "@/lib/lists/lists";
+import { jobListsOf } from "@/lib/lists/lists";
 
 export const metadata: Metadata = { title: "Job lists" };
 
 export default async function ListsPage() {
   const user = await requirePagePermission("lists:manage", "/lists");
-  const [lists, machines] = await Promise.all([listLists(user.id), machineChoices()]);
+  const [lists, machines] = await Promise.all([jobListsOf(user.id), machineChoices()]);
   return (
     <div className="grid gap-8 lg:grid-cols-[1fr_24rem]">
       <div className="space-y-4">

@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { listMakersWithMachines } from "@/lib/catalogue/browse";
+import { makersWithMachines } from "@/lib/catalogue/browse";
 
 export const metadata: Metadata = { title: "Machines" };
 export const dynamic = "force-dynamic";
 
 export default async function MachinesPage() {
-  const makers = await listMakersWithMachines();
+  const makers = await makersWithMachines();
   return (
     <div className="space-y-8">
       <div className="space-y-2">

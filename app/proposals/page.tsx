@@ -5,7 +5,7 @@ import { StatusBadge } from "@/components/proposals/status-badge";
 import { WithdrawButton } from "@/components/proposals/withdraw-button";
 import { Notice } from "@/components/ui/notice";
 import { requirePagePermission } from "@/lib/auth/session";
-import { listMine } from "@/lib/proposals/views";
+import { proposalsOf } from "@/lib/proposals/views";
 
 export const metadata: Metadata = { title: "Your proposals" };
 
@@ -14,7 +14,7 @@ const date = (iso: string) =>
 
 export default async function ProposalsPage() {
   const user = await requirePagePermission("proposals:create", "/proposals");
-  const rows = await listMine(user.id);
+  const rows = await proposalsOf(user.id);
   const sentBack = rows.filter((r) => r.status === "changes_requested").length;
 
   return (

@@ -8,7 +8,7 @@ import { SelectField } from "@/components/ui/select-field";
 import { requirePagePermission } from "@/lib/auth/session";
 import { CATEGORY_NAMES, PART_CATEGORIES } from "@/lib/catalogue/kinds";
 import { makerChoices } from "@/lib/catalogue/browse";
-import { listQueue } from "@/lib/proposals/views";
+import { reviewQueue } from "@/lib/proposals/views";
 import { queuePageQuery } from "@/lib/validation/proposals";
 
 export const metadata: Metadata = { title: "Review queue" };
@@ -31,7 +31,7 @@ export default async function ReviewQueuePage({
   const { category, maker: makerId, q, page } = queuePageQuery.parse(params);
   const [makers, queue] = await Promise.all([
     makerChoices(),
-    listQueue({ category, makerId, q, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
+    reviewQueue({ category, makerId, q, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
   ]);
   const pages = Math.max(1, Math.ceil(queue.total / PAGE_SIZE));
   const pageLink = (n: number) =>

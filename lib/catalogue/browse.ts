@@ -13,7 +13,7 @@ export interface MakerWithMachines {
   machines: Array<{ id: number; model: string; kind: MachineKind; years: string; partCount: number }>;
 }
 
-export async function listMakersWithMachines(): Promise<MakerWithMachines[]> {
+export async function makersWithMachines(): Promise<MakerWithMachines[]> {
   const rows = await sequelize.query<{
     maker_id: number;
     maker: string;
@@ -153,7 +153,7 @@ export async function makerChoices(): Promise<Array<{ id: number; name: string }
 
 /** Every machine as one line ("Corvane Tractor Works Model 30 (1946–1952)"), for choosing one in a form. */
 export async function machineChoices(): Promise<Array<{ id: number; label: string }>> {
-  return (await listMakersWithMachines()).flatMap((m) =>
+  return (await makersWithMachines()).flatMap((m) =>
     m.machines.map((ma) => ({ id: ma.id, label: `${m.name} ${ma.model}${ma.years ? ` (${ma.years})` : ""}` })),
   );
 }

@@ -167,7 +167,7 @@ export async function saveMapping(
   return saved;
 }
 
-export async function listMappings(): Promise<Array<{ id: number; name: string; mapping: ImportMappingValue }>> {
+export async function savedMappings(): Promise<Array<{ id: number; name: string; mapping: ImportMappingValue }>> {
   const rows = await ImportMapping.findAll({ order: [["name", "ASC"]] });
   return rows.map((m) => ({ id: m.id, name: m.name, mapping: m.mapping }));
 }
@@ -532,7 +532,7 @@ export async function getImport(actor: Actor, id: number, rejectionLimit = 200):
   };
 }
 
-export async function listImports(
+export async function recentImports(
   actor: Actor,
 ): Promise<
   Array<Pick<ImportView, "id" | "fileName" | "status" | "target" | "createdAt" | "by" | "counts" | "committedCounts">>

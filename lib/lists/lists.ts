@@ -97,7 +97,8 @@ async function ownList(userId: string, id: number, transaction?: Transaction): P
   return list;
 }
 
-export async function listLists(userId: string) {
+/** A member's job lists, newest change first, with their line and part counts. */
+export async function jobListsOf(userId: string) {
   const rows = await sequelize.query<{
     id: number;
     title: string;

@@ -93,7 +93,7 @@ function toRow(r: RawRow): ProposalRow {
   };
 }
 
-export async function listMine(userId: string): Promise<ProposalRow[]> {
+export async function proposalsOf(userId: string): Promise<ProposalRow[]> {
   const rows = await sequelize.query<RawRow>(
     `${SELECT_ROWS} WHERE s.user_id = :userId ORDER BY s.updated_at DESC LIMIT 500`,
     { replacements: { userId }, type: QueryTypes.SELECT },
@@ -112,7 +112,7 @@ export interface QueueFilters {
 }
 
 /** The review queue: oldest first, so nobody's proposal waits for ever behind newer ones. */
-export async function listQueue(filters: QueueFilters): Promise<{ rows: ProposalRow[]; total: number }> {
+export async function reviewQueue(filters: QueueFilters): Promise<{ rows: ProposalRow[]; total: number }> {
   const where = ["s.status = :status"];
   if (filters.category) where.push("COALESCE(p.category::text, s.new_part->>'category') = :category");
   if (filters.makerId) where.push("mk.id = :makerId");

@@ -4,7 +4,7 @@ import { ImportUpload } from "@/components/imports/import-upload";
 import { Notice } from "@/components/ui/notice";
 import { hasPermission } from "@/lib/auth/roles";
 import { requirePagePermission } from "@/lib/auth/session";
-import { listImports, listMappings } from "@/lib/imports/imports";
+import { recentImports, savedMappings } from "@/lib/imports/imports";
 import { STATUS_WORDS, TARGET_WORDS } from "@/lib/imports/kinds";
 
 export const metadata: Metadata = { title: "Imports" };
@@ -12,7 +12,7 @@ export const metadata: Metadata = { title: "Imports" };
 export default async function ImportsPage({ searchParams }: { searchParams: Promise<{ discarded?: string }> }) {
   const { discarded } = await searchParams;
   const user = await requirePagePermission("imports:review-queue", "/admin/imports");
-  const [imports, mappings] = await Promise.all([listImports(user), listMappings()]);
+  const [imports, mappings] = await Promise.all([recentImports(user), savedMappings()]);
   const isAdmin = hasPermission(user.role, "imports:commit");
   return (
     <div className="space-y-8">

@@ -1,6 +1,6 @@
 import { requirePermission } from "@/lib/auth/session";
 import { handle, readJson } from "@/lib/http/handle";
-import { listMappings, saveMapping } from "@/lib/imports/imports";
+import { savedMappings, saveMapping } from "@/lib/imports/imports";
 import { savedMappingBody } from "@/lib/validation/imports";
 import { parseWith } from "@/lib/validation/parse";
 
@@ -8,7 +8,7 @@ export const runtime = "nodejs";
 
 export const GET = handle(async () => {
   await requirePermission("imports:review-queue");
-  return Response.json({ mappings: await listMappings() });
+  return Response.json({ mappings: await savedMappings() });
 });
 
 /** Saves a mapping under a name (the same name replaces it), for the next file from the same source. */

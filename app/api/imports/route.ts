@@ -2,7 +2,7 @@ import { after } from "next/server";
 import { requirePermission } from "@/lib/auth/session";
 import { handle } from "@/lib/http/handle";
 import { assertOwnOrigin, readUpload } from "@/lib/http/upload";
-import { dryRun, getImport, listImports, startImport } from "@/lib/imports/imports";
+import { dryRun, getImport, recentImports, startImport } from "@/lib/imports/imports";
 import { IMPORT_MAX_BYTES } from "@/lib/imports/kinds";
 import { importUploadFields } from "@/lib/validation/imports";
 import { parseWith } from "@/lib/validation/parse";
@@ -25,5 +25,5 @@ export const POST = handle(async (request) => {
 
 export const GET = handle(async () => {
   const user = await requirePermission("imports:review-queue");
-  return Response.json({ imports: await listImports(user) });
+  return Response.json({ imports: await recentImports(user) });
 });

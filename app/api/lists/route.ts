@@ -1,6 +1,6 @@
 import { requirePermission } from "@/lib/auth/session";
 import { handle, readJson } from "@/lib/http/handle";
-import { createList, listLists } from "@/lib/lists/lists";
+import { createList, jobListsOf } from "@/lib/lists/lists";
 import { newListInput } from "@/lib/validation/lists";
 import { parseWith } from "@/lib/validation/parse";
 
@@ -8,7 +8,7 @@ export const runtime = "nodejs";
 
 export const GET = handle(async () => {
   const user = await requirePermission("lists:manage");
-  return Response.json({ lists: await listLists(user.id) });
+  return Response.json({ lists: await jobListsOf(user.id) });
 });
 
 export const POST = handle(async (request) => {

@@ -1,6 +1,6 @@
 import { requirePermission } from "@/lib/auth/session";
 import { createProposal } from "@/lib/proposals/proposals";
-import { listMine, listQueue } from "@/lib/proposals/views";
+import { proposalsOf, reviewQueue } from "@/lib/proposals/views";
 import { handle, readJson } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { parseWith } from "@/lib/validation/parse";
@@ -20,10 +20,10 @@ export const GET = handle(async (request) => {
   const query = parseWith(proposalsQuery, queryOf(request));
   if (query.mine) {
     const user = await requirePermission("proposals:create");
-    return Response.json({ proposals: await listMine(user.id) });
+    return Response.json({ proposals: await proposalsOf(user.id) });
   }
   await requirePermission("proposals:review");
-  const { rows, total } = await listQueue({
+  const { rows, total } = await reviewQueue({
     status: query.status,
     category: query.category,
     makerId: query.maker,
