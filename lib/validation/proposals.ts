@@ -172,5 +172,6 @@ export const notificationsInput = z.object({
 
 export const auditQuery = z.object({
   limit: z.coerce.number().int().min(1, "limit is at least 1.").max(200, "limit is at most 200.").default(50),
-  before: z.coerce.number().int().positive().optional(),
+  // The id of the last entry seen: the next page starts below it.
+  before: idFromText("audit entry").optional(),
 });
