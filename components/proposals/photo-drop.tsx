@@ -4,7 +4,7 @@ import { useEffect, useRef, useState } from "react";
 import { useDropzone, type FileRejection } from "react-dropzone";
 import { PHOTO_MAX_BYTES, PHOTO_TYPES, PHOTOS_PER_PROPOSAL } from "@/lib/proposals/kinds";
 import type { UploadGrant } from "@/lib/proposals/photos";
-import { postJson } from "@/lib/http/post-json";
+import { sendJson } from "@/lib/http/post-json";
 import { PhotoReadError, preparePhoto } from "@/lib/photos/prepare";
 
 export interface PhotoItem {
@@ -59,7 +59,7 @@ export function PhotoDrop({
     try {
       const blob = await preparePhoto(file);
       update(key, { status: "uploading" });
-      const grant = await postJson<UploadGrant>("/api/uploads/presign", {
+      const grant = await sendJson<UploadGrant>("POST", "/api/uploads/presign", {
         contentType: "image/jpeg",
         size: blob.size,
         fileName: file.name.replace(/\.[^.]+$/, ".jpg"),

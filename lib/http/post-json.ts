@@ -2,12 +2,7 @@ import type { ErrorBody } from "@/lib/errors";
 
 export type PostResult<T> = { ok: true; data: T } | { ok: false; status: number; error: ErrorBody };
 
-/** Posts JSON from the browser and returns the body or the API's error shape; a network failure becomes one too. */
-export async function postJson<T>(url: string, body: unknown): Promise<PostResult<T>> {
-  return sendJson<T>("POST", url, body);
-}
-
-/** The same for PATCH and DELETE. */
+/** Sends JSON from the browser and returns the body or the API's error shape; a network failure becomes one too. */
 export async function sendJson<T>(
   method: "POST" | "PATCH" | "DELETE",
   url: string,
