@@ -16,7 +16,8 @@ function securityHeaders() {
 const nextConfig = {
   // Sequelize resolves its dialect at run time and cannot be bundled.
   serverExternalPackages: ["sequelize"],
-  // The test runner builds into its own folder so that it never disturbs a running `npm start`.
+  // `npm test` and the benchmarks build into .next-test (stack.ts sets NEXT_DIST_DIR), so that they never replace the
+  // build a running `npm start` or `npm run dev` serves.
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   async headers() {
