@@ -1,9 +1,10 @@
 import { QueryTypes, type Transaction } from "sequelize";
 import { Maker, sequelize } from "@/db";
 import { classifyRows, type AcceptedRow, type CatalogueNames, type Rejection } from "@/lib/imports/classify";
-import { NAMES_KEPT, type ImportCounts, type ImportMappingValue, type ImportTarget } from "@/lib/imports/kinds";
+import { type ImportCounts, type ImportMappingValue, type ImportTarget } from "@/lib/imports/kinds";
 import {
   emptyCounts,
+  keepName,
   planChunk,
   type KnownCross,
   type KnownPart,
@@ -107,8 +108,7 @@ function addCounts(total: ImportCounts, chunk: ImportCounts, rows: number): void
   for (const key of ["newParts", "newCrosses", "updates", "unchanged", "newMakers", "newStandardParts"] as const)
     total[key] += chunk[key];
   for (const key of ["newMakerNames", "newStandardPartNames"] as const) {
-    for (const name of chunk[key] ?? [])
-      if ((total[key]?.length ?? 0) < NAMES_KEPT && !total[key]!.includes(name)) total[key]!.push(name);
+    for (const name of chunk[key] ?? []) keepName(total[key], name);
   }
 }
 

@@ -97,7 +97,8 @@ export const emptyCounts = (): ImportCounts => ({
   newStandardPartNames: [],
 });
 
-const keepName = (names: string[] | undefined, name: string) => {
+/** A name for the summary, once, up to NAMES_KEPT of them. */
+export const keepName = (names: string[] | undefined, name: string) => {
   if (names && names.length < NAMES_KEPT && !names.includes(name)) names.push(name);
 };
 
