@@ -3,7 +3,7 @@ import { MeasureTabs } from "@/components/measure/measure-tabs";
 export default function MeasureLayout({ children }: { children: React.ReactNode }) {
   return (
     <div className="space-y-6">
-      <div className="space-y-2">
+      <div className="no-print space-y-2">
         <h1 className="text-3xl">Measure a part</h1>
         <p className="max-w-3xl text-ink-soft">
           No number left on it? Measure it with calipers, in inches or millimetres, and see which standard parts it can
@@ -11,7 +11,9 @@ export default function MeasureLayout({ children }: { children: React.ReactNode 
           metric sizes that are easy to mistake for each other.
         </p>
       </div>
-      <MeasureTabs />
+      <div className="no-print">
+        <MeasureTabs />
+      </div>
       {children}
     </div>
   );

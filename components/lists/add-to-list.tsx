@@ -10,7 +10,8 @@ import type { MeasuredKind } from "@/lib/lists/standard-item";
 import { addToListForm } from "@/lib/validation/lists";
 
 /** What goes on the list: a catalogue part (under its latest number), or a standard part a calculator worked out. */
-export type ListItem = { partId: number } | { standard: { kind: MeasuredKind; designation: string; note?: string } };
+export type ListItem =
+  { partId: number } | { standard: { kind: MeasuredKind; designation: string; note?: string; template?: string } };
 
 type Added = { merged: boolean; superseded: boolean };
 

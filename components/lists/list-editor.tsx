@@ -255,6 +255,13 @@ export function ListEditor({ initial }: { initial: ListView }) {
               <span className="num font-bold">{l.chosen.designation}</span>
             )}
             <span className="block num text-sm text-ink-soft">{standardSizes(l.chosen)}</span>
+            {l.measured?.template && (
+              <span className="block text-sm">
+                Template: <Link href={`/measure/gasket/print?${l.measured.template}&paper=a4`}>print on A4</Link> ·{" "}
+                <Link href={`/measure/gasket/print?${l.measured.template}&paper=letter`}>Letter</Link> ·{" "}
+                <Link href={`/measure/gasket?${l.measured.template}`}>change</Link>
+              </span>
+            )}
             {l.measured ? (
               <span className="block text-sm">Sized from your measurements</span>
             ) : (

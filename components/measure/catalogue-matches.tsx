@@ -24,7 +24,7 @@ export function CatalogueMatches({ parts, unit }: { parts: SizedPart[] | undefin
               {p.maker} · {p.description}
             </span>
             <span className="block num text-sm">
-              {show(p.innerMm)} × {show(p.outerMm)}
+              {p.innerMm === null ? `Ø ${show(p.outerMm)}` : `${show(p.innerMm)} × ${show(p.outerMm)}`}
             </span>
           </li>
         ))}

@@ -58,3 +58,32 @@ export function ArrowDefs() {
     </defs>
   );
 }
+
+/** A name on a drawing, set in brass and bold while its field is being entered. */
+export function DrawingLabel({
+  x,
+  y,
+  text,
+  active,
+  anchor = "start",
+}: {
+  x: number;
+  y: number;
+  text: string;
+  active: boolean;
+  anchor?: "start" | "end" | "middle";
+}) {
+  return (
+    <text
+      x={x}
+      y={y}
+      textAnchor={anchor}
+      fontSize={active ? 17 : 15}
+      fontWeight={active ? 700 : 400}
+      fill={active ? "#8a5d12" : "#2f333a"}
+      fontFamily="JetBrains Mono, monospace"
+    >
+      {text}
+    </text>
+  );
+}

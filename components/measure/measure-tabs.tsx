@@ -7,6 +7,10 @@ const TABS = [
   { href: "/measure/bearing", label: "Ball bearing" },
   { href: "/measure/seal", label: "Lip seal" },
   { href: "/measure/belt", label: "V-belt" },
+  { href: "/measure/felt", label: "Felt" },
+  { href: "/measure/packing", label: "Packing" },
+  { href: "/measure/plug", label: "Plug" },
+  { href: "/measure/gasket", label: "Gasket" },
 ];
 
 export function MeasureTabs() {

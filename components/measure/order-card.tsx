@@ -41,7 +41,10 @@ export function OrderCard({
         {title}
       </h2>
       <div className="flex flex-wrap items-center gap-3">
-        <p className="num text-3xl font-bold break-words sm:text-4xl" data-testid="order-label">
+        <p
+          className={`num font-bold break-words ${label.length > 32 ? "text-xl sm:text-2xl" : "text-3xl sm:text-4xl"}`}
+          data-testid="order-label"
+        >
           {label}
         </p>
         <button

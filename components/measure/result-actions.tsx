@@ -14,16 +14,19 @@ export function ResultActions({
   designation,
   note,
   measurements,
+  template,
 }: {
   kind: MeasuredKind;
   designation: string;
   note?: string;
   measurements: ProposalPrefill["measurements"];
+  /** A gasket's template query, kept with the line and the proposal. */
+  template?: string;
 }) {
   return (
     <div className="flex flex-wrap items-start gap-x-6 gap-y-3 border-t border-rule pt-3" data-testid="result-actions">
-      <AddToList item={{ standard: { kind, designation, note } }} number={designation} />
-      <Link href={proposalHref({ kind, designation, measurements })} className="font-bold">
+      <AddToList item={{ standard: { kind, designation, note, template } }} number={designation} />
+      <Link href={proposalHref({ kind, designation, measurements, template })} className="font-bold">
         Propose as a cross for a part…
       </Link>
     </div>

@@ -1,34 +1,6 @@
-import { ArrowDefs, DimensionLine } from "@/components/measure/dimension-line";
+import { ArrowDefs, DimensionLine, DrawingLabel as Label } from "@/components/measure/dimension-line";
 
 export type SealDimension = "shaft" | "bore" | "width" | "sealOd" | null;
-
-function Label({
-  x,
-  y,
-  text,
-  active,
-  anchor = "start",
-}: {
-  x: number;
-  y: number;
-  text: string;
-  active: boolean;
-  anchor?: "start" | "end" | "middle";
-}) {
-  return (
-    <text
-      x={x}
-      y={y}
-      textAnchor={anchor}
-      fontSize={active ? 17 : 15}
-      fontWeight={active ? 700 : 400}
-      fill={active ? "#8a5d12" : "#2f333a"}
-      fontFamily="JetBrains Mono, monospace"
-    >
-      {text}
-    </text>
-  );
-}
 
 /**
  * A lip seal in its housing on the shaft, cut through the axis: the shaft diameter, the housing bore and the seal's

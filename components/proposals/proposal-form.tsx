@@ -220,6 +220,7 @@ export function ProposalForm({
       outerMm: n(standard.outerMm),
       widthMm: n(standard.widthMm),
       lengthMm: n(standard.lengthMm),
+      template: standard.template,
     });
   }, [standardMode, standard]);
   const liveChecks = checked?.checks ?? [];
@@ -423,6 +424,16 @@ export function ProposalForm({
                 />
               ))}
             </div>
+            {standard?.kind === "gasket" && (
+              <Field
+                id="standard-template"
+                label="Template"
+                mono
+                hint="The link from Measure → Gasket: the gasket is kept as the template it is cut to."
+                error={errorAt(errors, "standard.template")}
+                {...register("standard.template", { setValueAs: (v) => v || null })}
+              />
+            )}
             <p className="text-sm text-ink-soft">
               Sizes are optional when the designation says them; the engine checks any you enter against it.
             </p>

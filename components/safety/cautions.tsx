@@ -32,6 +32,30 @@ const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
       "Old seals and gaskets may contain asbestos: keep them wet, do not sand or blow them clean, and bag the waste.",
     ],
   },
+  drivers: {
+    title: "Drivers, punches and hammers",
+    points: [
+      "Wear safety glasses: a hardened punch or an old plug can throw chips when struck.",
+      "Use a driver or punch with a clean, square face, and a hammer whose head is tight on its handle.",
+      "Hold short parts in a vice or with a punch holder, not with your fingers.",
+    ],
+  },
+  glands: {
+    title: "Packing glands on a running pump",
+    points: [
+      "Adjust a gland only with the engine stopped, or with a long spanner from the side, well clear of the fan and belt: " +
+        "sleeves, cuffs and rags wind onto a turning shaft.",
+      "Let the engine cool before you open the cooling system: hot coolant under pressure scalds.",
+    ],
+  },
+  gaskets: {
+    title: "Old gaskets",
+    points: [
+      "Gaskets on machines of this age may contain asbestos. Wet the old gasket before scraping it off, never sand, " +
+        "grind or blow it clean, wear a disposable respirator (FFP3 or P100), and bag the waste as your local rules say.",
+      "Cut new gaskets with a sharp knife away from your hand, on a board, and punch holes on end grain or a lead block.",
+    ],
+  },
 };
 
 /** Short cautions for the work on the page; they defer to the maker's manual and local practice. */

@@ -7,7 +7,7 @@ export interface SizedPart {
   maker: string;
   number: string;
   description: string;
-  innerMm: number;
+  innerMm: number | null;
   outerMm: number;
   widthMm: number | null;
 }
@@ -18,7 +18,8 @@ export interface SizedPart {
  */
 export async function findPartsBySize(input: {
   category: PartCategory;
-  innerMm: number;
+  /** Null for a part known by its outside alone (a plug). */
+  innerMm: number | null;
   outerMm: number;
   toleranceMm: number;
   limit?: number;
@@ -35,17 +36,17 @@ export async function findPartsBySize(input: {
   }>(
     `SELECT p.id, m.name AS maker, p.number, p.description, p.inner_mm, p.outer_mm, p.width_mm
      FROM original_parts p JOIN makers m ON m.id = p.maker_id
-     WHERE p.category = :category AND p.inner_mm BETWEEN :innerLo AND :innerHi AND p.outer_mm BETWEEN :outerLo AND
-       :outerHi
-     ORDER BY abs(p.inner_mm - :inner) + abs(p.outer_mm - :outer), p.number
+     WHERE p.category = :category AND p.outer_mm BETWEEN :outerLo AND :outerHi AND
+       (CAST(:inner AS numeric) IS NULL OR p.inner_mm BETWEEN :innerLo AND :innerHi)
+     ORDER BY abs(coalesce(p.inner_mm - :inner, 0)) + abs(p.outer_mm - :outer), p.number
      LIMIT :limit`,
     {
       replacements: {
         category: input.category,
         inner: input.innerMm,
         outer: input.outerMm,
-        innerLo: input.innerMm - w,
-        innerHi: input.innerMm + w,
+        innerLo: input.innerMm === null ? null : input.innerMm - w,
+        innerHi: input.innerMm === null ? null : input.innerMm + w,
         outerLo: input.outerMm - w,
         outerHi: input.outerMm + w,
         limit: input.limit ?? 12,

@@ -7,6 +7,7 @@ export const PART_CATEGORIES = [
   "gasket",
   "plug",
   "other",
+  "packing",
 ] as const;
 export type PartCategory = (typeof PART_CATEGORIES)[number];
 
@@ -19,6 +20,8 @@ export const STANDARD_KINDS = [
   "felt",
   "sleeve",
   "gasket_sheet",
+  "packing",
+  "gasket",
 ] as const;
 export type StandardKind = (typeof STANDARD_KINDS)[number];
 
@@ -39,7 +42,7 @@ export const MACHINE_KINDS = ["tractor", "crawler", "engine"] as const;
 export type MachineKind = (typeof MACHINE_KINDS)[number];
 
 /** The kinds of work that carry a caution on screen. */
-export type CautionKind = "bearings" | "belts" | "coolant" | "seals";
+export type CautionKind = "bearings" | "belts" | "coolant" | "seals" | "drivers" | "glands" | "gaskets";
 
 export const CATEGORY_NAMES: Record<PartCategory, string> = {
   bearing: "Ball bearing",
@@ -50,6 +53,7 @@ export const CATEGORY_NAMES: Record<PartCategory, string> = {
   gasket: "Gasket",
   plug: "Plug",
   other: "Other",
+  packing: "Gland packing",
 };
 
 export const FIT_NAMES: Record<Fit, { word: string; mark: string; text: string }> = {
@@ -67,4 +71,6 @@ export const STANDARD_KIND_NAMES: Record<StandardKind, string> = {
   felt: "Felt",
   sleeve: "Shaft repair sleeve",
   gasket_sheet: "Gasket sheet",
+  packing: "Gland packing",
+  gasket: "Gasket (cut to a template)",
 };

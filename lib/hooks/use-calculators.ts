@@ -4,6 +4,9 @@ import { apiUrl, useApi } from "@/lib/hooks/use-api";
 import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
 import type { DecodedBelt, SectionCandidate } from "@/lib/standards/belts";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
+import type { FeltSize } from "@/lib/standards/felts";
+import type { PackingSize } from "@/lib/standards/packing";
+import type { PlugMatch } from "@/lib/standards/plugs";
 
 type Params = Record<string, string | boolean | undefined>;
 
@@ -28,3 +31,12 @@ export const useBeltSection = (params: Params) =>
 
 export const useDrive = <T>(params: Params, required: string[]) =>
   useApi<T>(apiUrl("/api/belts/drive", params, required));
+
+export const useFeltSize = (params: Params) =>
+  useApi<FeltSize & { catalogueParts: SizedPart[] }>(apiUrl("/api/felts/size", params, ["shaft", "bore", "width"]));
+
+export const usePackingSize = (params: Params) =>
+  useApi<PackingSize & { catalogueParts: SizedPart[] }>(apiUrl("/api/packing/size", params, ["shaft", "bore"]));
+
+export const usePlugMatch = (params: Params) =>
+  useApi<PlugMatch & { catalogueParts: SizedPart[] }>(apiUrl("/api/plugs/match", params, ["bore"]));

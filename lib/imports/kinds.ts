@@ -104,6 +104,12 @@ export const IMPORT_FIELDS = [
       "isodesignation",
     ],
   },
+  {
+    key: "template",
+    label: "Gasket template",
+    required: false,
+    names: ["template", "gaskettemplate", "templatelink"],
+  },
   { key: "fit", label: "Fit", required: false, names: ["fit", "fits", "interchange", "fitment"] },
   { key: "notes", label: "Notes", required: false, names: ["notes", "note", "remarks", "comment", "comments"] },
   {

@@ -82,6 +82,8 @@ export const CATEGORY_FOR_KIND: Partial<Record<string, PartCategory>> = {
   plug: "plug",
   felt: "felt_seal",
   gasket_sheet: "gasket",
+  packing: "packing",
+  gasket: "gasket",
 };
 
 export const emptyCounts = (): ImportCounts => ({

@@ -67,6 +67,11 @@ for (const [word, c] of [
   ["vbelt", "v_belt"],
   ["fanbelt", "v_belt"],
   ["woodruffkey", "key"],
+  ["glandpacking", "packing"],
+  ["packing", "packing"],
+  ["cupplug", "plug"],
+  ["coreplug", "plug"],
+  ["expansionplug", "plug"],
 ] as const) {
   CATEGORY_WORDS.set(word, c);
 }
@@ -87,6 +92,7 @@ const KIND_FOR_CATEGORY: Record<PartCategory, StandardKind | null> = {
   gasket: "gasket_sheet",
   plug: "plug",
   other: null,
+  packing: "packing",
 };
 
 const FIT_WORDS = new Map<string, Fit>([
@@ -229,7 +235,10 @@ function readStandard(text: Cell, category: PartCategory | null, dims: Dims): Pa
     const reason = "Say what kind of standard part it is: give the category or the standard part kind.";
     throw new RowFailure(kindText ? "standardKind" : "category", reason);
   }
-  const checked = checkStandard({ kind, designation, ...dims });
+  const checked = checkStandard({ kind, designation, ...dims, template: text("template") || null });
+  const templateProblem = checked.checks.find((c) => c.level === "warning" && c.field === "standard.template");
+  if (kind === "gasket" && text("template") && templateProblem)
+    throw new RowFailure("template", templateProblem.message);
   const contradiction = checked.checks.find((c) => c.level === "warning" && c.field !== "standard.designation");
   if (contradiction)
     throw new RowFailure(contradiction.field.replace("standard.", "") as ImportField, contradiction.message);

@@ -547,7 +547,7 @@ export async function addLine(
   input: {
     partId?: number;
     number?: string;
-    standard?: { kind: MeasuredKind; designation: string; note?: string };
+    standard?: { kind: MeasuredKind; designation: string; note?: string; template?: string };
     quantity: number;
     notes?: string;
   },

@@ -3,13 +3,19 @@ import { findPartsBySize } from "@/lib/catalogue/find-by-size";
 import { matchBearing } from "@/lib/standards/bearings";
 import { BELT_MEASURING_NOTES, findSection, identifySection, standardLengthsForPitch } from "@/lib/standards/belts";
 import { adjustablePulleyRange, atTradePrecision, solveDrive } from "@/lib/standards/drive";
+import { sizeFelt } from "@/lib/standards/felts";
+import { sizePacking } from "@/lib/standards/packing";
+import { matchPlug } from "@/lib/standards/plugs";
 import { measureSeal } from "@/lib/standards/seals";
 import { fromMm, toMm, tradeRound } from "@/lib/standards/units";
 import {
   beltIdentifyQuery,
   bearingMatchQuery,
   driveQuery,
+  feltQuery,
   forField,
+  packingQuery,
+  plugQuery,
   readOptionalSize,
   readSize,
   readTolerance,
@@ -90,4 +96,48 @@ export function driveAnswer(q: z.infer<typeof driveQuery>) {
     body.standardLengths = standardLengthsForPitch(section, toMm(drive.pitchLength, q.unit));
   }
   return body;
+}
+
+/** Felt ring and strip for a seat, with the catalogue's felt seals of that shaft and seat. */
+export async function feltAnswer(q: z.infer<typeof feltQuery>) {
+  const shaftMm = readSize("shaft", q.shaft, q.unit);
+  const boreMm = readSize("bore", q.bore, q.unit);
+  const widthMm = readSize("width", q.width, q.unit);
+  const felt = forField("bore", () => sizeFelt({ shaftMm, boreMm, widthMm, unit: q.unit }));
+  const catalogueParts = await findPartsBySize({
+    category: "felt_seal",
+    innerMm: shaftMm,
+    outerMm: boreMm,
+    toleranceMm: readTolerance(undefined, q.unit) * 3,
+  });
+  return { ...felt, catalogueParts };
+}
+
+/** Gland packing for a stuffing box, with the catalogue's packings of that shaft and box. */
+export async function packingAnswer(q: z.infer<typeof packingQuery>) {
+  const shaftMm = readSize("shaft", q.shaft, q.unit);
+  const boreMm = readSize("bore", q.bore, q.unit);
+  const depthMm = readOptionalSize("depth", q.depth, q.unit);
+  const field = depthMm !== undefined && boreMm > shaftMm ? "depth" : "bore";
+  const packing = forField(field, () => sizePacking({ shaftMm, boreMm, depthMm, unit: q.unit }));
+  const catalogueParts = await findPartsBySize({
+    category: "packing",
+    innerMm: shaftMm,
+    outerMm: boreMm,
+    toleranceMm: readTolerance(undefined, q.unit) * 3,
+  });
+  return { ...packing, catalogueParts };
+}
+
+/** The cup or disc plug for a measured bore, with the catalogue's plugs of that size. */
+export async function plugAnswer(q: z.infer<typeof plugQuery>) {
+  const boreMm = readSize("bore", q.bore, q.unit);
+  const match = forField("bore", () => matchPlug({ boreMm, unit: q.unit, kind: q.kind }));
+  const catalogueParts = await findPartsBySize({
+    category: "plug",
+    innerMm: null,
+    outerMm: boreMm,
+    toleranceMm: readTolerance(undefined, q.unit) * 2,
+  });
+  return { ...match, catalogueParts };
 }

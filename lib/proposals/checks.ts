@@ -4,6 +4,7 @@ import { StandardsInputError } from "@/lib/standards/errors";
 import { INCH_SEALS, METRIC_SEALS } from "@/lib/standards/seal-sizes";
 import { MM_PER_INCH, parseLength, round, toMm } from "@/lib/standards/units";
 import type { StandardKind } from "@/lib/catalogue/kinds";
+import { checkFelt, checkGasket, checkPacking, checkPlug } from "@/lib/proposals/cut-part-checks";
 import type { Measurement, NewStandardInput, ProposalCheck } from "@/lib/proposals/kinds";
 
 export interface StandardDims {
@@ -60,7 +61,8 @@ export function readSealSize(
   designation: string,
 ): { innerMm: number; outerMm: number; widthMm: number; inch: boolean } | null {
   const unit = /\s*(mm|in\.?|inch(?:es)?|")\s*$/i.exec(designation);
-  const body = unit ? designation.slice(0, unit.index) : designation;
+  // Words before the sizes ("Felt ring 25 × 37 × 6 mm") name the part; the sizes start at the first digit.
+  const body = (unit ? designation.slice(0, unit.index) : designation).replace(/^[^\d.]*/, "");
   const parts = body.trim().split(/\s*[x×*]\s*/i);
   if (parts.length !== 3) return null;
   try {
@@ -89,6 +91,10 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
   if (input.kind === "bearing") return checkBearing(designation, entered);
   if (input.kind === "v_belt") return checkBelt(designation, entered);
   if (input.kind === "lip_seal") return checkSeal(designation, entered);
+  if (input.kind === "felt") return checkFelt(designation, entered, readSealSize);
+  if (input.kind === "packing") return checkPacking(designation, entered);
+  if (input.kind === "plug") return checkPlug(designation, entered);
+  if (input.kind === "gasket") return checkGasket(designation, entered, input.template);
   return { kind: input.kind, designation, ...entered, attributes: {}, checks: [] };
 }
 

@@ -50,6 +50,8 @@ export interface NewStandardInput {
   outerMm?: number | null;
   widthMm?: number | null;
   lengthMm?: number | null;
+  /** A gasket's template, as the query of `/api/gaskets/template.svg`. */
+  template?: string | null;
 }
 
 /** What the standards engine found when it checked a proposal; shown to the member and to the moderator. */

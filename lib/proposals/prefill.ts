@@ -9,6 +9,8 @@ export interface ProposalPrefill {
   kind: StandardKind;
   designation: string;
   measurements: Measurement[];
+  /** A gasket's template query. */
+  template?: string;
 }
 
 const measurementText = z
@@ -24,6 +26,7 @@ const prefillQuery = z.object({
   kind: z.enum(STANDARD_KINDS).optional().catch(undefined),
   designation: z.string().trim().min(2).max(80).optional().catch(undefined),
   m: z.string().max(400).optional().catch(undefined),
+  template: z.string().max(4000).optional().catch(undefined),
 });
 
 /** The link from a calculator's result to the proposal form, filled in. */
@@ -34,6 +37,7 @@ export function proposalHref(prefill: ProposalPrefill): string {
     .map((x) => `${x.dimension}:${x.value}:${x.unit}`)
     .join(",");
   if (m) query.set("m", m);
+  if (prefill.template) query.set("template", prefill.template);
   return `/propose?${query}`;
 }
 
@@ -44,9 +48,14 @@ export function proposalHref(prefill: ProposalPrefill): string {
 export function readProposalPrefill(
   params: Record<string, string | string[] | undefined>,
 ): Pick<ProposalFormValues, "standard" | "measurements"> | null {
-  const q = prefillQuery.parse({ kind: one(params.kind), designation: one(params.designation), m: one(params.m) });
+  const q = prefillQuery.parse({
+    kind: one(params.kind),
+    designation: one(params.designation),
+    m: one(params.m),
+    template: one(params.template),
+  });
   if (!q.kind || !q.designation) return null;
-  const checked = checkStandard({ kind: q.kind, designation: q.designation });
+  const checked = checkStandard({ kind: q.kind, designation: q.designation, template: q.template });
   const measurements = (q.m ?? "")
     .split(",")
     .map((text) => measurementText.safeParse(text))
@@ -62,6 +71,7 @@ export function readProposalPrefill(
       outerMm: size(checked.outerMm),
       widthMm: size(checked.widthMm),
       lengthMm: size(checked.lengthMm),
+      template: typeof checked.attributes.template === "string" ? checked.attributes.template : null,
     },
     measurements,
   };

@@ -139,6 +139,7 @@ async function resolveStandard(input: ProposalInput["standard"]): Promise<Resolv
     outerMm: input.outerMm,
     widthMm: input.widthMm,
     lengthMm: input.lengthMm,
+    template: input.template,
   });
   const { checks, ...standard } = checked;
   const known = await StandardPart.findOne({

@@ -36,6 +36,8 @@ export const measuredItemInput = z.object({
     .min(2, "Give the designation, e.g. 6205-2RS or 1-1/2 × 2.374 × 1/2 in.")
     .max(80, "A designation is at most 80 characters."),
   note: z.string().trim().max(300, "A note is at most 300 characters.").optional(),
+  /** A gasket's template query, from the gasket designer. */
+  template: z.string().trim().max(4000, "A template is at most 4000 characters.").optional(),
 });
 
 export const lineInput = z

@@ -61,6 +61,8 @@ const standard = z
     outerMm: mm("The outside diameter"),
     widthMm: mm("The width"),
     lengthMm: mm("The length"),
+    /** A gasket's template: the link from the gasket designer, or its query. */
+    template: z.string().trim().max(4000, "A template is at most 4000 characters.").nullable().optional(),
   })
   .superRefine((value, ctx) => {
     if (value.mode === "existing") {

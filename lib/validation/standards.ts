@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { AppError } from "@/lib/errors";
+import { GasketInputError, readTemplate, type GasketTemplate } from "@/lib/standards/gaskets";
 import { SURFACES } from "@/lib/standards/nominal";
+import { parseWith } from "@/lib/validation/parse";
 import { StandardsInputError } from "@/lib/standards/errors";
 import { parseLength, type LengthUnit } from "@/lib/standards/units";
 
@@ -119,4 +121,68 @@ export function readTolerance(value: string | undefined, unit: LengthUnit): numb
       field: "tolerance",
     });
   return mm;
+}
+
+export const feltQuery = z.object({
+  shaft: size("shaft diameter"),
+  bore: size("seat's bore"),
+  width: size("seat's width"),
+  unit,
+});
+
+export const packingQuery = z.object({
+  shaft: size("shaft diameter"),
+  bore: size("stuffing box's bore"),
+  depth: optionalSize("stuffing box's depth"),
+  unit,
+});
+
+export const plugQuery = z.object({
+  bore: size("bore"),
+  unit,
+  kind: z.enum(["cup", "disc"], { error: "The kind is cup or disc." }).default("cup"),
+});
+
+const templateText = (what: string, max = 400) =>
+  z
+    .string()
+    .trim()
+    .max(max, `The ${what} is at most ${max} characters.`)
+    .optional()
+    .or(z.literal("").transform(() => undefined));
+
+/** A gasket template's query: lengths and lists as text, read and checked by the gasket engine. */
+export const gasketQuery = z.object({
+  unit: z.enum(["mm", "in"], { error: "Choose mm or in." }).default("mm"),
+  outline: z.enum(["circle", "rect", "polygon"], { error: "The outline is one of: circle, rect, polygon." }),
+  od: templateText("outside diameter", 40),
+  width: templateText("width", 40),
+  height: templateText("height", 40),
+  radius: templateText("corner radius", 40),
+  points: templateText("list of points", 4000),
+  bore: templateText("bore", 40),
+  cutouts: templateText("list of cut-outs", 2000),
+  holes: templateText("number of holes", 4),
+  pcd: templateText("bolt circle", 40),
+  angle: templateText("angle", 12),
+  holeAt: templateText("list of hole positions", 4000),
+  hole: templateText("hole diameter", 40),
+  use: z
+    .enum(["water", "oil", "fuel", "exhaust"], { error: "The use is one of: water, oil, fuel, exhaust." })
+    .default("water"),
+});
+
+/** A gasket template from its query; the engine's refusal becomes a 400 naming the parameter it is about. */
+export function readGasketQuery(query: unknown): GasketTemplate {
+  const q = parseWith(gasketQuery, query);
+  try {
+    return readTemplate(q);
+  } catch (error) {
+    if (error instanceof GasketInputError)
+      throw new AppError("validation_failed", error.message, {
+        field: error.field,
+        fields: { [error.field]: error.message },
+      });
+    throw error;
+  }
 }
