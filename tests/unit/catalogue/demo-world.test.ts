@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { decodeBearing } from "@/lib/standards/bearings";
 import { decodeBelt } from "@/lib/standards/belts";
+import { checkStandard } from "@/lib/proposals/checks";
 
 const demo = buildDemoCatalogue();
 
@@ -15,7 +16,7 @@ describe("the invented demo catalogue", () => {
 
   it("covers every category of part", () => {
     expect(new Set(demo.parts.map((p) => p.category))).toEqual(
-      new Set(["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other"]),
+      new Set(["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other", "packing"]),
     );
   });
 
@@ -79,5 +80,32 @@ describe("the invented demo catalogue", () => {
     // A digit, a letter, a dash and four digits is a real maker's numbering shape; the demo uses none like it.
     expect(demo.parts.some((p) => /^\d[A-Z]-\d{4}/.test(p.number))).toBe(false);
     expect(buildDemoCatalogue()).toEqual(demo);
+  });
+});
+
+describe("the demo's felt, packing, plug and gasket parts", () => {
+  it("are standard parts the engine reads back to the sizes they were recorded with", () => {
+    const kinds = ["felt", "packing", "plug", "gasket"] as const;
+    for (const kind of kinds) {
+      const parts = demo.standardParts.filter((s) => s.kind === kind);
+      expect(parts.length, kind).toBeGreaterThan(0);
+      for (const s of parts) {
+        const template = typeof s.attributes.template === "string" ? s.attributes.template : undefined;
+        const read = checkStandard({ kind, designation: s.designation, template });
+        for (const key of ["innerMm", "outerMm", "widthMm"] as const)
+          if (s[key] !== null) expect(read[key], `${s.designation} ${key}`).toBeCloseTo(s[key]!, 2);
+      }
+    }
+  });
+
+  it("pack every water pump with gland packing and cut its body gasket to a template", () => {
+    const packings = demo.parts.filter((p) => p.category === "packing");
+    expect(packings.length).toBeGreaterThanOrEqual(2);
+    const gaskets = demo.parts.filter((p) => p.description === "Water pump body gasket");
+    const standardKeys = new Map(demo.standardParts.map((s) => [s.key, s]));
+    for (const g of gaskets)
+      expect(
+        demo.crosses.some((c) => c.partKey === g.key && standardKeys.get(c.standardKey ?? "")?.kind === "gasket"),
+      ).toBe(true);
   });
 });

@@ -185,3 +185,36 @@ describe("a measured standard part on a job list", () => {
     });
   });
 });
+
+describe("standard parts cut or driven in the workshop", () => {
+  it("reads a felt ring's inside × outside × thickness from its designation", () => {
+    const felt = checkStandard({ kind: "felt", designation: "Felt ring 1-1/4 × 1-3/4 × 1/4 in" });
+    // NIST SP 811: 1 in = 25.4 mm exactly.
+    expect(felt).toMatchObject({ innerMm: 31.75, outerMm: 44.45, widthMm: 6.35 });
+    expect(felt.checks[0].level).toBe("ok");
+    expect(checkStandard({ kind: "felt", designation: "felt strip" }).checks[0].level).toBe("warning");
+  });
+
+  it("reads gland packing's section and a plug's bore", () => {
+    expect(checkStandard({ kind: "packing", designation: "Gland packing 1/4 in square" }).widthMm).toBe(6.35);
+    expect(checkStandard({ kind: "plug", designation: "Cup plug 1-1/2 in" })).toMatchObject({
+      outerMm: 38.1,
+      attributes: { plug: "cup" },
+    });
+    expect(checkStandard({ kind: "plug", designation: "Pipe plug 1/4 NPT" }).checks).toEqual([]);
+  });
+
+  it("keeps a gasket as its template, from the designer's link or its query", () => {
+    const link = "https://example.test/measure/gasket?unit=mm&outline=circle&od=120&holes=4&pcd=100&hole=10";
+    const gasket = checkStandard({ kind: "gasket", designation: "", template: link });
+    expect(gasket).toMatchObject({ designation: "Gasket Ø120 mm, 4 holes Ø10 on Ø100, 0.8 mm fibre", outerMm: 120 });
+    expect(gasket.attributes.template).toBe("unit=mm&outline=circle&od=120&holes=4&pcd=100&hole=10&use=water");
+    const broken = checkStandard({
+      kind: "gasket",
+      designation: "pump gasket",
+      template: "outline=circle&od=50&holes=4&pcd=60&hole=5",
+    });
+    expect(broken.checks[0]).toMatchObject({ level: "warning", field: "standard.template" });
+    expect(checkStandard({ kind: "gasket", designation: "pump gasket" }).checks[0].level).toBe("warning");
+  });
+});
