@@ -43,17 +43,19 @@ const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
   glands: {
     title: "Packing glands on a running pump",
     points: [
-      "Adjust a gland only with the engine stopped, or with a long spanner from the side, well clear of the fan and belt: " +
-        "sleeves, cuffs and rags wind onto a turning shaft.",
+      "Adjust a gland only with the engine stopped, or with a long spanner from the side, well clear of the fan " +
+        "and belt: sleeves, cuffs and rags wind onto a turning shaft.",
       "Let the engine cool before you open the cooling system: hot coolant under pressure scalds.",
     ],
   },
   gaskets: {
     title: "Old gaskets",
     points: [
-      "Gaskets on machines of this age may contain asbestos. Wet the old gasket before scraping it off, never sand, " +
-        "grind or blow it clean, wear a disposable respirator (FFP3 or P100), and bag the waste as your local rules say.",
-      "Cut new gaskets with a sharp knife away from your hand, on a board, and punch holes on end grain or a lead block.",
+      "Gaskets on machines of this age may contain asbestos. Wet the old gasket before scraping it off, never " +
+        "sand, grind or blow it clean, wear a disposable respirator (FFP3 or P100), and bag the waste as your " +
+        "local rules say.",
+      "Cut new gaskets with a sharp knife drawn away from your hand, on a board; punch holes over end grain " +
+        "or a lead block.",
     ],
   },
 };
