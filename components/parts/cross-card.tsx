@@ -1,5 +1,6 @@
 import { ConfirmButton } from "@/components/parts/confirm-button";
 import { FitBadge } from "@/components/parts/fit-badge";
+import { TemplateLinks } from "@/components/measure/template-links";
 import type { CrossView } from "@/lib/catalogue/get-part";
 
 const sizes = (s: NonNullable<CrossView["standard"]>) =>
@@ -39,6 +40,9 @@ export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signe
             .map(([label, mm]) => `${label} ${mm} mm (${(mm / 25.4).toFixed(3)} in)`)
             .join(" · ")}
         </p>
+      )}
+      {typeof cross.standard?.attributes.template === "string" && (
+        <TemplateLinks query={cross.standard.attributes.template} title={cross.standard.designation} />
       )}
       {cross.repairMethod && <p className={cross.standard ? "text-ink-soft" : "text-lg"}>{cross.repairMethod}</p>}
       {cross.notes && <p className="border-l-2 border-brass pl-2 text-sm whitespace-pre-line">{cross.notes}</p>}

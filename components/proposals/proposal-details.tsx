@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { TemplateLinks } from "@/components/measure/template-links";
 import { FitBadge } from "@/components/parts/fit-badge";
 import { Notice } from "@/components/ui/notice";
 import { CATEGORY_NAMES, STANDARD_KIND_NAMES } from "@/lib/catalogue/kinds";
@@ -49,6 +50,9 @@ export function ProposalDetails({ detail: d }: { detail: ProposalDetail }) {
             <span className="num font-bold">{d.standardPart.designation}</span> ·{" "}
             {STANDARD_KIND_NAMES[d.standardPart.kind]}
             <span className="block num">{standardSizes(d.standardPart) || "no sizes given"}</span>
+            {d.standardPart.template && (
+              <TemplateLinks query={d.standardPart.template} title={d.standardPart.designation} />
+            )}
             {d.standardPart.isNew && (
               <span className="block text-sm font-bold text-caution">
                 New to the catalogue: approving adds it with these sizes.

@@ -231,6 +231,8 @@ function readStandard(text: Cell, category: PartCategory | null, dims: Dims): Pa
     const reason = `Unknown standard part kind "${kindText}". Use one of: ${STANDARD_KINDS.join(", ")}.`;
     if (!kind) throw new RowFailure("standardKind", reason);
   }
+  // A gasket with a template is cut to it, not merely cut from sheet.
+  if (!kindText && kind === "gasket_sheet" && text("template")) kind = "gasket";
   if (!kind) {
     const reason = "Say what kind of standard part it is: give the category or the standard part kind.";
     throw new RowFailure(kindText ? "standardKind" : "category", reason);

@@ -134,7 +134,7 @@ async function resolveStandard(input: ProposalInput["standard"]): Promise<Resolv
   }
   const checked = checkStandard({
     kind: input.kind!,
-    designation: input.designation!,
+    designation: input.designation ?? "",
     innerMm: input.innerMm,
     outerMm: input.outerMm,
     widthMm: input.widthMm,

@@ -147,6 +147,8 @@ export interface StandardView extends StandardDims {
   kind: StandardKind;
   designation: string;
   isNew: boolean;
+  /** A gasket's template query, to draw it for the reviewer. */
+  template: string | null;
 }
 
 export interface ProposalDetail extends ProposalRow {
@@ -261,12 +263,18 @@ async function partOf(proposal: Proposal, part: OriginalPart | null): Promise<Pr
   };
 }
 
+function templateOf(s: object): string | null {
+  const attributes = (s as { attributes?: Record<string, unknown> }).attributes;
+  return typeof attributes?.template === "string" ? attributes.template : null;
+}
+
 /** The standard part: the catalogue's, or the new one the proposal describes. */
 async function standardOf(proposal: Proposal): Promise<StandardView> {
   const std = proposal.standardPartId ? await StandardPart.findByPk(proposal.standardPartId) : null;
   if (std) {
     const { id, kind, designation, innerMm, outerMm, widthMm, lengthMm } = std;
-    return { id, kind, designation, innerMm, outerMm, widthMm, lengthMm, isNew: false };
+    const template = typeof std.attributes?.template === "string" ? std.attributes.template : null;
+    return { id, kind, designation, innerMm, outerMm, widthMm, lengthMm, isNew: false, template };
   }
   const s = proposal.newStandard!;
   const size = (v: number | null | undefined) => v ?? null;
@@ -279,6 +287,7 @@ async function standardOf(proposal: Proposal): Promise<StandardView> {
     widthMm: size(s.widthMm),
     lengthMm: size(s.lengthMm),
     isNew: true,
+    template: templateOf(s),
   };
 }
 

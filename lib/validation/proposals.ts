@@ -71,7 +71,9 @@ const standard = z
       return;
     }
     if (!value.kind) ctx.addIssue({ code: "custom", path: ["kind"], message: "Choose the kind of standard part." });
-    if (!value.designation || value.designation.length < 2) {
+    // A gasket drawn as a template is named by its template when no designation is typed.
+    const named = value.kind === "gasket" && Boolean(value.template);
+    if (!named && (!value.designation || value.designation.length < 2)) {
       ctx.addIssue({
         code: "custom",
         path: ["designation"],

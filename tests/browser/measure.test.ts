@@ -94,4 +94,31 @@ describe("measuring a part", () => {
     await page.locator("#bore-error").getByText("is not a size").waitFor();
     expect(await field("Bore (d)").getAttribute("aria-invalid")).toBe("true");
   });
+
+  it("sizes a felt, gland packing and a cup plug from the workshop tabs", async () => {
+    const page = currentPage();
+    await page.goto(`${APP_URL}/measure/felt`);
+    await page.getByText("inch", { exact: true }).click();
+    await field("Shaft").fill("1.247");
+    await field("Groove bore").fill("1.75");
+    await field("Groove width").fill("1/4");
+    await page.getByTestId("order-label").getByText("Felt ring 1-1/4 × 1-3/4 × 1/4 in").waitFor();
+
+    await page.getByRole("link", { name: "Packing", exact: true }).click();
+    await page.waitForURL(/\/measure\/packing$/);
+    await field("Box bore").waitFor();
+    await field("Shaft").fill("5/8");
+    await field("Box bore").fill("1-1/8");
+    await field("Box depth").fill("1");
+    await page.getByTestId("order-label").getByText("Gland packing 1/4 in square").waitFor();
+    await page.getByText("Packing glands on a running pump").waitFor();
+
+    await page.getByRole("link", { name: "Plug", exact: true }).click();
+    await page.waitForURL(/\/measure\/plug$/);
+    await page.getByText("Kind of plug").waitFor();
+    await field("Bore").fill("1.503");
+    await page.getByTestId("order-label").getByText("Cup plug 1-1/2 in").waitFor();
+    await page.getByText("differ by only 0.1 mm").waitFor();
+    await page.getByText("Drivers, punches and hammers").waitFor();
+  });
 });
