@@ -8,14 +8,13 @@ import { OrderCard } from "@/components/measure/order-card";
 import { ResultActions } from "@/components/measure/result-actions";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SizeField } from "@/components/measure/size-field";
-import { UnitSwitch } from "@/components/measure/unit-switch";
+import { MeasurePanel } from "@/components/measure/measure-panel";
 import { WarningList } from "@/components/measure/warning-list";
-import { Notice } from "@/components/ui/notice";
 import { useDebounced } from "@/lib/hooks/use-api";
 import { useBearingDecode, useBearingMatch } from "@/lib/hooks/use-calculators";
 import type { DecodedBearing } from "@/lib/standards/bearings";
-import { useLengthUnit } from "@/lib/hooks/use-length-unit";
-import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
+import { useMeasuredSizes } from "@/lib/hooks/use-measured-sizes";
+import { measuredValues, showLength } from "@/lib/standards/units";
 
 // A bearing's metric size said in inches as a person would read it with a micrometer: to the thousandth.
 const inches = (mm: number) => showLength(mm / 25.4, "in").replace(" in", "");
@@ -59,20 +58,12 @@ function DecodeCard({ decoded }: { decoded: DecodedBearing }) {
 
 export function BearingCalculator() {
   const [designation, setDesignation] = useState("");
-  const [unit, setUnit] = useLengthUnit();
-  const [sizes, setSizes] = useState({ bore: "", od: "", width: "", tolerance: "" });
-  const changeUnit = (next: LengthUnit) => {
-    setSizes((s) => convertTypedSizes(s, ["bore", "od", "width", "tolerance"], unit, next));
-    setUnit(next);
-  };
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["bore", "od", "width", "tolerance"] as const);
   const [active, setActive] = useState<BearingDimension>(null);
   const settledDesignation = useDebounced(designation);
-  const settled = useDebounced(sizes);
 
   const decode = useBearingDecode(settledDesignation);
   const match = useBearingMatch({ ...settled, unit });
-  const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
-  const otherError = unplacedError(match.error, ["bore", "od", "width", "tolerance"]);
 
   return (
     <div className="space-y-10">
@@ -96,10 +87,13 @@ export function BearingCalculator() {
         <h2 id="measure-heading" className="text-2xl">
           No number? Measure it
         </h2>
-        <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
-          <div className="space-y-4">
-            <UnitSwitch unit={unit} onChange={changeUnit} />
-            <div className="grid gap-4 sm:grid-cols-2">
+        <MeasurePanel
+          unit={unit}
+          onUnit={changeUnit}
+          columns="sm:grid-cols-2"
+          error={unplacedError(match.error, ["bore", "od", "width", "tolerance"])}
+          fields={
+            <>
               <SizeField
                 id="bore"
                 label="Bore (d)"
@@ -139,21 +133,14 @@ export function BearingCalculator() {
                 error={errorFor(match.error, "tolerance")}
                 unit={unit}
               />
-            </div>
-          </div>
-          <figure className="rounded-lg border border-rule bg-ground-raised p-3">
-            <BearingDrawing active={active} />
-            <figcaption className="text-sm text-ink-soft">
-              Measure each diameter at two or three places round it. A bearing that spun on its shaft reads large in the
-              bore, one that spun in its housing reads small on the OD; the matching allows for that.
-            </figcaption>
-          </figure>
-        </div>
-        {otherError && (
-          <Notice tone="caution" role="alert">
-            {otherError}
-          </Notice>
-        )}
+            </>
+          }
+          drawing={<BearingDrawing active={active} />}
+          caption={
+            "Measure each diameter at two or three places round it. A bearing that spun on its shaft reads large " +
+            "in the bore, one that spun in its housing reads small on the OD; the matching allows for that."
+          }
+        />
         <div aria-live="polite" aria-busy={match.isLoading} className="space-y-3">
           {match.data && match.data.candidates[0] && (
             <OrderCard

@@ -6,37 +6,29 @@ import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { OrderCard } from "@/components/measure/order-card";
 import { ResultActions } from "@/components/measure/result-actions";
 import { SizeField } from "@/components/measure/size-field";
-import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { FeltDrawing, type FeltDimension } from "@/components/measure/workshop-drawings";
-import { Notice } from "@/components/ui/notice";
-import { useDebounced } from "@/lib/hooks/use-api";
+import { MeasurePanel } from "@/components/measure/measure-panel";
 import { useFeltSize } from "@/lib/hooks/use-calculators";
-import { useLengthUnit } from "@/lib/hooks/use-length-unit";
-import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
+import { useMeasuredSizes } from "@/lib/hooks/use-measured-sizes";
+import { measuredValues, showLength } from "@/lib/standards/units";
 
 /** A felt seal's groove measured: the ring to cut, the strip to cut it from, and how to fit it. */
 export function FeltCalculator() {
-  const [unit, setUnit] = useLengthUnit();
-  const [sizes, setSizes] = useState({ shaft: "", bore: "", width: "" });
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "width"] as const);
   const [active, setActive] = useState<FeltDimension>(null);
-  const changeUnit = (next: LengthUnit) => {
-    setSizes((s) => convertTypedSizes(s, ["shaft", "bore", "width"], unit, next));
-    setUnit(next);
-  };
-  const settled = useDebounced(sizes);
-  const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
   const felt = useFeltSize({ ...settled, unit });
-  const otherError = unplacedError(felt.error, ["shaft", "bore", "width"]);
   const data = felt.data;
   const show = (v: number) => showLength(v, data?.unit ?? unit);
 
   return (
     <div className="space-y-8">
-      <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
-        <div className="space-y-4">
-          <UnitSwitch unit={unit} onChange={changeUnit} />
-          <div className="grid gap-4 sm:grid-cols-3">
+      <MeasurePanel
+        unit={unit}
+        onUnit={changeUnit}
+        error={unplacedError(felt.error, ["shaft", "bore", "width"])}
+        fields={
+          <>
             <SizeField
               id="shaft"
               label="Shaft"
@@ -66,20 +58,11 @@ export function FeltCalculator() {
               error={errorFor(felt.error, "width")}
               unit={unit}
             />
-          </div>
-        </div>
-        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
-          <FeltDrawing active={active} />
-          <figcaption className="text-sm text-ink-soft">
-            Pick the old felt out first: measure the groove itself, not the hardened felt.
-          </figcaption>
-        </figure>
-      </div>
-      {otherError && (
-        <Notice tone="caution" role="alert">
-          {otherError}
-        </Notice>
-      )}
+          </>
+        }
+        drawing={<FeltDrawing active={active} />}
+        caption="Pick the old felt out first: measure the groove itself, not the hardened felt."
+      />
       <section aria-live="polite" aria-busy={felt.isLoading} className="space-y-3" aria-label="Felt to cut">
         {data && (
           <OrderCard

@@ -6,36 +6,28 @@ import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { OrderCard } from "@/components/measure/order-card";
 import { ResultActions } from "@/components/measure/result-actions";
 import { SizeField } from "@/components/measure/size-field";
-import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { PackingDrawing, type PackingDimension } from "@/components/measure/workshop-drawings";
-import { Notice } from "@/components/ui/notice";
-import { useDebounced } from "@/lib/hooks/use-api";
+import { MeasurePanel } from "@/components/measure/measure-panel";
 import { usePackingSize } from "@/lib/hooks/use-calculators";
-import { useLengthUnit } from "@/lib/hooks/use-length-unit";
-import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
+import { useMeasuredSizes } from "@/lib/hooks/use-measured-sizes";
+import { measuredValues, showLength } from "@/lib/standards/units";
 
 /** A stuffing box measured: the packing section to buy, the length of each ring and how many rings. */
 export function PackingCalculator() {
-  const [unit, setUnit] = useLengthUnit();
-  const [sizes, setSizes] = useState({ shaft: "", bore: "", depth: "" });
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "depth"] as const);
   const [active, setActive] = useState<PackingDimension>(null);
-  const changeUnit = (next: LengthUnit) => {
-    setSizes((s) => convertTypedSizes(s, ["shaft", "bore", "depth"], unit, next));
-    setUnit(next);
-  };
-  const settled = useDebounced(sizes);
-  const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
   const packing = usePackingSize({ ...settled, unit });
-  const otherError = unplacedError(packing.error, ["shaft", "bore", "depth"]);
   const data = packing.data;
 
   return (
     <div className="space-y-8">
-      <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
-        <div className="space-y-4">
-          <UnitSwitch unit={unit} onChange={changeUnit} />
-          <div className="grid gap-4 sm:grid-cols-3">
+      <MeasurePanel
+        unit={unit}
+        onUnit={changeUnit}
+        error={unplacedError(packing.error, ["shaft", "bore", "depth"])}
+        fields={
+          <>
             <SizeField
               id="shaft"
               label="Shaft"
@@ -65,20 +57,11 @@ export function PackingCalculator() {
               error={errorFor(packing.error, "depth")}
               unit={unit}
             />
-          </div>
-        </div>
-        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
-          <PackingDrawing active={active} />
-          <figcaption className="text-sm text-ink-soft">
-            Dig out every old ring with a packing hook before you measure the box.
-          </figcaption>
-        </figure>
-      </div>
-      {otherError && (
-        <Notice tone="caution" role="alert">
-          {otherError}
-        </Notice>
-      )}
+          </>
+        }
+        drawing={<PackingDrawing active={active} />}
+        caption="Dig out every old ring with a packing hook before you measure the box."
+      />
       <section aria-live="polite" aria-busy={packing.isLoading} className="space-y-3" aria-label="Packing to buy">
         {data && (
           <OrderCard

@@ -6,43 +6,38 @@ import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { OrderCard } from "@/components/measure/order-card";
 import { ResultActions } from "@/components/measure/result-actions";
 import { SizeField } from "@/components/measure/size-field";
-import { UnitSwitch } from "@/components/measure/unit-switch";
 import { WarningList } from "@/components/measure/warning-list";
 import { PlugDrawing } from "@/components/measure/workshop-drawings";
 import { Notice } from "@/components/ui/notice";
-import { useDebounced } from "@/lib/hooks/use-api";
+import { MeasurePanel } from "@/components/measure/measure-panel";
 import { usePlugMatch } from "@/lib/hooks/use-calculators";
-import { useLengthUnit } from "@/lib/hooks/use-length-unit";
-import { convertTyped, measuredValues, showDeviation, type LengthUnit } from "@/lib/standards/units";
+import { useMeasuredSizes } from "@/lib/hooks/use-measured-sizes";
+import { measuredValues, showDeviation } from "@/lib/standards/units";
 
 /** A core or felt bore measured: the cup or disc plug to ask for, with the inch and metric near miss. */
 export function PlugCalculator() {
-  const [unit, setUnit] = useLengthUnit();
-  const [bore, setBore] = useState("");
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["bore"] as const);
   const [kind, setKind] = useState<"cup" | "disc">("cup");
   const [active, setActive] = useState(false);
-  const changeUnit = (next: LengthUnit) => {
-    setBore((b) => convertTyped(b, unit, next));
-    setUnit(next);
-  };
-  const settled = useDebounced(bore);
-  const plug = usePlugMatch({ bore: settled, unit, kind });
-  const otherError = unplacedError(plug.error, ["bore"]);
+  const plug = usePlugMatch({ bore: settled.bore, unit, kind });
   const data = plug.data;
   const best = data?.candidates[0];
 
   return (
     <div className="space-y-8">
-      <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
-        <div className="space-y-4">
-          <UnitSwitch unit={unit} onChange={changeUnit} />
-          <div className="grid gap-4 sm:grid-cols-2">
+      <MeasurePanel
+        unit={unit}
+        onUnit={changeUnit}
+        columns="sm:grid-cols-2"
+        error={unplacedError(plug.error, ["bore"])}
+        fields={
+          <>
             <SizeField
               id="bore"
               label="Bore"
               hint="Across the hole, where the plug's edge grips."
-              value={bore}
-              onChange={setBore}
+              value={sizes.bore}
+              onChange={set("bore")}
               onFocus={() => setActive(true)}
               error={errorFor(plug.error, "bore")}
               unit={unit}
@@ -63,28 +58,19 @@ export function PlugCalculator() {
                 </label>
               ))}
             </fieldset>
-          </div>
-        </div>
-        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
-          <PlugDrawing active={active} kind={kind} />
-          <figcaption className="text-sm text-ink-soft">
-            Measure across two diameters at right angles: a corroded bore is seldom round.
-          </figcaption>
-        </figure>
-      </div>
-      {otherError && (
-        <Notice tone="caution" role="alert">
-          {otherError}
-        </Notice>
-      )}
+          </>
+        }
+        drawing={<PlugDrawing active={active} kind={kind} />}
+        caption="Measure across two diameters at right angles: a corroded bore is seldom round."
+      />
       <section aria-live="polite" aria-busy={plug.isLoading} className="space-y-3" aria-label="Plug to ask for">
         {data && best && (
           <OrderCard title="The plug to ask for" label={best.label} notes={data.notes} source={data.source}>
             <ResultActions
               kind="plug"
               designation={best.label}
-              note={`bore measured ${settled} ${unit}`}
-              measurements={measuredValues([["outer", settled]], unit)}
+              note={`bore measured ${settled.bore} ${unit}`}
+              measurements={measuredValues([["outer", settled.bore]], unit)}
             />
           </OrderCard>
         )}

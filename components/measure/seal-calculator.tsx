@@ -8,15 +8,14 @@ import { ResultActions } from "@/components/measure/result-actions";
 import { errorFor, unplacedError } from "@/components/measure/field-errors";
 import { SealDrawing, type SealDimension } from "@/components/measure/seal-drawing";
 import { SizeField } from "@/components/measure/size-field";
-import { UnitSwitch } from "@/components/measure/unit-switch";
+import { MeasurePanel } from "@/components/measure/measure-panel";
 import { WarningList } from "@/components/measure/warning-list";
 import { Notice } from "@/components/ui/notice";
-import { useDebounced } from "@/lib/hooks/use-api";
 import { usePressFit, useSealMatch } from "@/lib/hooks/use-calculators";
-import { useLengthUnit } from "@/lib/hooks/use-length-unit";
+import { useMeasuredSizes } from "@/lib/hooks/use-measured-sizes";
 import type { PressFit, SealCandidate, SealOrder, ShaftCheck } from "@/lib/standards/seals";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
-import { convertTypedSizes, measuredValues, showLength, type LengthUnit } from "@/lib/standards/units";
+import { measuredValues, showLength } from "@/lib/standards/units";
 
 interface SealMatch {
   order: SealOrder;
@@ -30,19 +29,12 @@ interface SealMatch {
 const selectClass = "min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg";
 
 export function SealCalculator() {
-  const [unit, setUnit] = useLengthUnit();
-  const [sizes, setSizes] = useState({ shaft: "", bore: "", width: "", sealOd: "" });
-  const changeUnit = (next: LengthUnit) => {
-    setSizes((s) => convertTypedSizes(s, ["shaft", "bore", "width", "sealOd"], unit, next));
-    setUnit(next);
-  };
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "width", "sealOd"] as const);
   const [grooved, setGrooved] = useState(false);
   const [spring, setSpring] = useState("1");
   const [dustLip, setDustLip] = useState(false);
   const [outside, setOutside] = useState<"metal" | "rubber">("metal");
   const [active, setActive] = useState<SealDimension>(null);
-  const settled = useDebounced(sizes);
-  const set = (name: keyof typeof sizes) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
 
   const match = useSealMatch<SealMatch>({
     shaft: settled.shaft,
@@ -55,14 +47,15 @@ export function SealCalculator() {
     outside,
   });
   const fit = usePressFit<PressFit>({ bore: settled.bore, sealOd: settled.sealOd, unit, outside });
-  const otherError = unplacedError(match.error, ["shaft", "bore", "width"]);
 
   return (
     <div className="space-y-8">
-      <div className="grid gap-6 md:grid-cols-[1fr_20rem]">
-        <div className="space-y-4">
-          <UnitSwitch unit={unit} onChange={changeUnit} />
-          <div className="grid gap-4 sm:grid-cols-3">
+      <MeasurePanel
+        unit={unit}
+        onUnit={changeUnit}
+        error={unplacedError(match.error, ["shaft", "bore", "width"])}
+        fields={
+          <>
             <SizeField
               id="shaft"
               label="Shaft"
@@ -92,7 +85,9 @@ export function SealCalculator() {
               error={errorFor(match.error, "width")}
               unit={unit}
             />
-          </div>
+          </>
+        }
+        extra={
           <fieldset className="grid gap-4 rounded-lg border border-rule p-4 sm:grid-cols-2">
             <legend className="px-1 font-bold">What the old seal was like</legend>
             <label className="flex min-h-12 items-center gap-3">
@@ -137,20 +132,10 @@ export function SealCalculator() {
               </select>
             </div>
           </fieldset>
-        </div>
-        <figure className="rounded-lg border border-rule bg-ground-raised p-3">
-          <SealDrawing active={active} />
-          <figcaption className="text-sm text-ink-soft">
-            The spring side of the lip faces the oil. Measure the shaft where the new lip will run.
-          </figcaption>
-        </figure>
-      </div>
-
-      {otherError && (
-        <Notice tone="caution" role="alert">
-          {otherError}
-        </Notice>
-      )}
+        }
+        drawing={<SealDrawing active={active} />}
+        caption="The spring side of the lip faces the oil. Measure the shaft where the new lip will run."
+      />
       <section aria-live="polite" aria-busy={match.isLoading} className="space-y-3" aria-label="Matching seals">
         {match.data && (
           <OrderCard

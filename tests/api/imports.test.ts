@@ -8,6 +8,7 @@ import { runCommit, startCommit } from "@/lib/imports/imports";
 import { catalogueWriter, type ChunkWriter } from "@/lib/imports/write";
 import { getObject } from "@/lib/storage/s3";
 import { APP_URL, send, signIn } from "../helpers/api";
+import { settled, upload } from "../helpers/imports";
 
 afterAll(() => sequelize.close());
 
@@ -24,24 +25,6 @@ beforeAll(async () => {
     signIn("member@understudy.test"),
   ]);
 });
-
-function upload(cookie: string, bytes: Buffer, name = "club.csv", fields: Record<string, string> = {}) {
-  let req = request(APP_URL).post("/api/imports").set("Origin", APP_URL);
-  if (cookie) req = req.set("Cookie", cookie);
-  for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
-  return req.attach("file", bytes, { filename: name, contentType: "text/csv" });
-}
-
-/** Polls the import until the server-side work has finished. */
-async function settled(cookie: string, id: number) {
-  const deadline = Date.now() + 30_000;
-  for (;;) {
-    const { body } = await send("get", `/api/imports/${id}`, undefined, { cookie });
-    if (!["uploaded", "parsing", "committing"].includes(body.status)) return body;
-    if (Date.now() > deadline) throw new Error(`Import ${id} still ${body.status}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
 
 async function catalogueSnapshot() {
   const [parts, crosses, standards, makers, usages] = await Promise.all([

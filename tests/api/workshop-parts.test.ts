@@ -4,6 +4,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Maker, OriginalPart, sequelize, StandardPart } from "@/db";
 import { APP_URL, send, signIn } from "../helpers/api";
+import { settled, upload } from "../helpers/imports";
 
 afterAll(() => sequelize.close());
 
@@ -228,27 +229,15 @@ describe("felt, packing, plugs and gaskets through the catalogue", () => {
       ],
     ];
     const csv = Papa.unparse(rows);
-    const uploaded = await request(APP_URL)
-      .post("/api/imports")
-      .set("Origin", APP_URL)
-      .set("Cookie", admin)
-      .attach("file", Buffer.from(csv), { filename: "workshop.csv", contentType: "text/csv" });
+    const uploaded = await upload(admin, Buffer.from(csv), "workshop.csv");
     expect(uploaded.status).toBe(202);
     const id = uploaded.body.id;
-    const settled = async () => {
-      for (let i = 0; i < 150; i += 1) {
-        const { body } = await send("get", `/api/imports/${id}`, undefined, { cookie: admin });
-        if (!["uploaded", "parsing", "committing"].includes(body.status)) return body;
-        await new Promise((r) => setTimeout(r, 200));
-      }
-      throw new Error("import did not settle");
-    };
-    const parsed = await settled();
+    const parsed = await settled(admin, id);
     expect(parsed.mapping).toMatchObject({ template: "Gasket template" });
     expect(parsed.counts).toMatchObject({ rows: 5, newParts: 4, rejected: 1 });
     expect(parsed.rejections).toEqual([expect.objectContaining({ line: 6, column: "Gasket template" })]);
     expect((await send("post", `/api/imports/${id}/commit`, {}, { cookie: admin })).status).toBe(202);
-    expect((await settled()).status).toBe("committed");
+    expect((await settled(admin, id)).status).toBe("committed");
 
     const kindOf = async (number: string) => {
       const [[row]] = (await sequelize.query(
