@@ -163,8 +163,8 @@ describe("serial ranges", () => {
         .map((l: { number: string }) => l.number)
         .sort();
       // Serial 22-1000 of the Model 22 water pump: the early front bearing (under its service number), the early seal
-      // and key, and the parts fitted throughout.
-      expect(numbers).toEqual(["CV-3003-B", "CV-3004-A", "CV-3010-A", "CV-3013-A", "CV-3016-A"]);
+      // and key, and the parts fitted throughout, the gland packing among them.
+      expect(numbers).toEqual(["CV-3003-B", "CV-3004-A", "CV-3010-A", "CV-3013-A", "CV-3016-A", "CV-3182-A"]);
     },
   );
 
@@ -189,6 +189,7 @@ describe("serial ranges", () => {
         "CV-3010-A",
         "CV-3013-A",
         "CV-3017-A",
+        "CV-3182-A",
       ]);
       // The bearing that does not fit serial 22-3000 says so, by its number.
       const front = view.lines.find((l: { number: string }) => l.number === "CV-3000-A");

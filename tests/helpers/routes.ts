@@ -94,6 +94,12 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "parts/lookup": [{ method: "get", path: () => "/api/parts/lookup?q=CV-3003", door: "public" }],
   "photos/[id]": [{ method: "get", path: () => "/api/photos/999999", door: "public" }],
   "seals/match": [{ method: "get", path: () => "/api/seals/match?shaft=35&bore=52", door: "public" }],
+  "felts/size": [{ method: "get", path: () => "/api/felts/size?shaft=30&bore=40&width=5", door: "public" }],
+  "packing/size": [{ method: "get", path: () => "/api/packing/size?shaft=20&bore=32", door: "public" }],
+  "plugs/match": [{ method: "get", path: () => "/api/plugs/match?bore=38", door: "public" }],
+  "gaskets/template.svg": [
+    { method: "get", path: () => "/api/gaskets/template.svg?outline=circle&od=100", door: "public" },
+  ],
   "seals/press-fit": [{ method: "get", path: () => "/api/seals/press-fit?bore=47&sealOd=47.1", door: "public" }],
   "seals/shaft": [{ method: "get", path: () => "/api/seals/shaft?shaft=35", door: "public" }],
   "standard-parts": [{ method: "get", path: () => "/api/standard-parts?q=6205", door: "public" }],
