@@ -3,13 +3,22 @@ import { FitBadge } from "@/components/parts/fit-badge";
 import { TemplateLinks } from "@/components/measure/template-links";
 import type { CrossView } from "@/lib/catalogue/get-part";
 
-const sizes = (s: NonNullable<CrossView["standard"]>) =>
-  [
-    s.innerMm !== null && ["inner", s.innerMm],
-    s.outerMm !== null && ["outer", s.outerMm],
-    s.widthMm !== null && ["width", s.widthMm],
+/** What each size is called for a kind of standard part: a packing's width is its section, a gasket's its extent. */
+const SIZE_NAMES: Partial<Record<string, [string, string, string]>> = {
+  packing: ["inner", "outer", "section"],
+  plug: ["inner", "bore", "width"],
+  gasket: ["inner", "overall", "across"],
+};
+
+const sizes = (s: NonNullable<CrossView["standard"]>) => {
+  const [inner, outer, width] = SIZE_NAMES[s.kind] ?? ["inner", "outer", "width"];
+  return [
+    s.innerMm !== null && [inner, s.innerMm],
+    s.outerMm !== null && [outer, s.outerMm],
+    s.widthMm !== null && [width, s.widthMm],
     s.lengthMm !== null && ["pitch length", s.lengthMm],
   ].filter(Boolean) as Array<[string, number]>;
+};
 
 /** "3 members fitted this" / "size match only: not yet fitted by anyone". */
 function sureness(cross: CrossView): string {

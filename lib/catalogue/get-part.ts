@@ -1,6 +1,12 @@
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
-import { CATEGORY_NAMES, type CautionKind, type PartCategory, type SupersessionKind } from "@/lib/catalogue/kinds";
+import {
+  CATEGORY_NAMES,
+  CAUTION_FOR_CATEGORY,
+  type CautionKind,
+  type PartCategory,
+  type SupersessionKind,
+} from "@/lib/catalogue/kinds";
 import { bestCrosses, crossLabel, rankCrosses, type RankedCross } from "@/lib/catalogue/ranking";
 import { serialRangeText } from "@/lib/catalogue/serials";
 import { loadChain } from "@/lib/catalogue/supersessions";
@@ -56,14 +62,6 @@ export interface PartDetail {
   cautions: CautionKind[];
 }
 
-const CATEGORY_CAUTIONS: Partial<Record<PartCategory, CautionKind>> = {
-  bearing: "bearings",
-  v_belt: "belts",
-  lip_seal: "seals",
-  felt_seal: "seals",
-  gasket: "seals",
-};
-
 interface PartRow {
   id: number;
   maker_id: number;
@@ -94,7 +92,7 @@ export async function getPart(id: number): Promise<PartDetail> {
     restOfAssembly(id),
   ]);
   const cautions = new Set<CautionKind>();
-  const byCategory = CATEGORY_CAUTIONS[part.category];
+  const byCategory = CAUTION_FOR_CATEGORY[part.category];
   if (byCategory) cautions.add(byCategory);
   for (const u of used) if (u.caution) cautions.add(u.caution);
   return {

@@ -44,6 +44,17 @@ export type MachineKind = (typeof MACHINE_KINDS)[number];
 /** The kinds of work that carry a caution on screen. */
 export type CautionKind = "bearings" | "belts" | "coolant" | "seals" | "drivers" | "glands" | "gaskets";
 
+/** The caution each kind of part's work carries, on its part page and on a job list that holds it. */
+export const CAUTION_FOR_CATEGORY: Partial<Record<PartCategory, CautionKind>> = {
+  bearing: "bearings",
+  v_belt: "belts",
+  lip_seal: "seals",
+  felt_seal: "seals",
+  gasket: "gaskets",
+  packing: "glands",
+  plug: "drivers",
+};
+
 export const CATEGORY_NAMES: Record<PartCategory, string> = {
   bearing: "Ball bearing",
   lip_seal: "Lip seal",

@@ -6,6 +6,7 @@ import { recordAudit } from "@/lib/audit/record";
 import { lookUpParts, type LookupResult } from "@/lib/catalogue/find-parts";
 import {
   CATEGORY_NAMES,
+  CAUTION_FOR_CATEGORY,
   FIT_NAMES,
   STANDARD_KIND_NAMES,
   type CautionKind,
@@ -81,14 +82,6 @@ export interface ListView {
 
 /** How long a removed line can be put back. */
 export const UNDO_SECONDS = 600;
-
-const CAUTIONS: Partial<Record<PartCategory, CautionKind>> = {
-  bearing: "bearings",
-  v_belt: "belts",
-  lip_seal: "seals",
-  felt_seal: "seals",
-  gasket: "seals",
-};
 
 async function ownList(userId: string, id: number, transaction?: Transaction): Promise<JobList> {
   const list = await JobList.findByPk(id, { transaction });
@@ -438,7 +431,7 @@ function listTotals(view: ListLine[]): ListView["totals"] {
 /** The cautions for the kinds of part on the list and for the places they are fitted (a water pump: hot coolant). */
 async function listCautions(view: ListLine[], partIds: number[]): Promise<CautionKind[]> {
   const cautions = new Set<CautionKind>();
-  for (const l of view) if (CAUTIONS[l.category]) cautions.add(CAUTIONS[l.category]!);
+  for (const l of view) if (CAUTION_FOR_CATEGORY[l.category]) cautions.add(CAUTION_FOR_CATEGORY[l.category]!);
   if (partIds.length > 0) {
     const places = await sequelize.query<{ caution: CautionKind }>(
       `SELECT DISTINCT a.caution FROM part_usages u JOIN assemblies a ON a.id = u.assembly_id

@@ -279,6 +279,8 @@ describe("job lists", () => {
         (await send("post", `/api/lists/${id}/lines`, { standard: { kind, designation } }, { cookie: member })).status,
       ).toBe(201);
     const { body } = await send("get", `/api/lists/${id}`, undefined, { cookie: member });
+    // Each kind brings its caution: old gaskets (asbestos), a running gland, drivers and hammers, fitting seals.
+    expect(body.cautions).toEqual(expect.arrayContaining(["gaskets", "glands", "drivers", "seals"]));
     const line = body.lines.find((l: { category: string }) => l.category === "gasket");
     expect(line).toMatchObject({ quantity: 2, measured: { kind: "gasket", template: ROUND } });
     expect(line.chosen.outerMm).toBe(120);
