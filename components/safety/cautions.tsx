@@ -48,6 +48,14 @@ const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
       "Let the engine cool before you open the cooling system: hot coolant under pressure scalds.",
     ],
   },
+  chains: {
+    title: "Chains and sprockets",
+    points: [
+      "Engine stopped and key out before you touch a chain: a chain drawn onto a sprocket takes fingers with it.",
+      "Put every guard back before the engine runs again.",
+      "Wear safety glasses when pressing out or peening chain pins: a pin or a clip can fly.",
+    ],
+  },
   gaskets: {
     title: "Old gaskets",
     points: [

@@ -10,6 +10,7 @@ import * as nearNumberIndex from "@/db/migrations/0009-near-number-index";
 import * as proposals from "@/db/migrations/0010-proposals";
 import * as normalised from "@/db/migrations/0011-normalised";
 import * as packingAndGaskets from "@/db/migrations/0012-packing-and-gaskets";
+import * as smallParts from "@/db/migrations/0013-small-parts";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -25,4 +26,5 @@ export const migrations = [
   { name: "0010-proposals", ...proposals },
   { name: "0011-normalised", ...normalised },
   { name: "0012-packing-and-gaskets", ...packingAndGaskets },
+  { name: "0013-small-parts", ...smallParts },
 ];

@@ -8,6 +8,10 @@ export const PART_CATEGORIES = [
   "plug",
   "other",
   "packing",
+  "pin",
+  "fastener",
+  "grease_fitting",
+  "chain",
 ] as const;
 export type PartCategory = (typeof PART_CATEGORIES)[number];
 
@@ -22,6 +26,10 @@ export const STANDARD_KINDS = [
   "gasket_sheet",
   "packing",
   "gasket",
+  "pin",
+  "thread",
+  "grease_fitting",
+  "chain",
 ] as const;
 export type StandardKind = (typeof STANDARD_KINDS)[number];
 
@@ -42,7 +50,7 @@ export const MACHINE_KINDS = ["tractor", "crawler", "engine"] as const;
 export type MachineKind = (typeof MACHINE_KINDS)[number];
 
 /** The kinds of work that carry a caution on screen. */
-export type CautionKind = "bearings" | "belts" | "coolant" | "seals" | "drivers" | "glands" | "gaskets";
+export type CautionKind = "bearings" | "belts" | "coolant" | "seals" | "drivers" | "glands" | "gaskets" | "chains";
 
 /** The caution each kind of part's work carries, on its part page and on a job list that holds it. */
 export const CAUTION_FOR_CATEGORY: Partial<Record<PartCategory, CautionKind>> = {
@@ -53,6 +61,9 @@ export const CAUTION_FOR_CATEGORY: Partial<Record<PartCategory, CautionKind>> = 
   gasket: "gaskets",
   packing: "glands",
   plug: "drivers",
+  key: "drivers",
+  pin: "drivers",
+  chain: "chains",
 };
 
 export const CATEGORY_NAMES: Record<PartCategory, string> = {
@@ -65,6 +76,10 @@ export const CATEGORY_NAMES: Record<PartCategory, string> = {
   plug: "Plug",
   other: "Other",
   packing: "Gland packing",
+  pin: "Pin",
+  fastener: "Bolt, stud or nut",
+  grease_fitting: "Grease fitting",
+  chain: "Roller chain",
 };
 
 export const FIT_NAMES: Record<Fit, { word: string; mark: string; text: string }> = {
@@ -84,4 +99,8 @@ export const STANDARD_KIND_NAMES: Record<StandardKind, string> = {
   gasket_sheet: "Gasket sheet",
   packing: "Gland packing",
   gasket: "Gasket (cut to a template)",
+  pin: "Taper or straight pin",
+  thread: "Bolt, stud or nut (by thread)",
+  grease_fitting: "Grease fitting",
+  chain: "Roller chain",
 };

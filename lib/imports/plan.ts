@@ -84,6 +84,10 @@ export const CATEGORY_FOR_KIND: Partial<Record<string, PartCategory>> = {
   gasket_sheet: "gasket",
   packing: "packing",
   gasket: "gasket",
+  pin: "pin",
+  thread: "fastener",
+  grease_fitting: "grease_fitting",
+  chain: "chain",
 };
 
 export const emptyCounts = (): ImportCounts => ({

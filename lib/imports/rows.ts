@@ -72,6 +72,14 @@ for (const [word, c] of [
   ["cupplug", "plug"],
   ["coreplug", "plug"],
   ["expansionplug", "plug"],
+  ["taperpin", "pin"],
+  ["dowel", "pin"],
+  ["bolt", "fastener"],
+  ["stud", "fastener"],
+  ["nut", "fastener"],
+  ["greasefitting", "grease_fitting"],
+  ["greasenipple", "grease_fitting"],
+  ["rollerchain", "chain"],
 ] as const) {
   CATEGORY_WORDS.set(word, c);
 }
@@ -93,6 +101,10 @@ const KIND_FOR_CATEGORY: Record<PartCategory, StandardKind | null> = {
   plug: "plug",
   other: null,
   packing: "packing",
+  pin: "pin",
+  fastener: "thread",
+  grease_fitting: "grease_fitting",
+  chain: "chain",
 };
 
 const FIT_WORDS = new Map<string, Fit>([

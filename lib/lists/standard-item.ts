@@ -4,7 +4,20 @@ import type { PartCategory, StandardKind } from "@/lib/catalogue/kinds";
 import { round } from "@/lib/standards/units";
 
 /** The kinds of standard part a calculator works out, and the part category a job list files each under. */
-export const MEASURED_KINDS = ["bearing", "lip_seal", "v_belt", "felt", "packing", "plug", "gasket"] as const;
+export const MEASURED_KINDS = [
+  "bearing",
+  "lip_seal",
+  "v_belt",
+  "felt",
+  "packing",
+  "plug",
+  "gasket",
+  "key",
+  "pin",
+  "thread",
+  "grease_fitting",
+  "chain",
+] as const;
 export type MeasuredKind = (typeof MEASURED_KINDS)[number];
 
 export const CATEGORY_OF_KIND: Record<MeasuredKind, PartCategory> = {
@@ -15,6 +28,11 @@ export const CATEGORY_OF_KIND: Record<MeasuredKind, PartCategory> = {
   packing: "packing",
   plug: "plug",
   gasket: "gasket",
+  key: "key",
+  pin: "pin",
+  thread: "fastener",
+  grease_fitting: "grease_fitting",
+  chain: "chain",
 };
 
 /** A standard part on a job list by its designation and sizes, worked out from measurements, with no factory part. */

@@ -5,6 +5,7 @@ import { INCH_SEALS, METRIC_SEALS } from "@/lib/standards/seal-sizes";
 import { MM_PER_INCH, parseLength, round, toMm } from "@/lib/standards/units";
 import type { StandardKind } from "@/lib/catalogue/kinds";
 import { checkFelt, checkGasket, checkPacking, checkPlug } from "@/lib/proposals/cut-part-checks";
+import { checkChain, checkKey, checkPin, checkThread } from "@/lib/proposals/small-part-checks";
 import type { Measurement, NewStandardInput, ProposalCheck } from "@/lib/proposals/kinds";
 
 export interface StandardDims {
@@ -95,6 +96,10 @@ export function checkStandard(input: NewStandardInput): CheckedStandard {
   if (input.kind === "packing") return checkPacking(designation, entered);
   if (input.kind === "plug") return checkPlug(designation, entered);
   if (input.kind === "gasket") return checkGasket(designation, entered, input.template);
+  if (input.kind === "key") return checkKey(designation, entered);
+  if (input.kind === "pin") return checkPin(designation, entered);
+  if (input.kind === "thread" || input.kind === "grease_fitting") return checkThread(input.kind, designation, entered);
+  if (input.kind === "chain") return checkChain(designation, entered);
   return { kind: input.kind, designation, ...entered, attributes: {}, checks: [] };
 }
 

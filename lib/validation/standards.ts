@@ -186,3 +186,62 @@ export function readGasketQuery(query: unknown): GasketTemplate {
     throw error;
   }
 }
+
+const count = (what: string) =>
+  z
+    .string({ error: `Enter the ${what}.` })
+    .trim()
+    .regex(/^\d{1,3}$/, `The ${what} is a whole number.`)
+    .transform(Number);
+
+export const woodruffQuery = z.object({ number: designation });
+export const woodruffMatchQuery = z.object({
+  width: size("key's width"),
+  diameter: size("key's diameter"),
+  height: optionalSize("key's height"),
+  unit,
+});
+export const parallelKeyQuery = z.object({ shaft: size("shaft diameter"), unit });
+export const taperPinQuery = z.object({ number: designation, length: optionalSize("pin's length"), unit });
+export const taperPinMatchQuery = z.object({
+  largeEnd: size("large end's diameter"),
+  length: optionalSize("pin's length"),
+  unit,
+});
+export const threadQuery = z
+  .object({
+    diameter: size("thread's outside diameter"),
+    tpi: z
+      .string()
+      .trim()
+      .regex(/^\d+(\.\d+)?$/, "Threads per inch is a number, like 20 or 11.5.")
+      .transform(Number)
+      .optional()
+      .or(z.literal("").transform(() => undefined)),
+    pitch: optionalSize("pitch"),
+    unit,
+  })
+  .refine((q) => (q.tpi === undefined) !== (q.pitch === undefined), {
+    message: "Give the threads per inch or the pitch, not both.",
+    path: ["tpi"],
+  });
+export const chainDecodeQuery = z.object({ number: designation });
+export const chainIdentifyQuery = z.object({
+  pitch: size("pitch"),
+  roller: size("roller diameter"),
+  width: optionalSize("width between the inner plates"),
+  unit,
+});
+export const chainLinksQuery = z
+  .object({
+    number: z.string().trim().max(40).optional(),
+    pitch: optionalSize("pitch"),
+    teeth1: count("small sprocket's teeth"),
+    teeth2: count("large sprocket's teeth"),
+    center: size("centre distance"),
+    unit,
+  })
+  .refine((q) => Boolean(q.number) !== (q.pitch !== undefined), {
+    message: "Give the chain's number or its pitch.",
+    path: ["number"],
+  });

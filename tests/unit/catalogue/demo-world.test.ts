@@ -3,6 +3,7 @@ import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { decodeBearing } from "@/lib/standards/bearings";
 import { decodeBelt } from "@/lib/standards/belts";
 import { checkStandard } from "@/lib/proposals/checks";
+import { PART_CATEGORIES } from "@/lib/catalogue/kinds";
 
 const demo = buildDemoCatalogue();
 
@@ -16,7 +17,7 @@ describe("the invented demo catalogue", () => {
 
   it("covers every category of part", () => {
     expect(new Set(demo.parts.map((p) => p.category))).toEqual(
-      new Set(["bearing", "lip_seal", "felt_seal", "v_belt", "key", "gasket", "plug", "other", "packing"]),
+      new Set(PART_CATEGORIES),
     );
   });
 
@@ -83,9 +84,9 @@ describe("the invented demo catalogue", () => {
   });
 });
 
-describe("the demo's felt, packing, plug and gasket parts", () => {
+describe("the demo's felt, packing, plug, gasket, key, pin, thread, grease fitting and chain parts", () => {
   it("are standard parts the engine reads back to the sizes they were recorded with", () => {
-    const kinds = ["felt", "packing", "plug", "gasket"] as const;
+    const kinds = ["felt", "packing", "plug", "gasket", "key", "pin", "thread", "grease_fitting", "chain"] as const;
     for (const kind of kinds) {
       const parts = demo.standardParts.filter((s) => s.kind === kind);
       expect(parts.length, kind).toBeGreaterThan(0);
