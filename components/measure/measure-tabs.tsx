@@ -11,6 +11,10 @@ const TABS = [
   { href: "/measure/packing", label: "Packing" },
   { href: "/measure/plug", label: "Plug" },
   { href: "/measure/gasket", label: "Gasket" },
+  { href: "/measure/key", label: "Key" },
+  { href: "/measure/pin", label: "Pin" },
+  { href: "/measure/thread", label: "Thread" },
+  { href: "/measure/chain", label: "Chain" },
 ];
 
 export function MeasureTabs() {

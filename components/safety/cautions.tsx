@@ -56,6 +56,14 @@ const TEXT: Record<CautionKind, { title: string; points: string[] }> = {
       "Wear safety glasses when pressing out or peening chain pins: a pin or a clip can fly.",
     ],
   },
+  grease: {
+    title: "Grease guns",
+    points: [
+      "A grease gun makes enough pressure to force grease through skin: never hold a fitting, a nozzle or a hose " +
+        "end in your fingers while pumping. An injection wound needs a hospital at once, even if it looks small.",
+      "Wipe the fitting clean before you grease it, so dirt is not pumped into the bearing.",
+    ],
+  },
   gaskets: {
     title: "Old gaskets",
     points: [

@@ -50,7 +50,8 @@ export const MACHINE_KINDS = ["tractor", "crawler", "engine"] as const;
 export type MachineKind = (typeof MACHINE_KINDS)[number];
 
 /** The kinds of work that carry a caution on screen. */
-export type CautionKind = "bearings" | "belts" | "coolant" | "seals" | "drivers" | "glands" | "gaskets" | "chains";
+export type CautionKind =
+  "bearings" | "belts" | "coolant" | "seals" | "drivers" | "glands" | "gaskets" | "chains" | "grease";
 
 /** The caution each kind of part's work carries, on its part page and on a job list that holds it. */
 export const CAUTION_FOR_CATEGORY: Partial<Record<PartCategory, CautionKind>> = {
@@ -64,6 +65,7 @@ export const CAUTION_FOR_CATEGORY: Partial<Record<PartCategory, CautionKind>> = 
   key: "drivers",
   pin: "drivers",
   chain: "chains",
+  grease_fitting: "grease",
 };
 
 export const CATEGORY_NAMES: Record<PartCategory, string> = {

@@ -7,6 +7,10 @@ import type { SizedPart } from "@/lib/catalogue/find-by-size";
 import type { FeltSize } from "@/lib/standards/felts";
 import type { PackingSize } from "@/lib/standards/packing";
 import type { PlugMatch } from "@/lib/standards/plugs";
+import type { Chain, ChainCandidate, ChainLinks } from "@/lib/standards/chain";
+import type { ParallelKeys, WoodruffCandidate, WoodruffKey } from "@/lib/standards/keys";
+import type { TaperPin, TaperPinCandidate } from "@/lib/standards/pins";
+import type { GREASE_FITTINGS, ThreadCandidate } from "@/lib/standards/threads";
 
 type Params = Record<string, string | boolean | undefined>;
 
@@ -40,3 +44,30 @@ export const usePackingSize = (params: Params) =>
 
 export const usePlugMatch = (params: Params) =>
   useApi<PlugMatch & { catalogueParts: SizedPart[] }>(apiUrl("/api/plugs/match", params, ["bore"]));
+
+export const useWoodruffDecode = (number: string) =>
+  useApi<WoodruffKey>(apiUrl("/api/keys/woodruff", { number }, ["number"]));
+
+export const useWoodruffMatch = (params: Params) =>
+  useApi<{ candidates: WoodruffCandidate[] }>(apiUrl("/api/keys/woodruff/match", params, ["width", "diameter"]));
+
+export const useParallelKey = (params: Params) => useApi<ParallelKeys>(apiUrl("/api/keys/parallel", params, ["shaft"]));
+
+export const useTaperPin = (params: Params) =>
+  useApi<TaperPin & { notes: string[] }>(apiUrl("/api/pins/taper", params, ["number"]));
+
+export const useTaperPinMatch = (params: Params) =>
+  useApi<{ candidates: TaperPinCandidate[]; notes: string[] }>(apiUrl("/api/pins/taper/match", params, ["largeEnd"]));
+
+export const useThreadIdentify = (params: Params, required: string[]) =>
+  useApi<{ candidates: ThreadCandidate[]; greaseFittings: typeof GREASE_FITTINGS }>(
+    apiUrl("/api/threads/identify", params, required),
+  );
+
+export const useChainDecode = (number: string) => useApi<Chain>(apiUrl("/api/chain/decode", { number }, ["number"]));
+
+export const useChainIdentify = (params: Params) =>
+  useApi<{ candidates: ChainCandidate[] }>(apiUrl("/api/chain/identify", params, ["pitch", "roller"]));
+
+export const useChainLinks = (params: Params) =>
+  useApi<ChainLinks>(apiUrl("/api/chain/links", params, ["number", "teeth1", "teeth2", "center"]));

@@ -108,7 +108,8 @@ export function checkChain(designation: string, entered: StandardDims): CheckedS
       {
         level: "ok",
         field,
-        message: `${chain.label}: roller ${mm(chain.rollerDiameter)} mm, ${mm(chain.innerWidth)} mm between the plates.`,
+        message:
+          `${chain.label}: roller ${mm(chain.rollerDiameter)} mm, ` + `${mm(chain.innerWidth)} mm between the plates.`,
       },
     ],
   };
