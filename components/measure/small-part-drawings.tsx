@@ -69,7 +69,7 @@ export function ThreadDrawing({ active }: { active: ThreadDimension }) {
       <DimensionLine x1={104} y1={60} x2={128} y2={60} label="" active={active === "pitch"} />
       <Label x={116} y={50} text="pitch" active={active === "pitch"} anchor="middle" />
       <text x={80} y={180} fontSize={13} fill="#4a4f57">
-        a thread gauge reads the pitch, or threads per inch
+        gauge: pitch, or threads per inch
       </text>
     </svg>
   );

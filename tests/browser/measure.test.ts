@@ -121,4 +121,34 @@ describe("measuring a part", () => {
     await page.getByText("differ by only 0.1 mm").waitFor();
     await page.getByText("Drivers, punches and hammers").waitFor();
   });
+
+  it("identifies a thread, a Woodruff key, a taper pin and a chain from the small-parts tabs", async () => {
+    const page = currentPage();
+    await page.goto(`${APP_URL}/measure/thread`);
+    await page.getByText("inch", { exact: true }).click();
+    await field("Diameter over the crests").fill("0.247");
+    await field("Threads per inch").fill("28");
+    await page.getByTestId("order-label").getByText("1/4-28 UNF").waitFor();
+    await page.getByText("look alike").first().waitFor();
+    await page.getByText("Grease guns").waitFor();
+
+    await page.getByRole("link", { name: "Key", exact: true }).click();
+    await page.waitForURL(/\/measure\/key$/);
+    await field("Key number").fill("606");
+    await page.getByTestId("order-label").getByText("Woodruff key No. 606 (3/16 × 3/4 in)").first().waitFor();
+
+    await page.getByRole("link", { name: "Pin", exact: true }).click();
+    await page.waitForURL(/\/measure\/pin$/);
+    await field("Large end").fill("0.249");
+    await page.getByTestId("order-label").getByText("Taper pin No. 4").waitFor();
+
+    await page.getByRole("link", { name: "Chain", exact: true }).click();
+    await page.waitForURL(/\/measure\/chain$/);
+    await field("Chain number").fill("40");
+    await field("Small sprocket's teeth").fill("15");
+    await field("Large sprocket's teeth").fill("30");
+    await field("Centre distance").fill("20");
+    await page.getByTestId("order-label").getByText("104 links").waitFor();
+    await page.getByText("Chains and sprockets").waitFor();
+  });
 });

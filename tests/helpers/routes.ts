@@ -97,6 +97,22 @@ export const ROUTES: Record<string, Endpoint[]> = {
   "felts/size": [{ method: "get", path: () => "/api/felts/size?shaft=30&bore=40&width=5", door: "public" }],
   "packing/size": [{ method: "get", path: () => "/api/packing/size?shaft=20&bore=32", door: "public" }],
   "plugs/match": [{ method: "get", path: () => "/api/plugs/match?bore=38", door: "public" }],
+  "keys/woodruff": [{ method: "get", path: () => "/api/keys/woodruff?number=606", door: "public" }],
+  "keys/woodruff/match": [
+    { method: "get", path: () => "/api/keys/woodruff/match?width=0.19&diameter=0.75&unit=in", door: "public" },
+  ],
+  "keys/parallel": [{ method: "get", path: () => "/api/keys/parallel?shaft=25", door: "public" }],
+  "pins/taper": [{ method: "get", path: () => "/api/pins/taper?number=4", door: "public" }],
+  "pins/taper/match": [{ method: "get", path: () => "/api/pins/taper/match?largeEnd=0.25&unit=in", door: "public" }],
+  "threads/identify": [{ method: "get", path: () => "/api/threads/identify?diameter=6&pitch=1", door: "public" }],
+  "threads/grease-fittings": [{ method: "get", path: () => "/api/threads/grease-fittings", door: "public" }],
+  "chain/decode": [{ method: "get", path: () => "/api/chain/decode?number=40", door: "public" }],
+  "chain/identify": [
+    { method: "get", path: () => "/api/chain/identify?pitch=0.5&roller=0.31&unit=in", door: "public" },
+  ],
+  "chain/links": [
+    { method: "get", path: () => "/api/chain/links?number=40&teeth1=15&teeth2=30&center=20&unit=in", door: "public" },
+  ],
   "gaskets/template.svg": [
     { method: "get", path: () => "/api/gaskets/template.svg?outline=circle&od=100", door: "public" },
   ],

@@ -16,9 +16,7 @@ describe("the invented demo catalogue", () => {
   });
 
   it("covers every category of part", () => {
-    expect(new Set(demo.parts.map((p) => p.category))).toEqual(
-      new Set(PART_CATEGORIES),
-    );
+    expect(new Set(demo.parts.map((p) => p.category))).toEqual(new Set(PART_CATEGORIES));
   });
 
   it("has supersession chains up to four numbers long, and parts shared between machines", () => {
