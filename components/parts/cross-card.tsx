@@ -4,19 +4,24 @@ import { TemplateLinks } from "@/components/measure/template-links";
 import type { CrossView } from "@/lib/catalogue/get-part";
 
 /** What each size is called for a kind of standard part: a packing's width is its section, a gasket's its extent. */
-const SIZE_NAMES: Partial<Record<string, [string, string, string]>> = {
-  packing: ["inner", "outer", "section"],
-  plug: ["inner", "bore", "width"],
-  gasket: ["inner", "overall", "across"],
+const SIZE_NAMES: Partial<Record<string, [string, string, string, string]>> = {
+  packing: ["inner", "outer", "section", "length"],
+  plug: ["inner", "bore", "width", "length"],
+  gasket: ["inner", "overall", "across", "length"],
+  key: ["height", "diameter", "width", "length"],
+  pin: ["small end", "large end", "width", "length"],
+  thread: ["inner", "major diameter", "width", "length"],
+  grease_fitting: ["inner", "thread", "width", "length"],
+  chain: ["inner", "roller", "inner width", "length"],
 };
 
 const sizes = (s: NonNullable<CrossView["standard"]>) => {
-  const [inner, outer, width] = SIZE_NAMES[s.kind] ?? ["inner", "outer", "width"];
+  const [inner, outer, width, length] = SIZE_NAMES[s.kind] ?? ["inner", "outer", "width", "pitch length"];
   return [
     s.innerMm !== null && [inner, s.innerMm],
     s.outerMm !== null && [outer, s.outerMm],
     s.widthMm !== null && [width, s.widthMm],
-    s.lengthMm !== null && ["pitch length", s.lengthMm],
+    s.lengthMm !== null && [length, s.lengthMm],
   ].filter(Boolean) as Array<[string, number]>;
 };
 

@@ -10,7 +10,7 @@ import {
   WOODRUFF_HEIGHTS,
   WOODRUFF_NUMBERS,
 } from "@/lib/standards/keys";
-import { decodeTaperPin, matchTaperPin, TAPER_PINS_INCH } from "@/lib/standards/pins";
+import { decodeTaperPin, matchTaperPin, TAPER_PINS_INCH, TAPER_PINS_METRIC } from "@/lib/standards/pins";
 import { StandardsInputError } from "@/lib/standards/errors";
 
 const IN = 25.4; // NIST SP 811: 1 in = 25.4 mm exactly
@@ -141,7 +141,10 @@ describe("taper pins", () => {
       const [best] = matchTaperPin({ largeEndMm: large * IN - 0.02, unit: "in" });
       expect(best?.number, n).toBe(`No. ${n}`);
     }
-    const metric = matchTaperPin({ largeEndMm: 8.78, lengthMm: 40, unit: "mm" });
-    expect(metric[0]).toMatchObject({ number: "ISO 2339 8", system: "metric" });
+    // Each ISO 2339 pin, 40 mm long, read at its large end a little small (d + 40/50 − 0.02), finds itself first.
+    for (const d of TAPER_PINS_METRIC.filter((x) => x >= 2)) {
+      const [best] = matchTaperPin({ largeEndMm: d + 0.8 - 0.02, lengthMm: 40, unit: "mm" });
+      expect(best?.number, `${d}`).toBe(`ISO 2339 ${d}`);
+    }
   });
 });
