@@ -18,7 +18,6 @@ export async function addEnumValues(qi: QueryInterface, added: EnumValues[]): Pr
  * one of them.
  */
 export async function removeEnumValues(qi: QueryInterface, added: EnumValues[]): Promise<void> {
-
   await qi.sequelize.transaction(async (transaction) => {
     for (const { type, table, column, values } of added) {
       const [used] = await qi.sequelize.query(
