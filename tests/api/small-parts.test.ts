@@ -1,9 +1,10 @@
 import { randomUUID } from "node:crypto";
 import Papa from "papaparse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Maker, sequelize } from "@/db";
+import { sequelize } from "@/db";
 import { send, signIn } from "../helpers/api";
 import { settled, upload } from "../helpers/imports";
+import { proposeNewStandard } from "../helpers/proposals";
 
 afterAll(() => sequelize.close());
 
@@ -117,7 +118,6 @@ describe("bad input", () => {
 
 describe("in the catalogue", () => {
   it("proposes each kind by its designation, read by the engine", async () => {
-    const maker = (await Maker.findOne({ order: [["id", "ASC"]] }))!;
     for (const [kind, category, designation, expected] of [
       ["key", "key", "Woodruff key No. 606 (3/16 × 3/4 in)", { widthMm: 4.763, outerMm: 19.05 }],
       ["pin", "pin", "Taper pin No. 4", { outerMm: 6.35 }],
@@ -125,19 +125,7 @@ describe("in the catalogue", () => {
       ["grease_fitting", "grease_fitting", "Grease fitting 1/4-28 taper, 90°", { outerMm: 6.35 }],
       ["chain", "chain", "Roller chain ANSI 40-1", { outerMm: 7.925, widthMm: 7.925 }],
     ] as const) {
-      const number = `TST-${kind.slice(0, 3).toUpperCase()}-${randomUUID().slice(0, 6)}`;
-      const created = await send(
-        "post",
-        "/api/proposals",
-        {
-          original: { mode: "new", makerId: maker.id, number, description: "Test part", category },
-          standard: { mode: "new", kind, designation },
-          fit: "direct",
-          measurements: [],
-          notes: "",
-        },
-        { cookie: member },
-      );
+      const { response: created } = await proposeNewStandard(member, { category, kind, designation });
       expect(created.status, kind).toBe(201);
       expect(created.body.checks[0].level, kind).toBe("ok");
       const view = await send("get", `/api/proposals/${created.body.proposal.id}`, undefined, { cookie: moderator });

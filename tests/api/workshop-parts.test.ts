@@ -2,9 +2,10 @@ import { randomUUID } from "node:crypto";
 import Papa from "papaparse";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { Maker, OriginalPart, sequelize, StandardPart } from "@/db";
+import { OriginalPart, sequelize, StandardPart } from "@/db";
 import { APP_URL, send, signIn } from "../helpers/api";
 import { settled, upload } from "../helpers/imports";
+import { proposeNewStandard } from "../helpers/proposals";
 
 afterAll(() => sequelize.close());
 
@@ -87,26 +88,13 @@ describe("the workshop calculators' API", () => {
 
 describe("felt, packing, plugs and gaskets through the catalogue", () => {
   it("takes a gasket proposal with its template, and shows the template on the part once approved", async () => {
-    const maker = (await Maker.findOne({ order: [["id", "ASC"]] }))!;
-    const number = `TST-G-${randomUUID().slice(0, 6).toUpperCase()}`;
-    const created = await send(
-      "post",
-      "/api/proposals",
-      {
-        original: {
-          mode: "new",
-          makerId: maker.id,
-          number,
-          description: "Governor housing gasket",
-          category: "gasket",
-        },
-        standard: { mode: "new", kind: "gasket", designation: "", template: `${APP_URL}/measure/gasket?${ROUND}` },
-        fit: "direct",
-        measurements: [],
-        notes: "Cut from the printed template; bolts lined up with the holes.",
-      },
-      { cookie: member },
-    );
+    const { number, response: created } = await proposeNewStandard(member, {
+      category: "gasket",
+      kind: "gasket",
+      designation: "",
+      template: `${APP_URL}/measure/gasket?${ROUND}`,
+      description: "Governor housing gasket",
+    });
     expect(created.status).toBe(201);
     expect(created.body.checks[0]).toMatchObject({ level: "ok", field: "standard.template" });
     const id = created.body.proposal.id;
@@ -124,26 +112,13 @@ describe("felt, packing, plugs and gaskets through the catalogue", () => {
   });
 
   it("proposes felt, packing and plugs by designation, read by the engine", async () => {
-    const maker = (await Maker.findOne({ order: [["id", "ASC"]] }))!;
     for (const [kind, designation, expected] of [
       ["felt", "Felt ring 32 × 44 × 6 mm", { innerMm: 32, outerMm: 44, widthMm: 6 }],
       ["packing", "Gland packing 1/4 in square", { widthMm: 6.35 }],
       ["plug", "Cup plug 1-1/2 in", { outerMm: 38.1 }],
     ] as const) {
-      const number = `TST-${kind.toUpperCase()}-${randomUUID().slice(0, 6).toUpperCase()}`;
       const category = kind === "felt" ? "felt_seal" : kind;
-      const created = await send(
-        "post",
-        "/api/proposals",
-        {
-          original: { mode: "new", makerId: maker.id, number, description: "Test part", category },
-          standard: { mode: "new", kind, designation },
-          fit: "direct",
-          measurements: [],
-          notes: "",
-        },
-        { cookie: member },
-      );
+      const { response: created } = await proposeNewStandard(member, { category, kind, designation });
       expect(created.status, kind).toBe(201);
       expect(created.body.checks[0].level, kind).toBe("ok");
       const id = created.body.proposal.id;

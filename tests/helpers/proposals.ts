@@ -1,3 +1,4 @@
+import { randomUUID } from "node:crypto";
 import type { Page } from "playwright-core";
 import { Maker, StandardPart } from "@/db";
 import { send } from "./api";
@@ -58,4 +59,35 @@ export async function proposeWithPhoto(cookie: string, number: string, jpeg: Buf
   );
   if (sent.status !== 201) throw new Error(`The proposal was not taken: ${sent.status} ${JSON.stringify(sent.body)}`);
   return sent.body.proposal.id as number;
+}
+
+/**
+ * A member's proposal of a new part (number made unique) crossed to a new standard part entered by its designation,
+ * as the proposal form sends it; answers the API's response.
+ */
+export async function proposeNewStandard(
+  cookie: string,
+  input: { category: string; kind: string; designation: string; template?: string; description?: string },
+) {
+  const maker = await Maker.findOne({ order: [["id", "ASC"]] });
+  const number = `TST-${input.kind.slice(0, 3).toUpperCase()}-${randomUUID().slice(0, 6).toUpperCase()}`;
+  const response = await send(
+    "post",
+    "/api/proposals",
+    {
+      original: {
+        mode: "new",
+        makerId: maker!.id,
+        number,
+        description: input.description ?? "Test part",
+        category: input.category,
+      },
+      standard: { mode: "new", kind: input.kind, designation: input.designation, template: input.template },
+      fit: "direct",
+      measurements: [],
+      notes: "",
+    },
+    { cookie },
+  );
+  return { number, response };
 }
