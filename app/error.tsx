@@ -8,7 +8,7 @@ export default function ErrorPage({ reset }: { error: Error & { digest?: string 
       <button
         type="button"
         onClick={reset}
-        className="min-h-12 rounded-md bg-brass px-5 font-bold text-white hover:bg-brass-deep"
+        className="min-h-12 rounded-md bg-ink px-5 font-bold text-ground hover:bg-ink-soft"
       >
         Try again
       </button>

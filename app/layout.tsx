@@ -15,7 +15,7 @@ export const metadata: Metadata = {
     "stationary engine.",
 };
 
-export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#23262b" };
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f6f2ea" };
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (

@@ -19,7 +19,7 @@ const jobs: Array<{ title: string; text: string; href?: string; action?: string 
       "standard sizes it is likely to be, with the inch-and-metric near " +
       "misses spelled out.",
     href: "/measure/bearing",
-    action: "Measure a bearing, seal or belt",
+    action: "Measure a bearing, seal, belt, key, thread…",
   },
   {
     title: "Share what you fitted",

@@ -27,8 +27,8 @@ export default async function ProposalsPage() {
         <Link
           href="/propose"
           className={
-            "inline-flex min-h-12 items-center rounded-md bg-brass px-5 font-bold " +
-            "text-white no-underline hover:bg-brass-deep"
+            "inline-flex min-h-12 items-center rounded-md bg-ink px-5 font-bold " +
+            "text-ground no-underline hover:bg-ink-soft"
           }
         >
           Propose a cross

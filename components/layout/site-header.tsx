@@ -1,62 +1,111 @@
 import Link from "next/link";
-import { AREAS } from "@/components/layout/areas";
+import { AREAS, type Area } from "@/components/layout/areas";
 import { LogoMark } from "@/components/layout/logo-mark";
 import { UserMenu } from "@/components/layout/user-menu";
 import { getCurrentSession } from "@/lib/auth/session";
 import { hasPermission } from "@/lib/auth/roles";
 
+const linkClass =
+  "flex min-h-11 items-center rounded-md px-3 whitespace-nowrap text-ink no-underline hover:bg-ground-sunk";
+const joinClass = [
+  "flex min-h-11 items-center rounded-md bg-ink px-4",
+  "font-bold text-ground no-underline hover:bg-ink-soft",
+].join(" ");
+const menuClass =
+  "flex min-h-11 min-w-11 cursor-pointer list-none items-center justify-center gap-1 rounded-md border-2 " +
+  "border-ink/70 px-3 font-bold";
+const panelClass = "absolute inset-x-0 top-full z-30 border-b border-rule-strong bg-ground-raised px-3 py-2 shadow-lg";
+
+function AreaLink({ area }: { area: Area }) {
+  return area.ready ? (
+    <Link href={area.href} className={linkClass}>
+      {area.label}
+    </Link>
+  ) : (
+    <span
+      className="flex min-h-11 items-center px-3 whitespace-nowrap text-ink-faint"
+      title="Coming in a later release"
+    >
+      {area.label} <span className="ml-1 rounded border border-rule px-1 text-[0.7rem] uppercase">soon</span>
+    </span>
+  );
+}
+
+/**
+ * The header: on paper, in graphite, one compact row. On a phone it holds the name, a search button and a menu button
+ * that opens the areas (and sign-in); from a tablet up the areas sit in the row itself.
+ */
 export async function SiteHeader() {
   const { user } = await getCurrentSession();
   // Visitors see what members can do; staff areas appear only to the roles that hold them.
   const role = user?.role ?? "member";
   const areas = AREAS.filter((area) => !area.permission || hasPermission(role, area.permission));
+  const signIn = !user && (
+    <>
+      <Link href="/sign-in" className={linkClass}>
+        Sign in
+      </Link>
+      <Link href="/sign-up" className={joinClass}>
+        Join
+      </Link>
+    </>
+  );
 
   return (
-    <header className="no-print border-b border-ink/80 bg-ink text-ground">
-      <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
-        <Link href="/" className="flex items-center gap-2 text-ground no-underline">
-          <LogoMark className="h-8 w-8 text-brass-light" />
+    <header className="no-print relative border-b border-rule-strong bg-ground" data-testid="site-header">
+      <div className="mx-auto flex max-w-5xl items-center gap-2 px-3 py-1.5 sm:px-6 lg:gap-4">
+        <Link href="/" className="flex min-h-11 items-center gap-2 text-ink no-underline">
+          <LogoMark className="h-8 w-8 text-brass" />
           <span className="text-xl font-bold tracking-wide">Understudy</span>
         </Link>
-        <div className="ml-auto flex items-center gap-3">
+        <nav aria-label="Areas" className="hidden flex-wrap text-[0.95rem] lg:flex">
+          {areas.map((area) => (
+            <AreaLink key={area.href} area={area} />
+          ))}
+        </nav>
+        <div className="ml-auto flex items-center gap-1">
+          <Link href="/lookup" className={`${linkClass} lg:hidden`} aria-label="Look up a factory number">
+            <svg
+              viewBox="0 0 24 24"
+              className="h-6 w-6"
+              aria-hidden="true"
+              fill="none"
+              stroke="currentColor"
+              strokeWidth={2}
+            >
+              <circle cx="10.5" cy="10.5" r="6.5" />
+              <path d="M15.5 15.5 21 21" strokeLinecap="round" />
+            </svg>
+          </Link>
           {user ? (
             <UserMenu email={user.email} role={user.role} />
           ) : (
-            <>
-              <Link href="/sign-in" className="rounded-md px-3 py-2 text-ground no-underline hover:bg-white/10">
-                Sign in
-              </Link>
-              <Link
-                href="/sign-up"
-                className="rounded-md bg-brass-light px-3 py-2 font-bold text-ink no-underline hover:bg-brass-wash"
-              >
-                Join
-              </Link>
-            </>
+            <div className="hidden items-center gap-1 sm:flex">{signIn}</div>
           )}
+          <details className="group lg:hidden" data-testid="area-menu">
+            <summary className={menuClass} aria-label="Menu: the areas of Understudy">
+              <svg
+                viewBox="0 0 24 24"
+                className="h-5 w-5"
+                aria-hidden="true"
+                fill="none"
+                stroke="currentColor"
+                strokeWidth={2.4}
+              >
+                <path d="M4 7h16M4 12h16M4 17h16" strokeLinecap="round" />
+              </svg>
+              <span className="hidden sm:inline">Menu</span>
+            </summary>
+            <nav aria-label="Areas" className={panelClass}>
+              <div className="mx-auto grid max-w-5xl gap-1 sm:grid-cols-2">
+                {areas.map((area) => (
+                  <AreaLink key={area.href} area={area} />
+                ))}
+                {!user && <div className="flex items-center gap-2 pt-1 sm:hidden">{signIn}</div>}
+              </div>
+            </nav>
+          </details>
         </div>
-        <nav aria-label="Areas" className="-mx-1 flex w-full flex-wrap gap-x-1 pb-1 text-[0.95rem]">
-          {areas.map((area) =>
-            area.ready ? (
-              <Link
-                key={area.href}
-                href={area.href}
-                className="rounded-md px-3 py-2 whitespace-nowrap text-ground no-underline hover:bg-white/10"
-              >
-                {area.label}
-              </Link>
-            ) : (
-              <span
-                key={area.href}
-                className="rounded-md px-3 py-2 whitespace-nowrap text-ground/55"
-                title="This area opens in a coming release"
-              >
-                {area.label}{" "}
-                <span className="ml-1 rounded border border-ground/30 px-1 text-[0.7rem] uppercase">soon</span>
-              </span>
-            ),
-          )}
-        </nav>
       </div>
     </header>
   );

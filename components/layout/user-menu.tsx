@@ -7,14 +7,14 @@ const roleNames: Record<Role, string> = { member: "Member", moderator: "Moderato
 export function UserMenu({ email, role }: { email: string; role: Role }) {
   return (
     <details className="group relative" data-testid="user-menu">
-      <summary className="flex cursor-pointer list-none items-center gap-2 rounded-md px-3 py-2 hover:bg-white/10">
+      <summary className="flex min-h-11 cursor-pointer list-none items-center gap-2 rounded-md px-2 hover:bg-ground-sunk">
         <span
-          className="flex h-8 w-8 items-center justify-center rounded-full bg-brass-light font-bold text-ink"
+          className="flex h-8 w-8 items-center justify-center rounded-full bg-ink font-bold text-ground"
           aria-hidden="true"
         >
           {email.charAt(0).toUpperCase()}
         </span>
-        <span className="hidden max-w-[14rem] truncate sm:inline">{email}</span>
+        <span className="hidden max-w-[14rem] truncate xl:inline">{email}</span>
         <span className="sr-only">Account menu for {email}</span>
         <span aria-hidden="true" className="text-sm transition-transform group-open:rotate-180">
           ▾

@@ -5,7 +5,7 @@ export function PrintButton() {
     <button
       type="button"
       onClick={() => window.print()}
-      className="no-print inline-flex min-h-12 items-center rounded-md bg-brass px-5 font-bold text-white"
+      className="no-print inline-flex min-h-12 items-center rounded-md bg-ink px-5 font-bold text-ground hover:bg-ink-soft"
     >
       Print
     </button>

@@ -94,7 +94,7 @@ export function NumberSearch({
         />
         <button
           type="submit"
-          className="min-h-14 rounded-md bg-brass px-6 text-lg font-bold text-white hover:bg-brass-deep"
+          className="min-h-14 rounded-md bg-ink px-6 text-lg font-bold text-ground hover:bg-ink-soft"
         >
           Find the standard part
         </button>

@@ -3,7 +3,7 @@ import type { ButtonHTMLAttributes } from "react";
 type Variant = "primary" | "secondary";
 
 const styles: Record<Variant, string> = {
-  primary: "bg-brass text-white hover:bg-brass-deep disabled:bg-brass/60",
+  primary: "bg-ink text-ground hover:bg-ink-soft disabled:bg-ink/60",
   secondary: "border-2 border-ink/80 bg-transparent text-ink hover:bg-ground-sunk disabled:opacity-60",
 };
 

@@ -34,8 +34,8 @@ export default async function VerifyEmailPage({ searchParams }: { searchParams: 
           <Link
             href="/sign-in"
             className={
-              "inline-flex min-h-12 items-center rounded-md bg-brass px-5 font-bold " +
-              "text-white no-underline hover:bg-brass-deep"
+              "inline-flex min-h-12 items-center rounded-md bg-ink px-5 font-bold " +
+              "text-ground no-underline hover:bg-ink-soft"
             }
           >
             Sign in now
