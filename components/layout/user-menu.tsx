@@ -4,10 +4,12 @@ import type { Role } from "@/lib/auth/roles";
 
 const roleNames: Record<Role, string> = { member: "Member", moderator: "Moderator", admin: "Admin" };
 
+const summaryClass = "flex min-h-11 cursor-pointer list-none items-center gap-2 rounded-md px-2 hover:bg-ground-sunk";
+
 export function UserMenu({ email, role }: { email: string; role: Role }) {
   return (
     <details className="group relative" data-testid="user-menu">
-      <summary className="flex min-h-11 cursor-pointer list-none items-center gap-2 rounded-md px-2 hover:bg-ground-sunk">
+      <summary className={summaryClass}>
         <span
           className="flex h-8 w-8 items-center justify-center rounded-full bg-ink font-bold text-ground"
           aria-hidden="true"
