@@ -8,6 +8,7 @@ import {
   useReactTable,
   type ColumnDef,
   type SortingState,
+  type Table,
 } from "@tanstack/react-table";
 import { useId, useState } from "react";
 
@@ -68,9 +69,11 @@ export function SortableTable<T>({
       <p className="text-sm text-ink-soft" role="status">
         {count(table.getRowModel().rows.length, rows.length)}
       </p>
-      <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
-        <table className="w-full text-left">
-          <thead className="bg-ground-sunk text-sm">
+      <NarrowSort table={table} />
+      {/* Below a laptop's width each row stacks into a card, each value under its column's name: nothing to scroll. */}
+      <div className="rounded-lg border border-rule bg-ground-raised lg:overflow-x-auto">
+        <table className="w-full text-left max-lg:block">
+          <thead className="bg-ground-sunk text-sm max-lg:hidden">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => {
@@ -103,19 +106,69 @@ export function SortableTable<T>({
               </tr>
             ))}
           </thead>
-          <tbody>
+          <tbody className="max-lg:block">
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-rule align-top" data-testid={rowTestId}>
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="p-3">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
+              <tr
+                key={row.id}
+                className={
+                  "border-t border-rule align-top max-lg:grid max-lg:grid-cols-2 max-lg:gap-x-3 max-lg:p-2 " +
+                  "max-lg:first:border-t-0"
+                }
+                data-testid={rowTestId}
+              >
+                {row.getVisibleCells().map((cell) => {
+                  const header = cell.column.columnDef.header;
+                  return (
+                    <td key={cell.id} className="p-3 max-lg:block max-lg:px-1 max-lg:py-1">
+                      {typeof header === "string" && header !== "" && (
+                        <span className="block text-xs font-bold tracking-wide text-ink-faint uppercase lg:hidden">
+                          {header}
+                        </span>
+                      )}
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  );
+                })}
               </tr>
             ))}
           </tbody>
         </table>
       </div>
+    </div>
+  );
+}
+
+/** On a narrow screen the column headers are hidden with the table's head: sorting is a choice above the cards. */
+function NarrowSort<T>({ table }: { table: Table<T> }) {
+  const id = useId();
+  const sortable = table.getAllLeafColumns().filter((c) => c.getCanSort() && typeof c.columnDef.header === "string");
+  if (sortable.length === 0) return null;
+  const [current] = table.getState().sorting;
+  const value = current ? `${current.id}:${current.desc ? "desc" : "asc"}` : "";
+  return (
+    <div className="flex flex-wrap items-center gap-2 lg:hidden">
+      <label htmlFor={id} className="font-bold">
+        Sort by
+      </label>
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => {
+          const [column, direction] = e.target.value.split(":");
+          table.setSorting(column ? [{ id: column, desc: direction === "desc" }] : []);
+        }}
+        className="min-h-11 rounded-md border-2 border-rule-strong bg-ground-raised px-2"
+      >
+        <option value="">As listed</option>
+        {sortable.flatMap((c) => [
+          <option key={`${c.id}:asc`} value={`${c.id}:asc`}>
+            {String(c.columnDef.header)}, A to Z
+          </option>,
+          <option key={`${c.id}:desc`} value={`${c.id}:desc`}>
+            {String(c.columnDef.header)}, Z to A
+          </option>,
+        ])}
+      </select>
     </div>
   );
 }
