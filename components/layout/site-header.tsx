@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { AREAS, type Area } from "@/components/layout/areas";
+import { ClosingDetails } from "@/components/layout/closing-details";
 import { LogoMark } from "@/components/layout/logo-mark";
 import { UserMenu } from "@/components/layout/user-menu";
 import { getCurrentSession } from "@/lib/auth/session";
@@ -82,7 +83,7 @@ export async function SiteHeader() {
           ) : (
             <div className="hidden items-center gap-1 sm:flex">{signIn}</div>
           )}
-          <details className="group lg:hidden" data-testid="area-menu">
+          <ClosingDetails className="group lg:hidden" testId="area-menu">
             <summary className={menuClass} aria-label="Menu: the areas of Understudy">
               <svg
                 viewBox="0 0 24 24"
@@ -104,7 +105,7 @@ export async function SiteHeader() {
                 {!user && <div className="flex items-center gap-2 pt-1 sm:hidden">{signIn}</div>}
               </div>
             </nav>
-          </details>
+          </ClosingDetails>
         </div>
       </div>
     </header>

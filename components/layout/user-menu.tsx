@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { ClosingDetails } from "@/components/layout/closing-details";
 import { signOutAction } from "@/app/actions";
 import type { Role } from "@/lib/auth/roles";
 
@@ -8,7 +9,7 @@ const summaryClass = "flex min-h-11 cursor-pointer list-none items-center gap-2 
 
 export function UserMenu({ email, role }: { email: string; role: Role }) {
   return (
-    <details className="group relative" data-testid="user-menu">
+    <ClosingDetails className="group relative" testId="user-menu">
       <summary className={summaryClass}>
         <span
           className="flex h-8 w-8 items-center justify-center rounded-full bg-ink font-bold text-ground"
@@ -50,6 +51,6 @@ export function UserMenu({ email, role }: { email: string; role: Role }) {
           </button>
         </form>
       </div>
-    </details>
+    </ClosingDetails>
   );
 }

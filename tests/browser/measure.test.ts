@@ -12,7 +12,8 @@ describe("measuring a part", () => {
   it("reads a bearing number and matches a measured bearing", async () => {
     const page = currentPage();
     await page.goto(`${APP_URL}/`);
-    await page.getByRole("link", { name: "Measure a part" }).first().click();
+    await page.getByLabel("Menu: the areas of Understudy").click();
+    await page.getByTestId("area-menu").getByRole("link", { name: "Measure a part" }).click();
     await field("Bearing number as stamped on its side").fill("6305-2Z");
     await page.getByTestId("bearing-decoded").getByText("62 mm").waitFor();
 
