@@ -1,26 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { EmailAddress } from "@/components/ui/email-address";
-import { auditActionWords, auditSubjectWords } from "@/lib/audit/actions";
+import { auditActionWords, auditChangeWords, auditSubjectWords } from "@/lib/audit/actions";
 import { listAudit, type AuditRow } from "@/lib/audit/record";
 import { requirePagePermission } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Audit log" };
-
-function changed(before: Record<string, unknown> | null, after: Record<string, unknown> | null): string {
-  if (!before)
-    return after
-      ? Object.entries(after)
-          .map(([k, v]) => `${k}: ${JSON.stringify(v)}`)
-          .slice(0, 4)
-          .join("; ")
-      : "";
-  if (!after) return "removed";
-  return Object.keys({ ...before, ...after })
-    .filter((k) => JSON.stringify(before[k]) !== JSON.stringify(after[k]))
-    .map((k) => `${k}: ${JSON.stringify(before[k])} → ${JSON.stringify(after[k])}`)
-    .join("; ");
-}
 
 /** The record an entry is about, linked where an admin can open it. */
 function Subject({ event }: { event: AuditRow }) {
@@ -41,13 +26,12 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       <header className="space-y-1">
         <h1 className="text-3xl">Audit log</h1>
         <p className="text-ink-soft">
-          Who changed what, newest first. Each entry keeps the record as it was before and after; the full records are
-          in GET /api/audit.
+          Who changed what, newest first. Each entry keeps the record as it was before and after the change.
         </p>
       </header>
-      <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
-        <table className="w-full text-left text-sm">
-          <thead className="bg-ground-sunk">
+      <div className="rounded-lg border border-rule bg-ground-raised">
+        <table className="w-full text-left text-sm max-lg:block">
+          <thead className="bg-ground-sunk max-lg:hidden">
             <tr>
               <th scope="col" className="p-3">
                 When (UTC)
@@ -66,19 +50,20 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               </th>
             </tr>
           </thead>
-          <tbody>
+          <tbody className="max-lg:block">
             {events.map((e) => (
-              <tr key={e.id} className="border-t border-rule align-top" data-testid="audit-row">
-                <td className="p-3 num whitespace-nowrap">{e.at.slice(0, 19).replace("T", " ")}</td>
-                <td className="p-3">{e.actor ? <EmailAddress address={e.actor} /> : "—"}</td>
-                <td className="p-3">
-                  <span className="font-bold">{auditActionWords(e.action)}</span>
-                  <span className="block num text-xs text-ink-soft">{e.action}</span>
+              <tr key={e.id} className="border-t border-rule align-top max-lg:block max-lg:p-2" data-testid="audit-row">
+                <td className="p-3 num whitespace-nowrap max-lg:block max-lg:py-1">
+                  {e.at.slice(0, 19).replace("T", " ")} UTC
                 </td>
-                <td className="p-3">
+                <td className="p-3 max-lg:inline max-lg:py-1">{e.actor ? <EmailAddress address={e.actor} /> : "—"}</td>
+                <td className="p-3 max-lg:inline max-lg:py-1">
+                  <span className="font-bold">{auditActionWords(e.action).toLowerCase()}</span>
+                </td>
+                <td className="p-3 max-lg:block max-lg:py-1">
                   <Subject event={e} />
                 </td>
-                <td className="min-w-64 p-3 num [overflow-wrap:anywhere]">{changed(e.before, e.after)}</td>
+                <td className="p-3 max-lg:block max-lg:py-1 lg:min-w-64">{auditChangeWords(e.before, e.after)}</td>
               </tr>
             ))}
           </tbody>

@@ -17,10 +17,12 @@ const TABS = [
   { href: "/measure/chain", label: "Chain" },
 ];
 
+const TAB = "flex min-h-11 items-center rounded-md border-2 px-3 text-base font-bold no-underline sm:px-4 sm:text-lg";
+
 export function MeasureTabs() {
   const pathname = usePathname();
   return (
-    <nav aria-label="Kind of part" className="flex flex-wrap gap-2">
+    <nav aria-label="Kind of part" className="flex flex-wrap gap-1.5 sm:gap-2">
       {TABS.map((tab) => {
         const current = pathname === tab.href;
         return (
@@ -28,7 +30,7 @@ export function MeasureTabs() {
             key={tab.href}
             href={tab.href}
             aria-current={current ? "page" : undefined}
-            className={`min-h-12 rounded-md border-2 px-4 py-2 text-lg font-bold no-underline ${
+            className={`${TAB} ${
               current ? "border-ink bg-ink text-ground" : "border-ink/70 bg-ground-raised text-ink hover:bg-ground-sunk"
             }`}
           >

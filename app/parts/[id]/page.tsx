@@ -62,7 +62,7 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
           </div>
         )}
         {part.chain.latest.id !== part.id && (
-          <Notice tone="caution">
+          <Notice>
             Superseded. The latest number is{" "}
             <Link href={`/parts/${part.chain.latest.id}`} className="num font-bold">
               {part.chain.latest.number}
