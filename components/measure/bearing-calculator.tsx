@@ -58,7 +58,10 @@ function DecodeCard({ decoded }: { decoded: DecodedBearing }) {
 
 export function BearingCalculator() {
   const [designation, setDesignation] = useState("");
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["bore", "od", "width", "tolerance"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(
+    ["bore", "od", "width", "tolerance"] as const,
+    "bearing",
+  );
   const [active, setActive] = useState<BearingDimension>(null);
   const settledDesignation = useDebounced(designation);
 

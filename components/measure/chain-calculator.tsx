@@ -28,7 +28,10 @@ export function ChainCalculator() {
   const [number, setNumber] = useState("");
   const settledNumber = useDebounced(number);
   const decoded = useChainDecode(settledNumber);
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["pitch", "roller", "width", "center"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(
+    ["pitch", "roller", "width", "center"] as const,
+    "chain",
+  );
   const [teeth, setTeeth] = useState({ teeth1: "", teeth2: "" });
   const settledTeeth = useDebounced(teeth);
   const [active, setActive] = useState<ChainDimension>(null);

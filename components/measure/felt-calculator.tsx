@@ -15,7 +15,7 @@ import { measuredValues, showLength } from "@/lib/standards/units";
 
 /** A felt seal's groove measured: the ring to cut, the strip to cut it from, and how to fit it. */
 export function FeltCalculator() {
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "width"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "width"] as const, "felt");
   const [active, setActive] = useState<FeltDimension>(null);
   const felt = useFeltSize({ ...settled, unit });
   const data = felt.data;

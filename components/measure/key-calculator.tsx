@@ -23,7 +23,10 @@ export function KeyCalculator() {
   const [number, setNumber] = useState("");
   const settledNumber = useDebounced(number);
   const decoded = useWoodruffDecode(settledNumber);
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["width", "diameter", "height", "shaft"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(
+    ["width", "diameter", "height", "shaft"] as const,
+    "key",
+  );
   const [active, setActive] = useState<KeyDimension>(null);
   const match = useWoodruffMatch({ width: settled.width, diameter: settled.diameter, height: settled.height, unit });
   const parallel = useParallelKey({ shaft: settled.shaft, unit });

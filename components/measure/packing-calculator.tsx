@@ -15,7 +15,7 @@ import { measuredValues, showLength } from "@/lib/standards/units";
 
 /** A stuffing box measured: the packing section to buy, the length of each ring and how many rings. */
 export function PackingCalculator() {
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "depth"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "depth"] as const, "packing");
   const [active, setActive] = useState<PackingDimension>(null);
   const packing = usePackingSize({ ...settled, unit });
   const data = packing.data;

@@ -27,7 +27,7 @@ function pinSizes(p: TaperPin): string[] {
 export function PinCalculator() {
   const [number, setNumber] = useState("");
   const settledNumber = useDebounced(number);
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["largeEnd", "length"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["largeEnd", "length"] as const, "pin");
   const [active, setActive] = useState<PinDimension>(null);
   const decoded = useTaperPin({ number: settledNumber, length: settled.length, unit });
   const match = useTaperPinMatch({ largeEnd: settled.largeEnd, length: settled.length, unit });

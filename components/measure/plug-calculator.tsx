@@ -16,7 +16,7 @@ import { measuredValues, showDeviation } from "@/lib/standards/units";
 
 /** A core or felt bore measured: the cup or disc plug to ask for, with the inch and metric near miss. */
 export function PlugCalculator() {
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["bore"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["bore"] as const, "plug");
   const [kind, setKind] = useState<"cup" | "disc">("cup");
   const [active, setActive] = useState(false);
   const plug = usePlugMatch({ bore: settled.bore, unit, kind });

@@ -29,7 +29,10 @@ interface SealMatch {
 const selectClass = "min-h-12 w-full rounded-md border-2 border-rule-strong bg-ground-raised px-3 text-lg";
 
 export function SealCalculator() {
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["shaft", "bore", "width", "sealOd"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(
+    ["shaft", "bore", "width", "sealOd"] as const,
+    "seal",
+  );
   const [grooved, setGrooved] = useState(false);
   const [spring, setSpring] = useState("1");
   const [dustLip, setDustLip] = useState(false);

@@ -20,7 +20,7 @@ const selectClass = "min-h-12 w-full rounded-md border-2 border-rule-strong bg-g
 
 /** A thread from calipers and a thread gauge: inch, British or metric, bolt, pipe or spark plug. */
 export function ThreadCalculator() {
-  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["diameter"] as const);
+  const { unit, changeUnit, sizes, set, settled } = useMeasuredSizes(["diameter"] as const, "thread");
   // The gauge reading is a count or a pitch, not a length: the unit switch leaves it as it is.
   const [count, setCount] = useState("");
   const settledCount = useDebounced(count);

@@ -1,21 +1,75 @@
 "use client";
 
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useDebounced } from "@/lib/hooks/use-api";
 import { useLengthUnit } from "@/lib/hooks/use-length-unit";
 import { convertTypedSizes, type LengthUnit } from "@/lib/standards/units";
 
+const storageKey = (calculator: string) => `understudy:sizes:${calculator}`;
+
+/** The sizes a link carries (`?shaft=1.497&bore=2.374&unit=in`), else the ones this browser last typed, else none. */
+function remembered<N extends string>(
+  calculator: string,
+  names: readonly N[],
+): Partial<Record<N, string>> & { unit?: LengthUnit } {
+  const query = new URLSearchParams(window.location.search);
+  const fromLink = Object.fromEntries(names.filter((n) => query.has(n)).map((n) => [n, query.get(n) ?? ""]));
+  const unit = query.get("unit");
+  if (Object.keys(fromLink).length > 0)
+    return { ...fromLink, ...(unit === "mm" || unit === "in" ? { unit } : {}) } as Partial<Record<N, string>>;
+  try {
+    const stored = JSON.parse(window.localStorage.getItem(storageKey(calculator)) ?? "{}") as Record<string, unknown>;
+    return Object.fromEntries(names.filter((n) => typeof stored[n] === "string").map((n) => [n, stored[n]])) as Partial<
+      Record<N, string>
+    >;
+  } catch {
+    return {};
+  }
+}
+
 /**
  * A calculator's measured sizes as typed, in the unit the calipers read: the unit switch converts what was typed, and
- * `settled` is what the calculator asks about once typing pauses.
+ * `settled` is what the calculator asks about once typing pauses. The sizes survive a reload (kept in this browser)
+ * and the address always carries them, so the page's link shares the measurement.
  */
-export function useMeasuredSizes<N extends string>(names: readonly N[]) {
+export function useMeasuredSizes<N extends string>(names: readonly N[], calculator?: string) {
   const [unit, setUnit] = useLengthUnit();
   const [sizes, setSizes] = useState(() => Object.fromEntries(names.map((n) => [n, ""])) as Record<N, string>);
+  const loaded = useRef(false);
+  // The names arrive as a fresh array each render; the effects follow their text.
+  const fields = useRef(names);
+  const namesKey = names.join(",");
   const changeUnit = (next: LengthUnit) => {
     setSizes((s) => convertTypedSizes(s, [...names], unit, next));
     setUnit(next);
   };
   const set = (name: N) => (value: string) => setSizes((s) => ({ ...s, [name]: value }));
-  return { unit, changeUnit, sizes, set, settled: useDebounced(sizes) };
+  const settled = useDebounced(sizes);
+
+  useEffect(() => {
+    if (!calculator || loaded.current) return;
+    loaded.current = true;
+    const { unit: linkUnit, ...restored } = remembered(calculator, fields.current);
+    if (linkUnit) setUnit(linkUnit);
+    if (Object.keys(restored).length > 0) setSizes((s) => ({ ...s, ...restored }));
+  }, [calculator, namesKey, setUnit]);
+
+  useEffect(() => {
+    if (!calculator || !loaded.current) return;
+    try {
+      window.localStorage.setItem(storageKey(calculator), JSON.stringify(settled));
+    } catch {
+      // Storage refused (a private window): the link below still carries the sizes.
+    }
+    const url = new URL(window.location.href);
+    for (const n of fields.current) {
+      if (settled[n]) url.searchParams.set(n, settled[n]);
+      else url.searchParams.delete(n);
+    }
+    if (fields.current.some((n) => settled[n])) url.searchParams.set("unit", unit);
+    else url.searchParams.delete("unit");
+    window.history.replaceState(window.history.state, "", url);
+  }, [calculator, namesKey, settled, unit]);
+
+  return { unit, changeUnit, sizes, set, settled };
 }
