@@ -3,6 +3,7 @@
 import type { ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { SortableTable } from "@/components/ui/sortable-table";
+import { Unbroken } from "@/components/ui/unbroken";
 import type { MachinePartRow } from "@/lib/catalogue/browse";
 import { CATEGORY_NAMES, FIT_NAMES } from "@/lib/catalogue/kinds";
 
@@ -30,7 +31,11 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
   {
     accessorKey: "serials",
     header: "Serials",
-    cell: ({ getValue }) => <span className="num text-sm whitespace-nowrap">{getValue<string | null>() ?? "all"}</span>,
+    cell: ({ getValue }) => (
+      <span className="num text-sm">
+        <Unbroken text={getValue<string | null>() ?? "all"} />
+      </span>
+    ),
   },
   {
     accessorKey: "category",
@@ -44,7 +49,9 @@ const columns: Array<ColumnDef<MachinePartRow>> = [
       <>
         <span className="num">{row.original.standard ?? "none approved yet"}</span>
         {row.original.viaNumber && (
-          <span className="block text-sm text-ink-soft">recorded on {row.original.viaNumber}</span>
+          <span className="block text-sm text-ink-soft">
+            <Unbroken text={`recorded on ${row.original.viaNumber}`} />
+          </span>
         )}
       </>
     ),
