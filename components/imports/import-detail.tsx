@@ -357,7 +357,7 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
             </p>
           )}
           <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
-            <table className="w-full text-left text-sm">
+            <table className="stack-table w-full text-left text-sm">
               <thead className="bg-ground-sunk">
                 <tr>
                   <th scope="col" className="p-2">
@@ -378,9 +378,15 @@ export function ImportDetail({ initial, isAdmin }: { initial: ImportView; isAdmi
                     className="border-t border-rule align-top"
                     data-testid="rejected-row"
                   >
-                    <td className="p-2 num">{r.line}</td>
-                    <td className="p-2">{r.column ?? "—"}</td>
-                    <td className="p-2">{r.reason}</td>
+                    <td className="p-2 num" data-label="Line">
+                      {r.line}
+                    </td>
+                    <td className="p-2" data-label="Column">
+                      {r.column ?? "—"}
+                    </td>
+                    <td className="col-span-2 p-2" data-label="Reason">
+                      {r.reason}
+                    </td>
                   </tr>
                 ))}
               </tbody>

@@ -36,7 +36,7 @@ export default async function ImportsPage({ searchParams }: { searchParams: Prom
           <Notice>No imports yet.</Notice>
         ) : (
           <div className="overflow-x-auto rounded-lg border border-rule bg-ground-raised">
-            <table className="w-full text-left">
+            <table className="stack-table w-full text-left">
               <thead className="bg-ground-sunk text-sm">
                 <tr>
                   <th scope="col" className="p-3">
@@ -61,15 +61,21 @@ export default async function ImportsPage({ searchParams }: { searchParams: Prom
                   const c = i.committedCounts ?? i.counts;
                   return (
                     <tr key={i.id} className="border-t border-rule align-top">
-                      <td className="p-3">
+                      <td className="p-3" data-label="File">
                         <Link href={`/admin/imports/${i.id}`} className="font-bold break-all">
                           {i.fileName}
                         </Link>
                       </td>
-                      <td className="p-3">{STATUS_WORDS[i.status]}</td>
-                      <td className="p-3">{TARGET_WORDS[i.target]}</td>
-                      <td className="p-3 num">{c ? `${c.rows} (${c.rejected} rejected)` : "—"}</td>
-                      <td className="p-3 text-sm">
+                      <td className="p-3" data-label="State">
+                        {STATUS_WORDS[i.status]}
+                      </td>
+                      <td className="p-3" data-label="Into">
+                        {TARGET_WORDS[i.target]}
+                      </td>
+                      <td className="p-3 num" data-label="Rows">
+                        {c ? `${c.rows} (${c.rejected} rejected)` : "—"}
+                      </td>
+                      <td className="p-3 text-sm" data-label="By, when (UTC)">
                         {i.by ?? "?"}
                         <span className="block num">{i.createdAt.slice(0, 16).replace("T", " ")}</span>
                       </td>
