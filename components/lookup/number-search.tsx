@@ -11,6 +11,8 @@ import { useLookup } from "@/lib/hooks/use-lookup";
  * full results page. Without scripts it is still a plain GET form to /lookup. What the page was opened with is not
  * asked for again: the server sent its results with the page.
  */
+const LIST_CLASS = "absolute inset-x-0 top-full z-30 mt-1 rounded-lg border-2 border-ink/80 bg-ground-raised shadow-xl";
+
 export function NumberSearch({
   defaultValue = "",
   autoFocus = false,
@@ -50,48 +52,96 @@ export function NumberSearch({
         Factory number from the old part or the parts book, or words
       </label>
       <div className="flex flex-col gap-2 sm:flex-row">
-        <input
-          id="q"
-          name="q"
-          type="search"
-          value={query}
-          autoFocus={autoFocus}
-          onChange={(e) => {
-            setQuery(e.target.value);
-            setTyped(true);
-            setOpen(true);
-            setActive(-1);
-          }}
-          onFocus={() => setOpen(true)}
-          onBlur={() => setTimeout(() => setOpen(false), 150)}
-          onKeyDown={(e) => {
-            if (e.key === "ArrowDown") {
-              e.preventDefault();
+        {/* The suggestions open right under the box, over the button and the hint: on a phone's screen. */}
+        <div className="relative flex flex-1">
+          <input
+            id="q"
+            name="q"
+            type="search"
+            value={query}
+            autoFocus={autoFocus}
+            onChange={(e) => {
+              setQuery(e.target.value);
+              setTyped(true);
               setOpen(true);
-              setActive((i) => Math.min(i + 1, results.length - 1));
-            } else if (e.key === "ArrowUp") {
-              e.preventDefault();
-              setActive((i) => Math.max(i - 1, -1));
-            } else if (e.key === "Escape") {
-              setOpen(false);
+              setActive(-1);
+            }}
+            onFocus={(e) => {
+              setOpen(true);
+              // On a phone the keyboard takes the lower half: bring the box to the top, the suggestions under it.
+              if (window.innerWidth < 640) e.currentTarget.scrollIntoView({ block: "start", behavior: "smooth" });
+            }}
+            onBlur={() => setTimeout(() => setOpen(false), 150)}
+            onKeyDown={(e) => {
+              if (e.key === "ArrowDown") {
+                e.preventDefault();
+                setOpen(true);
+                setActive((i) => Math.min(i + 1, results.length - 1));
+              } else if (e.key === "ArrowUp") {
+                e.preventDefault();
+                setActive((i) => Math.max(i - 1, -1));
+              } else if (e.key === "Escape") {
+                setOpen(false);
+              }
+            }}
+            required
+            maxLength={120}
+            autoComplete="off"
+            spellCheck={false}
+            placeholder="e.g. CV-3003-A"
+            role="combobox"
+            aria-expanded={showList}
+            aria-controls={listId}
+            aria-autocomplete="list"
+            aria-activedescendant={active >= 0 ? `${listId}-${active}` : undefined}
+            aria-describedby="q-hint"
+            className={
+              "min-h-14 w-full flex-1 rounded-md border-2 border-ink/70 bg-ground-raised " +
+              "px-4 num text-xl tracking-wide focus:border-brass"
             }
-          }}
-          required
-          maxLength={120}
-          autoComplete="off"
-          spellCheck={false}
-          placeholder="e.g. CV-3003-A"
-          role="combobox"
-          aria-expanded={showList}
-          aria-controls={listId}
-          aria-autocomplete="list"
-          aria-activedescendant={active >= 0 ? `${listId}-${active}` : undefined}
-          aria-describedby="q-hint"
-          className={
-            "min-h-14 flex-1 rounded-md border-2 border-ink/70 bg-ground-raised " +
-            "px-4 num text-xl tracking-wide focus:border-brass"
-          }
-        />
+          />
+          {showList && (
+            <div className={LIST_CLASS}>
+              <ul
+                id={listId}
+                role="listbox"
+                aria-label="Matching factory numbers"
+                className="max-h-[min(24rem,55vh)] overflow-y-auto"
+              >
+                {results.map((r, i) => (
+                  <li
+                    key={r.id}
+                    id={`${listId}-${i}`}
+                    role="option"
+                    aria-selected={i === active}
+                    onMouseDown={(e) => e.preventDefault()}
+                    onClick={() => go(r.id)}
+                    className={
+                      `cursor-pointer border-b border-rule px-4 py-3 last:border-b-0 ` +
+                      `${i === active ? "bg-brass-wash" : "hover:bg-ground-sunk"}`
+                    }
+                  >
+                    <span className="flex flex-wrap items-baseline gap-x-3">
+                      <span className="num text-lg font-bold">{r.number}</span>
+                      <MatchBadge matchedBy={r.matchedBy} why={r.why} />
+                    </span>
+                    <span className="block text-sm text-ink-soft">
+                      {r.maker} · {CATEGORY_NAMES[r.category]} · {r.description}
+                      {r.latestNumber !== r.number && <> · superseded by {r.latestNumber}</>}
+                    </span>
+                  </li>
+                ))}
+              </ul>
+              <p className="px-4 py-2 text-sm text-ink-soft" role="status">
+                {isLoading
+                  ? "Searching…"
+                  : results.length === 0 && settled
+                    ? `No factory number like “${settled}” yet. Try fewer characters, or measure the part.`
+                    : `${results.length} shown. Enter for all results.`}
+              </p>
+            </div>
+          )}
+        </div>
         <button
           type="submit"
           className="min-h-14 rounded-md bg-ink px-6 text-lg font-bold text-ground hover:bg-ink-soft"
@@ -127,42 +177,6 @@ export function NumberSearch({
         Type it as stamped: spaces, dashes and a worn character or two are fine. Part of a number, or words such as
         “water pump bearing model 22”, work too.
       </p>
-      {showList && (
-        <div className="absolute right-0 left-0 z-30 mt-1 rounded-lg border-2 border-ink/80 bg-ground-raised shadow-xl">
-          <ul id={listId} role="listbox" aria-label="Matching factory numbers" className="max-h-96 overflow-y-auto">
-            {results.map((r, i) => (
-              <li
-                key={r.id}
-                id={`${listId}-${i}`}
-                role="option"
-                aria-selected={i === active}
-                onMouseDown={(e) => e.preventDefault()}
-                onClick={() => go(r.id)}
-                className={
-                  `cursor-pointer border-b border-rule px-4 py-3 last:border-b-0 ` +
-                  `${i === active ? "bg-brass-wash" : "hover:bg-ground-sunk"}`
-                }
-              >
-                <span className="flex flex-wrap items-baseline gap-x-3">
-                  <span className="num text-lg font-bold">{r.number}</span>
-                  <MatchBadge matchedBy={r.matchedBy} why={r.why} />
-                </span>
-                <span className="block text-sm text-ink-soft">
-                  {r.maker} · {CATEGORY_NAMES[r.category]} · {r.description}
-                  {r.latestNumber !== r.number && <> · superseded by {r.latestNumber}</>}
-                </span>
-              </li>
-            ))}
-          </ul>
-          <p className="px-4 py-2 text-sm text-ink-soft" role="status">
-            {isLoading
-              ? "Searching…"
-              : results.length === 0 && settled
-                ? `No factory number like “${settled}” yet. Try fewer characters, or measure the part.`
-                : `${results.length} shown. Enter for all results.`}
-          </p>
-        </div>
-      )}
     </form>
   );
 }

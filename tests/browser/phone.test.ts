@@ -72,6 +72,17 @@ describe("on a phone and a tablet", () => {
     }
   });
 
+  it("opens the look-up suggestions within a phone's screen", async () => {
+    const page = currentPage();
+    await page.goto(`${APP_URL}/`);
+    await page.locator("input[type=search]").fill("CV-300");
+    const list = page.getByRole("listbox", { name: "Matching factory numbers" });
+    await list.waitFor();
+    await expect.poll(async () => (await list.boundingBox())!.y).toBeLessThan(844 / 2);
+    const first = await list.getByRole("option").first().boundingBox();
+    expect(first!.y + first!.height).toBeLessThanOrEqual(844);
+  });
+
   it("keeps a calculator's sizes over a reload, and shares them as a link", async () => {
     const page = currentPage();
     await page.goto(`${APP_URL}/measure/seal`);
