@@ -30,8 +30,8 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
         </p>
       </header>
       <div className="rounded-lg border border-rule bg-ground-raised">
-        <table className="w-full text-left text-sm max-lg:block">
-          <thead className="bg-ground-sunk max-lg:hidden">
+        <table className="stack-table w-full text-left text-sm">
+          <thead className="bg-ground-sunk">
             <tr>
               <th scope="col" className="p-3">
                 When (UTC)
@@ -50,20 +50,24 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               </th>
             </tr>
           </thead>
-          <tbody className="max-lg:block">
+          <tbody>
             {events.map((e) => (
-              <tr key={e.id} className="border-t border-rule align-top max-lg:block max-lg:p-2" data-testid="audit-row">
-                <td className="p-3 num whitespace-nowrap max-lg:block max-lg:py-1">
-                  {e.at.slice(0, 19).replace("T", " ")} UTC
+              <tr key={e.id} className="border-t border-rule align-top" data-testid="audit-row">
+                <td className="p-3 num" data-label="When (UTC)">
+                  {e.at.slice(0, 19).replace("T", " ")}
                 </td>
-                <td className="p-3 max-lg:inline max-lg:py-1">{e.actor ? <EmailAddress address={e.actor} /> : "—"}</td>
-                <td className="p-3 max-lg:inline max-lg:py-1">
+                <td className="p-3" data-label="Who">
+                  {e.actor ? <EmailAddress address={e.actor} /> : "—"}
+                </td>
+                <td className="p-3" data-label="What">
                   <span className="font-bold">{auditActionWords(e.action).toLowerCase()}</span>
                 </td>
-                <td className="p-3 max-lg:block max-lg:py-1">
+                <td className="p-3" data-label="Record">
                   <Subject event={e} />
                 </td>
-                <td className="p-3 max-lg:block max-lg:py-1 lg:min-w-64">{auditChangeWords(e.before, e.after)}</td>
+                <td className="col-span-2 p-3 lg:min-w-64" data-label="Changed">
+                  {auditChangeWords(e.before, e.after)}
+                </td>
               </tr>
             ))}
           </tbody>
