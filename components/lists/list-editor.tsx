@@ -14,6 +14,7 @@ import { AddByNumber, addedText, type Added } from "@/components/lists/add-by-nu
 import { useApiAction } from "@/lib/hooks/use-api-action";
 import { useList } from "@/lib/hooks/use-lists";
 import type { ListLine, ListView, NumberChoice, SerialChoice } from "@/lib/lists/lists";
+import { Unbroken } from "@/components/ui/unbroken";
 
 const WIDE = "(min-width: 768px)";
 const noSubscription = () => () => {};
@@ -268,7 +269,9 @@ export function ListEditor({ initial }: { initial: ListView }) {
               <FitBadge fit={l.chosen.fit} />
             )}
             {l.chosen.viaNumber && (
-              <span className="block text-sm text-ink-soft">recorded on {l.chosen.viaNumber}</span>
+              <span className="block text-sm text-ink-soft">
+                <Unbroken text={`recorded on ${l.chosen.viaNumber}`} />
+              </span>
             )}
           </div>
         );

@@ -5,6 +5,7 @@ import { FitBadge } from "@/components/parts/fit-badge";
 import { Notice } from "@/components/ui/notice";
 import type { LookupResult } from "@/lib/catalogue/find-parts";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
+import { Unbroken } from "@/components/ui/unbroken";
 
 const members = (n: number) =>
   n === 0 ? "not yet confirmed by a member" : `${n} ${n === 1 ? "member" : "members"} fitted it`;
@@ -26,7 +27,11 @@ function Best({ result }: { result: LookupResult }) {
       <span className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
         <FitBadge fit={result.best.fit} />
         <span>{members(result.best.confirmations)}</span>
-        {result.best.viaNumber && <span className="text-ink-soft">recorded on {result.best.viaNumber}</span>}
+        {result.best.viaNumber && (
+          <span className="text-ink-soft">
+            <Unbroken text={`recorded on ${result.best.viaNumber}`} />
+          </span>
+        )}
         {result.crossCount > 1 && <span className="text-ink-soft">{result.crossCount - 1} more on its page</span>}
       </span>
     </span>
@@ -83,7 +88,7 @@ export function LookupResults({
               }
             >
               <span className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
-                <span className="num text-2xl font-bold">{r.number}</span>
+                <span className="num text-2xl font-bold whitespace-nowrap">{r.number}</span>
                 <MatchBadge matchedBy={r.matchedBy} why={r.why} />
               </span>
               <span className="block text-ink-soft">
@@ -91,7 +96,7 @@ export function LookupResults({
               </span>
               {r.latestNumber !== r.number && (
                 <span className="mt-1 block text-sm">
-                  Superseded; latest number <span className="num font-bold">{r.latestNumber}</span>.
+                  Superseded; latest number <span className="num font-bold whitespace-nowrap">{r.latestNumber}</span>.
                 </span>
               )}
               <Best result={r} />

@@ -5,6 +5,7 @@ import { useId, useState } from "react";
 import { MatchBadge } from "@/components/lookup/match-badge";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
 import { useLookup } from "@/lib/hooks/use-lookup";
+import { Unbroken } from "@/components/ui/unbroken";
 
 /**
  * The search box: suggestions appear as people type (arrow keys to move, Enter to open), and submitting opens the
@@ -122,12 +123,17 @@ export function NumberSearch({
                     }
                   >
                     <span className="flex flex-wrap items-baseline gap-x-3">
-                      <span className="num text-lg font-bold">{r.number}</span>
+                      <span className="num text-lg font-bold whitespace-nowrap">{r.number}</span>
                       <MatchBadge matchedBy={r.matchedBy} why={r.why} />
                     </span>
                     <span className="block text-sm text-ink-soft">
                       {r.maker} · {CATEGORY_NAMES[r.category]} · {r.description}
-                      {r.latestNumber !== r.number && <> · superseded by {r.latestNumber}</>}
+                      {r.latestNumber !== r.number && (
+                        <>
+                          {" "}
+                          · <Unbroken text={`superseded by ${r.latestNumber}`} />
+                        </>
+                      )}
                     </span>
                   </li>
                 ))}

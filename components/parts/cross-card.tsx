@@ -44,8 +44,8 @@ export function CrossCard({ cross, signedIn = false }: { cross: CrossView; signe
       {cross.standard && <p className="num text-2xl font-bold">{cross.standard.designation}</p>}
       {cross.viaNumber && (
         <p className="text-sm text-ink-soft" data-testid="via">
-          Recorded on <span className="num font-bold">{cross.viaNumber}</span>, a number of the same chain that fits
-          here.
+          Recorded on <span className="num font-bold whitespace-nowrap">{cross.viaNumber}</span>, a number of the same
+          chain that fits here.
         </p>
       )}
       {cross.standard && sizes(cross.standard).length > 0 && (

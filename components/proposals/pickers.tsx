@@ -129,7 +129,7 @@ export function PartPicker({
                   onPick({ id: r.id, number: r.number, maker: r.maker, description: r.description, dims: r.sizes })
                 }
               >
-                <span className="num text-lg font-bold">{r.number}</span>
+                <span className="num text-lg font-bold whitespace-nowrap">{r.number}</span>
                 <span>{r.description}</span>
                 <span className="text-sm text-ink-soft">
                   {r.maker} · {CATEGORY_NAMES[r.category]}
