@@ -35,7 +35,8 @@ function remembered<N extends string>(
 export function useMeasuredSizes<N extends string>(names: readonly N[], calculator?: string) {
   const [unit, setUnit] = useLengthUnit();
   const [sizes, setSizes] = useState(() => Object.fromEntries(names.map((n) => [n, ""])) as Record<N, string>);
-  const loaded = useRef(false);
+  // Nothing is written back until what was remembered has been restored, or the restore would be overwritten.
+  const [restored, setRestored] = useState(false);
   // The names arrive as a fresh array each render; the effects follow their text.
   const fields = useRef(names);
   const namesKey = names.join(",");
@@ -47,29 +48,30 @@ export function useMeasuredSizes<N extends string>(names: readonly N[], calculat
   const settled = useDebounced(sizes);
 
   useEffect(() => {
-    if (!calculator || loaded.current) return;
-    loaded.current = true;
-    const { unit: linkUnit, ...restored } = remembered(calculator, fields.current);
+    if (!calculator || restored) return;
+    const { unit: linkUnit, ...kept } = remembered(calculator, fields.current);
     if (linkUnit) setUnit(linkUnit);
-    if (Object.keys(restored).length > 0) setSizes((s) => ({ ...s, ...restored }));
-  }, [calculator, namesKey, setUnit]);
+    if (Object.keys(kept).length > 0) setSizes((s) => ({ ...s, ...kept }));
+    setRestored(true);
+  }, [calculator, namesKey, restored, setUnit]);
 
+  // What is typed is kept as it is typed (a reload a moment later keeps it too); the address follows.
   useEffect(() => {
-    if (!calculator || !loaded.current) return;
+    if (!calculator || !restored) return;
     try {
-      window.localStorage.setItem(storageKey(calculator), JSON.stringify(settled));
+      window.localStorage.setItem(storageKey(calculator), JSON.stringify(sizes));
     } catch {
       // Storage refused (a private window): the link below still carries the sizes.
     }
     const url = new URL(window.location.href);
     for (const n of fields.current) {
-      if (settled[n]) url.searchParams.set(n, settled[n]);
+      if (sizes[n]) url.searchParams.set(n, sizes[n]);
       else url.searchParams.delete(n);
     }
-    if (fields.current.some((n) => settled[n])) url.searchParams.set("unit", unit);
+    if (fields.current.some((n) => sizes[n])) url.searchParams.set("unit", unit);
     else url.searchParams.delete("unit");
     window.history.replaceState(window.history.state, "", url);
-  }, [calculator, namesKey, settled, unit]);
+  }, [calculator, namesKey, restored, sizes, unit]);
 
   return { unit, changeUnit, sizes, set, settled };
 }
