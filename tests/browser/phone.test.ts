@@ -28,6 +28,7 @@ const PAGES: Array<[string, string]> = [
   ["/measure/seal", "main input"],
   ["/measure/felt", "main input"],
   ["/measure/gasket", "main input, main select"],
+  ["/measure/gasket/print?unit=mm&outline=circle&od=120&holes=4&pcd=100&hole=10&paper=a4", "main button"],
   ["/measure/thread", "main input"],
   ["/measure/chain", "main input"],
   ["/machines", "main a"],
