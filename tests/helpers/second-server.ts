@@ -18,9 +18,11 @@ export async function startSecondServer(
   const kill = () => {
     if (child.pid && child.exitCode === null && child.signalCode === null) process.kill(-child.pid, "SIGKILL");
   };
-  const deadline = Date.now() + 60_000;
+  // Start-up on a busy two-core machine can take a minute; each probe gives up after 5 s so that a probe the
+  // starting server holds open never outlasts the deadline.
+  const deadline = Date.now() + 100_000;
   while (
-    !(await fetch(`${url}/api/health`)
+    !(await fetch(`${url}/api/health`, { signal: AbortSignal.timeout(5_000) })
       .then((r) => r.ok)
       .catch(() => false))
   ) {

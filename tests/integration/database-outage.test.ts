@@ -43,7 +43,7 @@ beforeAll(async () => {
   url.port = String(FORWARD_PORT);
   second = await startSecondServer(APP_PORT, { DATABASE_URL: url.toString(), DB_POOL_ACQUIRE_MS: "3000" });
   APP = second.url;
-}, 90_000);
+}, 120_000);
 
 afterAll(async () => {
   second?.kill();

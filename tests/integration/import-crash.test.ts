@@ -19,7 +19,7 @@ beforeAll(async () => {
   admin = await signIn("admin@understudy.test");
   second = await startSecondServer(3109);
   SECOND = second.url;
-}, 90_000);
+}, 120_000);
 
 async function status(id: number) {
   return (await send("get", `/api/imports/${id}`, undefined, { cookie: admin })).body as {
