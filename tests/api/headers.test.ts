@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { send } from "../helpers/api";
+import request from "supertest";
+import { APP_URL, send } from "../helpers/api";
 
 describe("security headers", () => {
   for (const path of ["/", "/measure/seal", "/api/parts/lookup?q=CV-3003", "/sign-in"]) {
@@ -29,5 +30,21 @@ describe("the page's script nonce", () => {
     const scripts = [...a.text.matchAll(/<script\b[^>]*>/g)].map((m) => m[0]);
     expect(scripts.length).toBeGreaterThan(0);
     for (const tag of scripts) expect(tag).toContain(`nonce="${first}"`);
+  });
+});
+
+describe("the web app manifest", () => {
+  it("names the product with its own icon and colours", async () => {
+    const manifest = await request(APP_URL).get("/manifest.webmanifest");
+    expect(manifest.status).toBe(200);
+    expect(JSON.parse(manifest.text)).toMatchObject({
+      short_name: "Understudy",
+      start_url: "/",
+      display: "standalone",
+      icons: [expect.objectContaining({ src: "/icon.svg", type: "image/svg+xml" })],
+    });
+    const icon = await request(APP_URL).get("/icon.svg");
+    expect(icon.status).toBe(200);
+    expect(icon.headers["content-type"]).toContain("image/svg+xml");
   });
 });
