@@ -38,10 +38,7 @@ export const parallelKeyAnswer = (q: z.infer<typeof parallelKeyQuery>) =>
 
 export function taperPinAnswer(q: z.infer<typeof taperPinQuery>) {
   const lengthMm = readOptionalSize("length", q.length, q.unit);
-  const first = forField("number", () => decodeTaperPin(q.number));
-  // The length is given in the unit measured; the pin works in its own.
-  const length = lengthMm === undefined ? undefined : fromMm(lengthMm, first.unit);
-  return { ...forField("number", () => decodeTaperPin(q.number, length)), notes: PIN_NOTES };
+  return { ...forField("number", () => decodeTaperPin(q.number, lengthMm)), notes: PIN_NOTES };
 }
 
 export function taperPinMatchAnswer(q: z.infer<typeof taperPinMatchQuery>) {

@@ -71,21 +71,21 @@ function metricPin(d: number, length?: number): TaperPin {
 
 /**
  * A taper pin from its number: `No. 4`, `#4`, `4/0`, `7/0` (inch), or `ISO 2339 8`, `8 x 40`, `8mm` (metric). A length
- * (in the pin's own unit) gives the other end's diameter.
+ * in millimetres, however it was measured, gives the other end's diameter in the pin's own unit.
  */
-export function decodeTaperPin(text: string, length?: number): TaperPin {
+export function decodeTaperPin(text: string, lengthMm?: number): TaperPin {
   const t = text.trim().replace(/^taper\s+pin\s*/i, "");
   const metric = /^(?:ISO\s*2339\s*(?:[AB]\s*)?)?(\d+(?:[.,]\d+)?)\s*(?:mm)?(?:\s*[x×]\s*(\d+(?:[.,]\d+)?))?$/i.exec(t);
   const inch = /^(?:no\.?\s*|#\s*)?(\d{1,2}(?:\/0)?)$/i.exec(t);
   if (inch && !/ISO|mm|x|×/i.test(t)) {
     const row = TAPER_PINS_INCH.find(([n]) => n === inch[1]);
     if (!row) throw new StandardsInputError(`No. ${inch[1]} is not an ASME B18.8.2 taper pin: they run 7/0 to 10.`);
-    return inchPin(row, length);
+    return inchPin(row, lengthMm === undefined ? undefined : round(lengthMm / MM_PER_INCH, 4));
   }
   if (metric && /ISO|mm|x|×|[.,]/i.test(t)) {
     const d = Number(metric[1].replace(",", "."));
     if (!TAPER_PINS_METRIC.includes(d)) throw new StandardsInputError(`${d} mm is not an ISO 2339 taper pin diameter.`);
-    const len = metric[2] ? Number(metric[2].replace(",", ".")) : length;
+    const len = metric[2] ? Number(metric[2].replace(",", ".")) : lengthMm;
     return metricPin(d, len);
   }
   throw new StandardsInputError(`"${text.trim()}" is not a taper pin. Write it like No. 4, 4/0 or ISO 2339 8 × 40.`);

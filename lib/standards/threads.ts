@@ -1,6 +1,6 @@
 import { StandardsInputError } from "@/lib/standards/errors";
 import { byScore, scoreDimensions, type Deviation } from "@/lib/standards/match";
-import { inchLabel, MM_PER_INCH, round, type LengthUnit } from "@/lib/standards/units";
+import { MM_PER_INCH, round, type LengthUnit } from "@/lib/standards/units";
 
 /**
  * Screw threads identified from a measured major diameter and a thread-gauge reading (threads per inch or pitch):
@@ -305,9 +305,4 @@ export function readThreadDesignation(text: string): ThreadSpec | null {
     ALL_THREADS.find((x) => squash(x.designation.replace(/\(.*?\)/g, "")) === t) ??
     null
   );
-}
-
-/** `1/4 in`, `6.35 mm`: a thread's diameter as the trade says it. */
-export function threadSizeLabel(t: ThreadSpec): string {
-  return t.tpi === null ? `${t.majorMm} mm` : inchLabel(round(t.majorMm / IN, 4));
 }

@@ -122,7 +122,7 @@ describe("taper pins", () => {
     // ASME B18.8.2 (from memory; no open table found): No. 4 has a 0.250 in large end.
     expect(decodeTaperPin("No. 4")).toMatchObject({ largeEnd: 0.25, system: "inch" });
     // Taper 1/4 in per foot on the diameter: over 2 in the diameter falls by 2/48 in, 0.25 − 0.0417 = 0.2083.
-    expect(decodeTaperPin("#4", 2).smallEnd).toBeCloseTo(0.2083, 4);
+    expect(decodeTaperPin("#4", 2 * IN).smallEnd).toBeCloseTo(0.2083, 4);
     for (const [n, large] of TAPER_PINS_INCH) expect(decodeTaperPin(n).largeEnd).toBe(large);
     // Each number is larger than the last (the numbering is monotone).
     const larges = TAPER_PINS_INCH.map(([, l]) => l);
