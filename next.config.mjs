@@ -14,8 +14,9 @@ function securityHeaders() {
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {
-  // Sequelize resolves its dialect at run time and cannot be bundled.
-  serverExternalPackages: ["sequelize"],
+  // Sequelize resolves its dialect at run time and cannot be bundled; esbuild bundles the service worker at build
+  // time (app/serwist/[path]/route.ts), as @serwist/turbopack's withSerwist would add.
+  serverExternalPackages: ["sequelize", "esbuild"],
   // `npm test` and the benchmarks build into .next-test (stack.ts sets NEXT_DIST_DIR), so that they never replace the
   // build a running `npm start` or `npm run dev` serves.
   distDir: process.env.NEXT_DIST_DIR || ".next",

@@ -75,5 +75,5 @@ export function proxy(request: NextRequest) {
 // The import upload (POST /api/imports, up to 50 MB) is left out, so that Next buffers no large body for the proxy;
 // that route makes the same origin check itself before it reads anything.
 export const config = {
-  matcher: ["/((?!_next/static|_next/image|favicon.ico|icon.svg|api/imports$).*)"],
+  matcher: ["/((?!_next/static|_next/image|favicon.ico|icon.svg|serwist/|api/imports$).*)"],
 };

@@ -6,6 +6,7 @@ import "./globals.css";
 import type { Metadata, Viewport } from "next";
 import { SiteFooter } from "@/components/layout/site-footer";
 import { SiteHeader } from "@/components/layout/site-header";
+import { OfflineSupport } from "@/components/layout/offline-support";
 
 export const metadata: Metadata = {
   title: { default: "Understudy: standard parts for old machines", template: "%s · Understudy" },
@@ -28,6 +29,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
           Skip to content
         </a>
         <SiteHeader />
+        <OfflineSupport />
         <main id="main" className="mx-auto w-full max-w-5xl flex-1 px-4 py-8 sm:px-6">
           {children}
         </main>

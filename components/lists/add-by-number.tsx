@@ -27,10 +27,13 @@ export function AddByNumber({
   listId,
   onAdded,
   onChoices,
+  onOffline,
 }: {
   listId: number;
   onAdded: (text: string) => void;
   onChoices: (text: string, choices: NumberChoice[], quantity: number) => void;
+  /** Keeps the line to add when the connection returns. */
+  onOffline: (number: string, quantity: number) => Promise<void>;
 }) {
   const { form, onSubmit, formError, pending } = useApiForm({
     schema: addByNumberForm,
@@ -39,6 +42,10 @@ export function AddByNumber({
     onSuccess: (data: Added) => {
       form.reset();
       onAdded(addedText(data));
+    },
+    whenOffline: async (values) => {
+      await onOffline(values.number, values.quantity);
+      form.reset();
     },
     onError: (error) => {
       const choices = error.field === "number" ? (error.choices as NumberChoice[] | undefined) : undefined;

@@ -15,6 +15,7 @@ import { useApiAction } from "@/lib/hooks/use-api-action";
 import { useList } from "@/lib/hooks/use-lists";
 import type { ListLine, ListView, NumberChoice, SerialChoice } from "@/lib/lists/lists";
 import { Unbroken } from "@/components/ui/unbroken";
+import { OfflineListNote } from "@/components/lists/offline-list-note";
 
 const WIDE = "(min-width: 768px)";
 const noSubscription = () => () => {};
@@ -135,8 +136,20 @@ type Message = {
 const UNDO_SHOWN_MS = 10_000;
 
 /** The job list as its owner works on it: add by number, edit lines inline, pick equivalents, share, export. */
+/** A quantity or an "ordered" tick is kept to send later when there is no connection; other changes need one. */
+function offlineEdit(line: ListLine, body: Record<string, unknown>) {
+  if (typeof body.quantity === "number")
+    return { kind: "quantity", lineId: line.id, number: line.number, from: line.quantity, to: body.quantity } as const;
+  if (typeof body.ordered === "boolean")
+    return { kind: "ordered", lineId: line.id, number: line.number, from: line.ordered, to: body.ordered } as const;
+  return null;
+}
+
+const NEEDS_CONNECTION =
+  "You are offline. This change needs a connection; quantities, “ordered” ticks and new lines are kept and sent later.";
+
 export function ListEditor({ initial }: { initial: ListView }) {
-  const { view, mutate } = useList(initial);
+  const { view, mutate, online, savedAt, waiting, outcome, queue } = useList(initial);
   const wide = useWideScreen();
   const action = useApiAction();
   const [message, setMessage] = useState<Message | null>(null);
@@ -168,7 +181,17 @@ export function ListEditor({ initial }: { initial: ListView }) {
   const { run, pending } = action;
   const cells = useMemo(() => {
     const patch = async (line: ListLine, body: Record<string, unknown>) => {
+      const later = offlineEdit(line, body);
+      if (!online && !later) return NEEDS_CONNECTION;
+      if (!online && later) {
+        await queue(later);
+        return null;
+      }
       const result = await sendJson("PATCH", `/api/lists/${view.id}/lines/${line.id}`, body);
+      if (!result.ok && result.status === 0 && later) {
+        await queue(later);
+        return null;
+      }
       await mutate();
       return result.ok ? null : result.error.message;
     };
@@ -363,7 +386,7 @@ export function ListEditor({ initial }: { initial: ListView }) {
         </div>
       ),
     };
-  }, [view.id, mutate, run, pending]);
+  }, [view.id, mutate, run, pending, online, queue]);
 
   const columns = useMemo<Array<ColumnDef<ListLine>>>(
     () => [
@@ -419,7 +442,12 @@ export function ListEditor({ initial }: { initial: ListView }) {
           void mutate();
         }}
         onChoices={(text, numbers, quantity) => setMessage({ tone: "caution", text, numbers, quantity })}
+        onOffline={async (number, quantity) => {
+          await queue({ kind: "add", number, quantity });
+          setMessage({ tone: "success", text: `Kept ${quantity} × ${number} to add when the connection returns.` });
+        }}
       />
+      <OfflineListNote online={online} savedAt={savedAt} waiting={waiting} outcome={outcome} />
       {message && (
         <Notice tone={message.tone} role={message.tone === "caution" ? "alert" : "status"}>
           <span className="block">{message.text}</span>

@@ -6,6 +6,7 @@ import { useForm, type FieldValues, type Path, type Resolver } from "react-hook-
 import type { z } from "zod";
 import type { ErrorBody } from "@/lib/errors";
 import { sendJson } from "@/lib/http/post-json";
+import { isConnected } from "@/lib/offline/connection";
 
 /**
  * A form validated in the browser by the same zod schema the route handler uses, posted as JSON;
@@ -22,6 +23,8 @@ export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(optio
   defaultValues: TInput;
   onSuccess: (data: TResponse, values: TOutput) => void;
   onError?: (error: ErrorBody, status: number) => boolean;
+  /** What to do with the values when there is no connection (keep them to send later); without it, an error. */
+  whenOffline?: (values: TOutput) => Promise<void> | void;
 }) {
   const form = useForm<TInput, unknown, TOutput>({
     // The schema's input and output types are the form's; the resolver's generics cannot see that through z.ZodType.
@@ -33,6 +36,7 @@ export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(optio
 
   const onSubmit = form.handleSubmit(async (values) => {
     setFormError(null);
+    if (options.whenOffline && !isConnected()) return options.whenOffline(values);
     const endpoint = typeof options.endpoint === "function" ? options.endpoint(values) : options.endpoint;
     const result = await sendJson<TResponse>(
       options.method ?? "POST",
@@ -40,6 +44,7 @@ export function useApiForm<TInput extends FieldValues, TOutput, TResponse>(optio
       options.toBody ? options.toBody(values) : values,
     );
     if (result.ok) return options.onSuccess(result.data, values);
+    if (result.status === 0 && options.whenOffline) return options.whenOffline(values);
     if (options.onError?.(result.error, result.status)) return;
     const { field, message } = result.error;
     const fields = result.error.fields ?? (field ? { [field]: message } : {});

@@ -3,6 +3,7 @@
 import { useEffect, useState } from "react";
 import useSWR, { type SWRConfiguration } from "swr";
 import type { ErrorBody } from "@/lib/errors";
+import { markConnection } from "@/lib/offline/connection";
 
 /** An API refusal as the client sees it: the API's own error shape, and the status. */
 export class ApiError extends Error {
@@ -20,8 +21,10 @@ export async function fetchJson<T>(url: string): Promise<T> {
   try {
     response = await fetch(url);
   } catch {
+    markConnection(false);
     throw new ApiError({ error: "unavailable", message: "No connection to Understudy. Check your network." }, 0);
   }
+  markConnection(true);
   const body = await response.json().catch(() => null);
   if (!response.ok) {
     const fallback: ErrorBody = { error: "internal", message: "That could not be loaded just now. Please try again." };
@@ -34,8 +37,12 @@ export async function fetchJson<T>(url: string): Promise<T> {
  * The base of every resource hook in lib/hooks: one resource keyed by its API address (null asks nothing), with
  * `error` in the API's shape. The previous answer stays on screen while the next one loads, so nothing flickers.
  */
-export function useApi<T>(url: string | null, options: SWRConfiguration<T, ApiError> = {}) {
-  const { data, error, isLoading, isValidating, mutate } = useSWR<T, ApiError>(url, fetchJson, {
+export function useApi<T>(
+  url: string | null,
+  options: SWRConfiguration<T, ApiError> = {},
+  fetcher: (url: string) => Promise<T> = fetchJson,
+) {
+  const { data, error, isLoading, isValidating, mutate } = useSWR<T, ApiError>(url, fetcher, {
     keepPreviousData: true,
     revalidateOnFocus: false,
     shouldRetryOnError: false,

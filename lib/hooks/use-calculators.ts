@@ -1,6 +1,7 @@
 "use client";
 
-import { apiUrl, useApi } from "@/lib/hooks/use-api";
+import { ApiError, apiUrl, fetchJson, useApi as useOnlineApi } from "@/lib/hooks/use-api";
+import { isConnected } from "@/lib/offline/connection";
 import type { BearingCandidate, DecodedBearing } from "@/lib/standards/bearings";
 import type { DecodedBelt, SectionCandidate } from "@/lib/standards/belts";
 import type { SizedPart } from "@/lib/catalogue/find-by-size";
@@ -13,6 +14,25 @@ import type { TaperPin, TaperPinCandidate } from "@/lib/standards/pins";
 import type { GREASE_FITTINGS, ThreadCandidate } from "@/lib/standards/threads";
 
 type Params = Record<string, string | boolean | undefined>;
+
+/**
+ * Asks the API; with no connection, works the answer out on this device with the same engine functions the API runs
+ * (lib/measure/calculators.ts), loaded only then. An answer worked out here says so (`offline: true`) and has no
+ * catalogue parts, which need the server.
+ */
+async function fetchOrWorkOut<T>(url: string): Promise<T> {
+  if (isConnected()) {
+    try {
+      return await fetchJson<T>(url);
+    } catch (error) {
+      if (!(error instanceof ApiError) || error.status !== 0) throw error;
+    }
+  }
+  const { workOutHere } = await import("@/lib/measure/offline");
+  return workOutHere(url) as T;
+}
+
+const useApi = <T>(url: string | null) => useOnlineApi<T>(url, {}, fetchOrWorkOut<T>);
 
 /** The calculators' resources, one hook each; every one asks nothing until its required fields are filled in. */
 export const useBearingDecode = (designation: string) =>

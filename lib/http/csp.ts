@@ -11,6 +11,8 @@ export function contentSecurityPolicy(nonce: string, options: { development: boo
     "style-src 'self' 'unsafe-inline'",
     "img-src 'self' blob: data:",
     "font-src 'self'",
+    "worker-src 'self'",
+    "manifest-src 'self'",
     `connect-src 'self' ${options.photoStore}`.trim(),
     "object-src 'none'",
     "base-uri 'self'",

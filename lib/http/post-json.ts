@@ -1,4 +1,5 @@
 import type { ErrorBody } from "@/lib/errors";
+import { markConnection } from "@/lib/offline/connection";
 
 export type PostResult<T> = { ok: true; data: T } | { ok: false; status: number; error: ErrorBody };
 
@@ -14,6 +15,7 @@ export async function sendJson<T>(
       headers: body === undefined ? {} : { "content-type": "application/json" },
       body: body === undefined ? undefined : JSON.stringify(body),
     });
+    markConnection(true);
     const data = response.status === 204 ? {} : await response.json().catch(() => ({}));
     if (response.ok) return { ok: true, data: data as T };
     const error = (data as Partial<ErrorBody>).error
@@ -21,6 +23,7 @@ export async function sendJson<T>(
       : { error: "internal" as const, message: "Something went wrong on our side. Please try again." };
     return { ok: false, status: response.status, error };
   } catch {
+    markConnection(false);
     return {
       ok: false,
       status: 0,

@@ -25,9 +25,14 @@ export function launchBrowser(): Promise<Browser> {
 
 /**
  * One browser for a test file and a fresh page (own cookies) for each test, at the given screen size.
- * Call at the top of a file; the returned function gives the current test's page.
+ * Call at the top of a file; the returned function gives the current test's page. The service worker is blocked
+ * unless asked for: each fresh context would install it and fetch every file of the build, and only the offline
+ * tests are about it (with a connection it passes every request through).
  */
-export function pagePerTest(viewport = { width: 390, height: 844 }): () => Page {
+export function pagePerTest(
+  viewport = { width: 390, height: 844 },
+  options: { serviceWorkers?: "allow" | "block" } = {},
+): () => Page {
   let browser: Browser | undefined;
   let context: BrowserContext | undefined;
   let page: Page | undefined;
@@ -39,7 +44,7 @@ export function pagePerTest(viewport = { width: 390, height: 844 }): () => Page 
   });
   beforeEach(async () => {
     if (!browser) throw new Error("The browser did not start");
-    context = await browser.newContext({ viewport });
+    context = await browser.newContext({ viewport, serviceWorkers: options.serviceWorkers ?? "block" });
     page = await context.newPage();
   });
   // One open window at a time: a finished test's window left open can starve the next one of animation frames,

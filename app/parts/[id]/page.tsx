@@ -11,6 +11,10 @@ import { getPart, type PartDetail } from "@/lib/catalogue/get-part";
 import { CATEGORY_NAMES } from "@/lib/catalogue/kinds";
 import { loadByIdOr404 } from "@/lib/http/load-or-404";
 import { getCurrentSession } from "@/lib/auth/session";
+import { KeepPart } from "@/components/parts/keep-part";
+import { FIT_NAMES } from "@/lib/catalogue/kinds";
+import { crossLabel } from "@/lib/catalogue/ranking";
+import { standardSizes } from "@/lib/catalogue/sizes";
 
 const load = (idText: string): Promise<PartDetail> => loadByIdOr404(idText, getPart);
 
@@ -56,6 +60,20 @@ export default async function PartPage({ params }: { params: Promise<{ id: strin
         </p>
         <h1 className="num text-4xl">{part.number}</h1>
         <p className="text-xl">{part.description}</p>
+        <KeepPart
+          part={{
+            id: part.id,
+            number: part.number,
+            maker: part.maker.name,
+            categoryName: CATEGORY_NAMES[part.category],
+            description: part.description,
+            equivalents: part.crosses.map((c) => ({
+              designation: crossLabel(c),
+              sizes: c.standard ? standardSizes(c.standard) : "",
+              fit: FIT_NAMES[c.fit].word,
+            })),
+          }}
+        />
         {user && (
           <div className="no-print">
             <AddToList item={{ partId: part.id }} number={part.number} />
