@@ -42,7 +42,14 @@ describe("with no connection", () => {
 
     await page.context().setOffline(true);
     // Really offline: the service worker's own fetch of the API fails too.
-    expect(await page.evaluate(() => fetch("/api/health").then(() => "reached", () => "failed"))).toBe("failed");
+    expect(
+      await page.evaluate(() =>
+        fetch("/api/health").then(
+          () => "reached",
+          () => "failed",
+        ),
+      ),
+    ).toBe("failed");
 
     // The bearing calculator was never opened: it was kept at install, and works it out on the phone.
     await page.goto(`${APP_URL}/measure/bearing`);

@@ -8,9 +8,5 @@ const distDir = (process.env.NEXT_DIST_DIR || ".next").replace(/^\/|\/$/g, "");
 export const { dynamic, dynamicParams, revalidate, generateStaticParams, GET } = createSerwistRoute({
   swSrc: "app/sw.ts",
   useNativeEsbuild: true,
-  globPatterns: [
-    `${distDir}/static/**/*.{js,css,svg,json}`,
-    `${distDir}/static/media/*-latin-*.woff2`,
-    "public/**/*",
-  ],
+  globPatterns: [`${distDir}/static/**/*.{js,css,svg,json}`, `${distDir}/static/media/*-latin-*.woff2`, "public/**/*"],
 });
