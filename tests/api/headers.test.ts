@@ -48,3 +48,26 @@ describe("the web app manifest", () => {
     expect(icon.headers["content-type"]).toContain("image/svg+xml");
   });
 });
+
+describe("the service worker", () => {
+  it("is served as a script for the whole site, with the build's files and the offline page to keep", async () => {
+    const worker = await request(APP_URL).get("/serwist/sw.js").buffer(true);
+    expect(worker.status).toBe(200);
+    expect(worker.headers["content-type"]).toMatch(/javascript/);
+    expect(worker.headers["service-worker-allowed"]).toBe("/");
+    expect(worker.text).toContain("/offline.html");
+    expect(worker.text).toMatch(/\/_next\/static\/chunks\/[^"]+\.js/);
+    expect(worker.text).toMatch(/"\/measure"/);
+    // Pages may register it: their policy names the site as the one place a worker may come from.
+    const page = await send("get", "/");
+    expect(String(page.headers["content-security-policy"])).toContain("worker-src 'self'");
+  });
+
+  it("has an offline page that says what still works", async () => {
+    const page = await request(APP_URL).get("/offline.html");
+    expect(page.status).toBe(200);
+    expect(page.text).toContain("You are offline");
+    expect(page.text).toContain('href="/kept"');
+    expect(page.text).toContain('href="/measure/bearing"');
+  });
+});

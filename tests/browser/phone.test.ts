@@ -37,6 +37,7 @@ const PAGES: Array<[string, string]> = [
   ["/review", "main h1"],
   ["/admin/imports", "main h1"],
   ["/audit", "main h1"],
+  ["/kept", "main h1"],
 ];
 
 describe("on a phone and a tablet", () => {
