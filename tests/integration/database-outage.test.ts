@@ -6,7 +6,9 @@ import { startSecondServer } from "../helpers/second-server";
 // forwarder (and cutting the connections through it) is the database going away, as in a restart or an outage,
 // without touching the database the other tests use. Opening it again is the database coming back.
 const APP_PORT = 3108;
-const FORWARD_PORT = 54398;
+// The forwarder's port is the system's choice the first time (a fixed one can be taken by some connection's own
+// end, as ports of that range are handed out to them), and the same one when it opens again.
+let forwardPort = 0;
 let APP = "";
 const target = new URL(process.env.DATABASE_URL!);
 
@@ -24,7 +26,12 @@ function openForwarder(): Promise<void> {
     }
     client.pipe(upstream).pipe(client);
   });
-  return new Promise((resolve) => forwarder!.listen(FORWARD_PORT, "127.0.0.1", () => resolve()));
+  return new Promise((resolve) =>
+    forwarder!.listen(forwardPort, "127.0.0.1", () => {
+      forwardPort = (forwarder!.address() as net.AddressInfo).port;
+      resolve();
+    }),
+  );
 }
 
 function closeForwarder(): Promise<void> {
@@ -40,7 +47,7 @@ const get = async (pathname: string) => {
 beforeAll(async () => {
   await openForwarder();
   const url = new URL(process.env.DATABASE_URL!);
-  url.port = String(FORWARD_PORT);
+  url.port = String(forwardPort);
   second = await startSecondServer(APP_PORT, { DATABASE_URL: url.toString(), DB_POOL_ACQUIRE_MS: "3000" });
   APP = second.url;
 }, 120_000);
