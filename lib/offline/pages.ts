@@ -3,7 +3,6 @@ export const PAGES_CACHE = "pages";
 
 /** Pages kept at install, so that they work with no connection even if never opened. */
 export const OFFLINE_PAGES = [
-  "/measure",
   ...["bearing", "seal", "belt", "felt", "packing", "plug", "gasket", "key", "pin", "thread", "chain"].map(
     (name) => `/measure/${name}`,
   ),

@@ -1,3 +1,4 @@
+import { fetchJson } from "@/lib/hooks/use-api";
 import { sendJson } from "@/lib/http/post-json";
 import type { ListLine, ListView } from "@/lib/lists/lists";
 import { dropEdit, queuedEdits, saveList, type QueuedEdit } from "@/lib/offline/store";
@@ -25,14 +26,8 @@ export function applyEdit(view: ListView, edit: QueuedEdit): ListView {
   return { ...view, lines };
 }
 
-async function currentList(listId: number): Promise<ListView | null> {
-  try {
-    const response = await fetch(`/api/lists/${listId}`);
-    return response.ok ? ((await response.json()) as ListView) : null;
-  } catch {
-    return null;
-  }
-}
+const currentList = (listId: number): Promise<ListView | null> =>
+  fetchJson<ListView>(`/api/lists/${listId}`).catch(() => null);
 
 /**
  * Sends a list's queued changes in the order they were made, once there is a connection. A quantity or tick that
