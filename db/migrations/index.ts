@@ -11,6 +11,7 @@ import * as proposals from "@/db/migrations/0010-proposals";
 import * as normalised from "@/db/migrations/0011-normalised";
 import * as packingAndGaskets from "@/db/migrations/0012-packing-and-gaskets";
 import * as smallParts from "@/db/migrations/0013-small-parts";
+import * as catalogueVersion from "@/db/migrations/0014-catalogue-version";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -27,4 +28,5 @@ export const migrations = [
   { name: "0011-normalised", ...normalised },
   { name: "0012-packing-and-gaskets", ...packingAndGaskets },
   { name: "0013-small-parts", ...smallParts },
+  { name: "0014-catalogue-version", ...catalogueVersion },
 ];

@@ -113,13 +113,26 @@ export function errorResponse(error: unknown): Response {
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wraps a route handler so that every thrown error becomes one JSON shape with the right status. */
+/**
+ * Wraps a route handler so that every thrown error becomes one JSON shape with the right status. An answer that
+ * does not say how it may be cached is kept by nobody (`private, no-store`): only the answers that are the same for
+ * everyone say otherwise (lib/http/cache.ts).
+ */
 export function handle<C>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
+    let response: Response;
     try {
-      return await handler(request, context);
+      response = await handler(request, context);
     } catch (error) {
-      return errorResponse(error);
+      response = errorResponse(error);
     }
+    if (!response.headers.has("Cache-Control")) {
+      try {
+        response.headers.set("Cache-Control", "private, no-store");
+      } catch {
+        // A redirect's headers cannot be changed; it carries nothing to keep.
+      }
+    }
+    return response;
   };
 }

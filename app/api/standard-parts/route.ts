@@ -1,4 +1,5 @@
 import { findStandardParts } from "@/lib/catalogue/find-standard";
+import { publicJson } from "@/lib/http/cache";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { standardPartsQuery } from "@/lib/validation/catalogue";
@@ -8,5 +9,7 @@ export const runtime = "nodejs";
 
 export const GET = handle(async (request) => {
   const { q, kind, limit } = parseWith(standardPartsQuery, queryOf(request));
-  return Response.json({ results: await findStandardParts(q, kind, limit) });
+  return publicJson(request, { readsCatalogue: true }, async () => ({
+    results: await findStandardParts(q, kind, limit),
+  }));
 });

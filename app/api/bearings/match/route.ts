@@ -1,3 +1,4 @@
+import { publicJson } from "@/lib/http/cache";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { bearingAnswer } from "@/lib/measure/answers";
@@ -7,5 +8,5 @@ import { parseWith } from "@/lib/validation/parse";
 export const runtime = "nodejs";
 
 export const GET = handle(async (request) =>
-  Response.json(await bearingAnswer(parseWith(bearingMatchQuery, queryOf(request)))),
+  publicJson(request, { readsCatalogue: true }, () => bearingAnswer(parseWith(bearingMatchQuery, queryOf(request)))),
 );

@@ -1,3 +1,4 @@
+import { publicJson } from "@/lib/http/cache";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { feltAnswer } from "@/lib/measure/answers";
@@ -6,4 +7,6 @@ import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";
 
-export const GET = handle(async (request) => Response.json(await feltAnswer(parseWith(feltQuery, queryOf(request)))));
+export const GET = handle(async (request) =>
+  publicJson(request, { readsCatalogue: true }, () => feltAnswer(parseWith(feltQuery, queryOf(request)))),
+);

@@ -1,3 +1,4 @@
+import { publicJson } from "@/lib/http/cache";
 import { handle } from "@/lib/http/handle";
 import { queryOf } from "@/lib/http/query";
 import { plugAnswer } from "@/lib/measure/answers";
@@ -6,4 +7,6 @@ import { parseWith } from "@/lib/validation/parse";
 
 export const runtime = "nodejs";
 
-export const GET = handle(async (request) => Response.json(await plugAnswer(parseWith(plugQuery, queryOf(request)))));
+export const GET = handle(async (request) =>
+  publicJson(request, { readsCatalogue: true }, () => plugAnswer(parseWith(plugQuery, queryOf(request)))),
+);

@@ -1,0 +1,71 @@
+import { createHash } from "node:crypto";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { QueryTypes } from "sequelize";
+import { sequelize } from "@/db/sequelize";
+
+/**
+ * Caching a CDN (and the browser) can use, for the answers that are the same for everyone: the catalogue's parts and
+ * look-ups, and the calculators. Each answer carries an ETag made of the build, the catalogue's version (for answers
+ * that read the catalogue) and the address asked; a request that sends the ETag it has back in If-None-Match gets a
+ * 304 without the answer being worked out again. A change to the catalogue raises its version when it commits
+ * (migration 0014), which changes every catalogue ETag at once. Anything personal is `private, no-store` (handle()).
+ */
+
+/** The build: a calculator's answer changes only with the code. Read once; "development" under `next dev`. */
+let build: string | undefined;
+function buildId(): string {
+  if (build === undefined) {
+    try {
+      const dir = process.env.NEXT_DIST_DIR || ".next";
+      build = readFileSync(path.join(process.cwd(), dir, "BUILD_ID"), "utf8").trim();
+    } catch {
+      build = "development";
+    }
+  }
+  return build;
+}
+
+export async function catalogueVersion(): Promise<string> {
+  const [row] = await sequelize.query<{ version: string }>("SELECT version FROM catalogue_version WHERE id = 1", {
+    type: QueryTypes.SELECT,
+  });
+  return row?.version ?? "0";
+}
+
+export const CACHE_CONTROL = {
+  /**
+   * A CDN keeps a catalogue answer a minute and may serve it stale while it refreshes; a browser asks again each
+   * time (a 304 when nothing changed), so a person who has just changed the catalogue sees the change.
+   */
+  catalogue: "public, max-age=0, s-maxage=60, stale-while-revalidate=600",
+  /** A calculator's answer changes only with a new build. */
+  calculator: "public, max-age=3600, stale-while-revalidate=86400",
+  personal: "private, no-store",
+} as const;
+
+function etagMatches(header: string | null, etag: string): boolean {
+  if (!header) return false;
+  return header.split(",").some((tag) => tag.trim().replace(/^W\//, "") === etag.replace(/^W\//, ""));
+}
+
+/**
+ * A public JSON answer with its ETag: 304 when the asker already has it, otherwise `answer()` worked out and sent.
+ * `readsCatalogue` puts the catalogue's version in the ETag.
+ */
+export async function publicJson(
+  request: Request,
+  options: { readsCatalogue: boolean },
+  answer: () => unknown | Promise<unknown>,
+): Promise<Response> {
+  const url = new URL(request.url);
+  const version = options.readsCatalogue ? await catalogueVersion() : "-";
+  const digest = createHash("sha256").update(`${url.pathname}?${url.searchParams}`).digest("base64url").slice(0, 22);
+  const etag = `W/"${buildId()}.${version}.${digest}"`;
+  const headers = {
+    ETag: etag,
+    "Cache-Control": options.readsCatalogue ? CACHE_CONTROL.catalogue : CACHE_CONTROL.calculator,
+  };
+  if (etagMatches(request.headers.get("if-none-match"), etag)) return new Response(null, { status: 304, headers });
+  return Response.json(await answer(), { headers });
+}
