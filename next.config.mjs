@@ -12,6 +12,34 @@ function securityHeaders() {
   ];
 }
 
+// The anonymous, read-only answers of the catalogue and the calculators, which the request proxy leaves alone
+// (proxy.ts lists them in its matcher): JSON for anyone, with a policy that allows nothing, like the import upload's.
+const READ_ONLY_ANSWERS = [
+  "parts/lookup",
+  "standard-parts",
+  "bearings/decode",
+  "bearings/match",
+  "seals/match",
+  "seals/press-fit",
+  "belts/decode",
+  "belts/identify",
+  "belts/drive",
+  "felts/size",
+  "packing/size",
+  "plugs/match",
+  "keys/woodruff",
+  "keys/woodruff/match",
+  "keys/parallel",
+  "pins/taper",
+  "pins/taper/match",
+  "threads/identify",
+  "threads/grease-fittings",
+  "chain/decode",
+  "chain/identify",
+  "chain/links",
+];
+const NOTHING_ALLOWED = [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }];
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize resolves its dialect at run time and cannot be bundled; esbuild bundles the service worker at build
@@ -24,10 +52,8 @@ const nextConfig = {
   async headers() {
     return [
       { source: "/:path*", headers: securityHeaders() },
-      {
-        source: "/api/imports",
-        headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }],
-      },
+      { source: "/api/imports", headers: NOTHING_ALLOWED },
+      ...READ_ONLY_ANSWERS.map((answer) => ({ source: `/api/${answer}`, headers: NOTHING_ALLOWED })),
     ];
   },
   experimental: {

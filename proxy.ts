@@ -72,8 +72,17 @@ export function proxy(request: NextRequest) {
   return response;
 }
 
-// The import upload (POST /api/imports, up to 50 MB) is left out, so that Next buffers no large body for the proxy;
-// that route makes the same origin check itself before it reads anything.
+// Left out, so that the proxy runs only where it has work:
+// - the import upload (POST /api/imports, up to 50 MB), so that Next buffers no large body for the proxy; that route
+//   makes the same origin check itself before it reads anything;
+// - the anonymous, read-only answers of the catalogue and the calculators (GET only, no parameters in the path, no
+//   page to carry a nonce, nothing personal): the busiest addresses, which a CDN keeps (lib/http/cache.ts);
+// - the framework's files, the icon and the service worker.
+// Next reads the matcher when it builds, so it is one constant; the read-only answers are listed again in
+// next.config.mjs (READ_ONLY_ANSWERS), which gives them their own policy, and tests/api/headers.test.ts checks both.
 export const config = {
-  matcher: ["/((?!_next/static|_next/image|favicon.ico|icon.svg|serwist/|api/imports$).*)"],
+  matcher: [
+    // eslint-disable-next-line max-len
+    "/((?!_next/static|_next/image|favicon.ico|icon.svg|serwist/|api/imports$|api/(?:parts/lookup|standard-parts|bearings/(?:decode|match)|seals/(?:match|press-fit)|belts/(?:decode|identify|drive)|felts/size|packing/size|plugs/match|keys/(?:woodruff|woodruff/match|parallel)|pins/(?:taper|taper/match)|threads/(?:identify|grease-fittings)|chain/(?:decode|identify|links))$).*)",
+  ],
 };

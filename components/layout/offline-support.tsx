@@ -42,8 +42,11 @@ export function OfflineSupport() {
         <div role="status" className="no-print border-b border-rule-strong bg-brass-wash" data-testid="offline-banner">
           <p className="mx-auto max-w-5xl px-4 py-2 text-sm sm:px-6">
             <span className="font-bold">Offline.</span> The calculators still work on this device; parts and job lists
-            you opened show the copy <Link href="/kept">kept on this device</Link>, and list changes are sent when the
-            connection returns. Look-up and proposals need a connection.
+            you opened show the copy{" "}
+            <Link prefetch={false} href="/kept">
+              kept on this device
+            </Link>
+            , and list changes are sent when the connection returns. Look-up and proposals need a connection.
           </p>
         </div>
       )}

@@ -19,7 +19,7 @@ const panelClass = "absolute inset-x-0 top-full z-30 border-b border-rule-strong
 
 function AreaLink({ area }: { area: Area }) {
   return area.ready ? (
-    <Link href={area.href} className={linkClass}>
+    <Link prefetch={false} href={area.href} className={linkClass}>
       {area.label}
     </Link>
   ) : (
@@ -33,6 +33,9 @@ function AreaLink({ area }: { area: Area }) {
 }
 
 /**
+ * Every page behind the header's links is rendered for each request, so they are not prefetched: a page would
+ * otherwise ask the server for a dozen pages nobody opened.
+ *
  * The header: on paper, in graphite, one compact row. On a phone it holds the name, a search button and a menu button
  * that opens the areas (and sign-in); from a tablet up the areas sit in the row itself.
  */
@@ -43,10 +46,10 @@ export async function SiteHeader() {
   const areas = AREAS.filter((area) => !area.permission || hasPermission(role, area.permission));
   const signIn = !user && (
     <>
-      <Link href="/sign-in" className={linkClass}>
+      <Link prefetch={false} href="/sign-in" className={linkClass}>
         Sign in
       </Link>
-      <Link href="/sign-up" className={joinClass}>
+      <Link prefetch={false} href="/sign-up" className={joinClass}>
         Join
       </Link>
     </>
@@ -55,7 +58,7 @@ export async function SiteHeader() {
   return (
     <header className="no-print relative border-b border-rule-strong bg-ground" data-testid="site-header">
       <div className="mx-auto flex max-w-5xl items-center gap-2 px-3 py-1.5 sm:px-6 lg:gap-4">
-        <Link href="/" className="flex min-h-11 items-center gap-2 text-ink no-underline">
+        <Link prefetch={false} href="/" className="flex min-h-11 items-center gap-2 text-ink no-underline">
           <LogoMark className="h-8 w-8 text-brass" />
           <span className="text-xl font-bold tracking-wide">Understudy</span>
         </Link>
@@ -65,7 +68,12 @@ export async function SiteHeader() {
           ))}
         </nav>
         <div className="ml-auto flex items-center gap-1">
-          <Link href="/lookup" className={`${linkClass} lg:hidden`} aria-label="Look up a factory number">
+          <Link
+            prefetch={false}
+            href="/lookup"
+            className={`${linkClass} lg:hidden`}
+            aria-label="Look up a factory number"
+          >
             <svg
               viewBox="0 0 24 24"
               className="h-6 w-6"

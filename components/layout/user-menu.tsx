@@ -34,14 +34,26 @@ export function UserMenu({ email, role }: { email: string; role: Role }) {
             {roleNames[role]}
           </span>
         </p>
-        <Link href="/account" className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk">
+        <Link
+          prefetch={false}
+          href="/account"
+          className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk"
+        >
           Your account
         </Link>
-        <Link href="/proposals" className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk">
+        <Link
+          prefetch={false}
+          href="/proposals"
+          className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk"
+        >
           Your proposals
         </Link>
         {role === "admin" && (
-          <Link href="/audit" className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk">
+          <Link
+            prefetch={false}
+            href="/audit"
+            className="block rounded-md px-3 py-2 text-ink no-underline hover:bg-ground-sunk"
+          >
             Audit log
           </Link>
         )}

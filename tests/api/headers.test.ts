@@ -3,7 +3,7 @@ import request from "supertest";
 import { APP_URL, send } from "../helpers/api";
 
 describe("security headers", () => {
-  for (const path of ["/", "/measure/seal", "/api/parts/lookup?q=CV-3003", "/sign-in"]) {
+  for (const path of ["/", "/measure/seal", "/api/lists", "/sign-in"]) {
     it(`sends them with ${path}`, async () => {
       const response = await send("get", path);
       const csp = String(response.headers["content-security-policy"]);
@@ -16,6 +16,43 @@ describe("security headers", () => {
       expect(response.headers["referrer-policy"]).toBe("strict-origin-when-cross-origin");
       // HSTS belongs to production (over TLS) only; the test server is plain http.
       expect(response.headers["strict-transport-security"]).toBeUndefined();
+    });
+  }
+});
+
+describe("the read-only answers of the catalogue and the calculators", () => {
+  // The request proxy does not run for them (proxy.ts's matcher), and next.config.mjs gives them a policy that
+  // allows nothing: both lists must name the same addresses.
+  const READ_ONLY = [
+    "/api/parts/lookup?q=CV-3003",
+    "/api/standard-parts?q=6205",
+    "/api/bearings/decode?designation=6205",
+    "/api/bearings/match?bore=25&od=52",
+    "/api/seals/match?shaft=35&bore=52",
+    "/api/seals/press-fit?bore=52&sealOd=52.1",
+    "/api/belts/decode?designation=B60",
+    "/api/belts/identify?top=17",
+    "/api/belts/drive?large=10&small=5&center=24",
+    "/api/felts/size?shaft=30&bore=40&width=5",
+    "/api/packing/size?shaft=20&bore=32",
+    "/api/plugs/match?bore=40",
+    "/api/keys/woodruff?number=606",
+    "/api/keys/woodruff/match?width=0.185&diameter=0.74&unit=in",
+    "/api/keys/parallel?shaft=25",
+    "/api/pins/taper?number=4",
+    "/api/pins/taper/match?largeEnd=8.79",
+    "/api/threads/identify?diameter=9.8&pitch=1.25",
+    "/api/threads/grease-fittings",
+    "/api/chain/decode?number=40",
+    "/api/chain/identify?pitch=12.7&roller=7.9",
+    "/api/chain/links?number=40&teeth1=15&teeth2=30&center=20&unit=in",
+  ];
+  for (const path of READ_ONLY) {
+    it(`answers ${path.split("?")[0]} without the proxy, with a policy that allows nothing`, async () => {
+      const response = await send("get", path);
+      expect(response.status).toBe(200);
+      expect(response.headers["content-security-policy"]).toBe("default-src 'none'; frame-ancestors 'none'");
+      expect(response.headers["x-content-type-options"]).toBe("nosniff");
     });
   }
 });
