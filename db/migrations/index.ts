@@ -12,6 +12,8 @@ import * as normalised from "@/db/migrations/0011-normalised";
 import * as packingAndGaskets from "@/db/migrations/0012-packing-and-gaskets";
 import * as smallParts from "@/db/migrations/0013-small-parts";
 import * as catalogueVersion from "@/db/migrations/0014-catalogue-version";
+import * as nearestSizeIndex from "@/db/migrations/0015-nearest-size-index";
+import * as catalogueVersionNotice from "@/db/migrations/0016-catalogue-version-notice";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -29,4 +31,6 @@ export const migrations = [
   { name: "0012-packing-and-gaskets", ...packingAndGaskets },
   { name: "0013-small-parts", ...smallParts },
   { name: "0014-catalogue-version", ...catalogueVersion },
+  { name: "0015-nearest-size-index", ...nearestSizeIndex },
+  { name: "0016-catalogue-version-notice", ...catalogueVersionNotice },
 ];

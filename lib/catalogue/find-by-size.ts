@@ -25,42 +25,55 @@ export async function findPartsBySize(input: {
   limit?: number;
 }): Promise<SizedPart[]> {
   const w = input.toleranceMm * 3;
+  const inner = input.innerMm ?? 0;
+  const limit = input.limit ?? 12;
   const rows = await sequelize.query<{
     id: number;
     maker: string;
     number: string;
     description: string;
-    inner_mm: number;
+    inner_mm: number | null;
     outer_mm: number;
     width_mm: number | null;
   }>(
+    // The nearest sizes first, straight from the GiST index (migration 0015): the box is the tolerance window, the
+    // order the distance from what was measured; the expressions are the index's own. A second sort key would make
+    // PostgreSQL read and sort the whole window, so parts of the same size are put in number order here, from
+    // twice as many rows as are shown.
     `SELECT p.id, m.name AS maker, p.number, p.description, p.inner_mm, p.outer_mm, p.width_mm
      FROM original_parts p JOIN makers m ON m.id = p.maker_id
-     WHERE p.category = :category AND p.outer_mm BETWEEN :outerLo AND :outerHi AND
-       (CAST(:inner AS numeric) IS NULL OR p.inner_mm BETWEEN :innerLo AND :innerHi)
-     ORDER BY abs(coalesce(p.inner_mm - :inner, 0)) + abs(p.outer_mm - :outer), p.number
-     LIMIT :limit`,
+     WHERE p.outer_mm IS NOT NULL AND p.category = :category
+       AND point(coalesce(p.inner_mm, 0)::float8, p.outer_mm::float8)
+         <@ box(point(:innerLo, :outerLo), point(:innerHi, :outerHi))
+     ORDER BY point(coalesce(p.inner_mm, 0)::float8, p.outer_mm::float8) <-> point(:inner, :outer)
+     LIMIT :read`,
     {
       replacements: {
         category: input.category,
-        inner: input.innerMm,
+        inner,
         outer: input.outerMm,
-        innerLo: input.innerMm === null ? null : input.innerMm - w,
-        innerHi: input.innerMm === null ? null : input.innerMm + w,
+        innerLo: inner - (input.innerMm === null ? 0 : w),
+        innerHi: inner + (input.innerMm === null ? 0 : w),
         outerLo: input.outerMm - w,
         outerHi: input.outerMm + w,
-        limit: input.limit ?? 12,
+        read: limit * 2,
       },
       type: QueryTypes.SELECT,
     },
   );
-  return rows.map((r) => ({
-    id: r.id,
-    maker: r.maker,
-    number: r.number,
-    description: r.description,
-    innerMm: r.inner_mm,
-    outerMm: r.outer_mm,
-    widthMm: r.width_mm,
-  }));
+  const distance = (r: { inner_mm: number | null; outer_mm: number }) =>
+    Math.hypot((r.inner_mm ?? 0) - inner, r.outer_mm - input.outerMm);
+  return rows
+    .map((r) => ({ r, d: distance(r) }))
+    .sort((a, b) => a.d - b.d || (a.r.number < b.r.number ? -1 : a.r.number > b.r.number ? 1 : 0))
+    .slice(0, limit)
+    .map(({ r }) => ({
+      id: r.id,
+      maker: r.maker,
+      number: r.number,
+      description: r.description,
+      innerMm: r.inner_mm,
+      outerMm: r.outer_mm,
+      widthMm: r.width_mm,
+    }));
 }

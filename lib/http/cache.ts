@@ -1,8 +1,10 @@
 import { createHash } from "node:crypto";
 import { readFileSync } from "node:fs";
 import path from "node:path";
+import { Client } from "pg";
 import { QueryTypes } from "sequelize";
 import { sequelize } from "@/db/sequelize";
+import { env } from "@/lib/env";
 
 /**
  * Caching a CDN (and the browser) can use, for the answers that are the same for everyone: the catalogue's parts and
@@ -26,11 +28,55 @@ function buildId(): string {
   return build;
 }
 
-export async function catalogueVersion(): Promise<string> {
+async function readVersion(): Promise<string> {
   const [row] = await sequelize.query<{ version: string }>("SELECT version FROM catalogue_version WHERE id = 1", {
     type: QueryTypes.SELECT,
   });
-  return row?.version ?? "0";
+  return String(row?.version ?? "0");
+}
+
+/**
+ * The catalogue's version as this server last heard it: one connection listens for the version announced at each
+ * commit (migration 0016), so a request costs no query. While that connection is not up (starting, or lost with the
+ * database), the version is read with each request instead, and the listener tries again a second later.
+ */
+let heard: string | undefined;
+let listening = false;
+
+function listen(): void {
+  if (listening) return;
+  listening = true;
+  const client = new Client({ connectionString: env.DATABASE_URL });
+  const lost = () => {
+    heard = undefined;
+    client.removeAllListeners();
+    client.on("error", () => undefined);
+    void client.end().catch(() => undefined);
+    setTimeout(() => {
+      listening = false;
+    }, 1_000).unref();
+  };
+  client.on("error", lost);
+  client.on("end", lost);
+  client.on("notification", (message) => {
+    if (message.channel === "catalogue_version" && message.payload) heard = message.payload;
+  });
+  void (async () => {
+    try {
+      await client.connect();
+      await client.query("LISTEN catalogue_version");
+      // Read after listening, so that no change falls between the two.
+      const { rows } = await client.query<{ version: string }>("SELECT version FROM catalogue_version WHERE id = 1");
+      heard ??= String(rows[0]?.version ?? "0");
+    } catch {
+      lost();
+    }
+  })();
+}
+
+export async function catalogueVersion(): Promise<string> {
+  listen();
+  return heard ?? readVersion();
 }
 
 export const CACHE_CONTROL = {

@@ -2,6 +2,7 @@ import { Op } from "sequelize";
 import { afterAll, describe, expect, it } from "vitest";
 import { Cross, OriginalPart, sequelize } from "@/db";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
+import { findPartsBySize } from "@/lib/catalogue/find-by-size";
 import { send } from "../helpers/api";
 
 afterAll(() => sequelize.close());
@@ -166,5 +167,39 @@ describe("measured-size search in the catalogue", () => {
     const seal = await OriginalPart.findOne({ where: { category: "lip_seal" }, order: [["id", "ASC"]] });
     const { body } = await get(`/api/seals/match?shaft=${seal!.innerMm}&bore=${seal!.outerMm}&unit=mm`);
     expect(body.catalogueParts.map((p: { id: number }) => p.id)).toContain(seal!.id);
+  });
+
+  it("lists the nearest sizes first, only those within the window, and only of the kind asked for", async () => {
+    const found = await findPartsBySize({ category: "bearing", innerMm: 25.1, outerMm: 51.9, toleranceMm: 0.1 });
+    expect(found.length).toBeGreaterThan(0);
+    const distance = (p: { innerMm: number | null; outerMm: number }) =>
+      Math.hypot((p.innerMm ?? 0) - 25.1, p.outerMm - 51.9);
+    for (const p of found) {
+      expect(Math.abs((p.innerMm ?? 0) - 25.1)).toBeLessThanOrEqual(0.3 + 1e-9);
+      expect(Math.abs(p.outerMm - 51.9)).toBeLessThanOrEqual(0.3 + 1e-9);
+    }
+    const distances = found.map(distance);
+    expect(distances).toEqual([...distances].sort((a, b) => a - b));
+    const ids = found.map((p) => p.id);
+    const kinds = await OriginalPart.findAll({ where: { id: ids }, attributes: ["category"] });
+    expect(new Set(kinds.map((k) => k.category))).toEqual(new Set(["bearing"]));
+  });
+
+  it("is answered by the nearest-size index in distance order, with no sort of the window", async () => {
+    const [[{ "QUERY PLAN": plan }]] = (await sequelize.transaction(async (transaction) => {
+      // The demo catalogue is small enough for a plain scan to win; the plan asked for is the one a large one gets.
+      await sequelize.query("SET LOCAL enable_seqscan = off", { transaction });
+      return sequelize.query(
+        `EXPLAIN (FORMAT JSON) SELECT id FROM original_parts p
+         WHERE p.outer_mm IS NOT NULL AND p.category = 'bearing'
+           AND point(coalesce(p.inner_mm, 0)::float8, p.outer_mm::float8) <@ box(point(24.8, 51.6), point(25.4, 52.2))
+         ORDER BY point(coalesce(p.inner_mm, 0)::float8, p.outer_mm::float8) <-> point(25.1, 51.9) LIMIT 12`,
+        { transaction },
+      );
+    })) as unknown as [[{ "QUERY PLAN": unknown }]];
+    const text = JSON.stringify(plan);
+    expect(text).toContain("original_parts_nearest_size");
+    expect(text).toContain('"Order By"');
+    expect(text).not.toContain('"Node Type":"Sort"');
   });
 });
