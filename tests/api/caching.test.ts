@@ -54,7 +54,7 @@ describe("answers a CDN may keep", () => {
     expect((await get("/api/parts/lookup?q=CV-3003-A", found.headers.etag)).status).toBe(200);
   });
 
-  it("raises the catalogue's version once per committed change, never before the commit, never for a rollback", async () => {
+  it("raises the catalogue's version once per committed change, not before the commit, not on a rollback", async () => {
     const before = BigInt(await version());
     await sequelize.transaction(async (transaction) => {
       await sequelize.query("UPDATE makers SET name = name", { transaction });
