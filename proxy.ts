@@ -3,6 +3,7 @@ import { SESSION_COOKIE, SESSION_COOKIE_ATTRIBUTES, SESSION_DAYS } from "@/lib/a
 import { env, isNextDev } from "@/lib/env";
 import { contentSecurityPolicy, photoStoreOrigin } from "@/lib/http/csp";
 import { isOwnOrigin, MAX_BODY_BYTES } from "@/lib/http/origin";
+import { WROTE_COOKIE, WROTE_SECONDS } from "@/lib/http/read-own-writes";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -49,7 +50,11 @@ export function proxy(request: NextRequest) {
         { status: 403 },
       );
     }
-    return NextResponse.next();
+    const response = NextResponse.next();
+    // With read replicas, this browser reads from the primary for the next few seconds: it sees its own change.
+    if (env.DATABASE_READ_URLS.length > 0)
+      response.cookies.set(WROTE_COOKIE, "1", { ...SESSION_COOKIE_ATTRIBUTES, maxAge: WROTE_SECONDS });
+    return response;
   }
 
   // A fresh nonce for every page: Next reads it from the request's policy and puts it on its own scripts.

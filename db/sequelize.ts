@@ -1,10 +1,24 @@
 import pg from "pg";
 import { Sequelize } from "sequelize";
 import { env } from "@/lib/env";
+import { justWrote } from "@/lib/http/read-own-writes";
+
+/** A connection's settings from its URL, for Sequelize's replication entries. */
+function connectionOf(url: string) {
+  const u = new URL(url);
+  return {
+    host: u.hostname,
+    port: Number(u.port || 5432),
+    username: decodeURIComponent(u.username),
+    password: decodeURIComponent(u.password),
+    database: decodeURIComponent(u.pathname.slice(1)),
+  };
+}
 
 export function createSequelize(
   databaseUrl: string,
   pool = { max: env.DB_POOL_MAX, acquire: env.DB_POOL_ACQUIRE_MS },
+  readUrls: string[] = [],
 ): Sequelize {
   return new Sequelize(databaseUrl, {
     dialect: "postgres",
@@ -15,7 +29,21 @@ export function createSequelize(
     // or a dozen concurrent requests each holding one and waiting for another would exhaust the pool.
     pool: { max: pool.max, min: 0, idle: 10_000, acquire: pool.acquire },
     define: { underscored: true },
+    // Sequelize's own replication: reads outside a transaction go to a replica in turn; writes and everything in a
+    // transaction go to the primary.
+    ...(readUrls.length > 0
+      ? { replication: { read: readUrls.map(connectionOf), write: connectionOf(databaseUrl) } }
+      : {}),
     hooks: {
+      // A browser that has just written reads from the primary for a few seconds (lib/http/read-own-writes.ts).
+      ...(readUrls.length > 0
+        ? {
+            beforePoolAcquire: async (options: { type?: string; useMaster?: boolean } | undefined) => {
+              if (options && options.type === "SELECT" && !options.useMaster && (await justWrote()))
+                options.useMaster = true;
+            },
+          }
+        : {}),
       // Look-up's similar-number search uses pg_trgm's % operator; its threshold is set once per pooled connection
       // rather than in a transaction around every search.
       afterConnect: async (connection) => {
@@ -28,5 +56,7 @@ export function createSequelize(
 const globalForDb = globalThis as unknown as { understudySequelize?: Sequelize };
 
 /** The one shared connection pool; kept on globalThis so hot reloads in development reuse it. */
-export const sequelize: Sequelize = globalForDb.understudySequelize ?? createSequelize(env.DATABASE_URL);
+export const sequelize: Sequelize =
+  globalForDb.understudySequelize ??
+  createSequelize(env.DATABASE_URL, { max: env.DB_POOL_MAX, acquire: env.DB_POOL_ACQUIRE_MS }, env.DATABASE_READ_URLS);
 globalForDb.understudySequelize = sequelize;

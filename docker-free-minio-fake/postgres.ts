@@ -258,8 +258,44 @@ export class PostgresCluster {
     }
   }
 
+  /**
+   * A streaming read replica of this cluster, as a managed PostgreSQL's replica would be: a base backup taken with
+   * `pg_basebackup -R` into `dir` (thrown away first), started on `port` in standby mode. It follows every change
+   * the primary commits. Returns the replica's address, and its stop.
+   */
+  async startReplica(dir: string, port: number): Promise<{ url: string; stop: () => void }> {
+    const target = path.resolve(dir);
+    const replicaSockets = path.join(path.dirname(target), "pg-replica-socket");
+    rmSync(target, { recursive: true, force: true });
+    mkdirSync(path.dirname(target), { recursive: true });
+    mkdirSync(replicaSockets, { recursive: true });
+    giveToOwner(path.dirname(target));
+    giveToOwner(replicaSockets);
+    const backup = runAsOwner(
+      this.bin("pg_basebackup"),
+      ["-D", target, "-R", "-X", "stream", "-h", "127.0.0.1", "-p", String(this.conn.port), "-U", this.conn.user],
+      { env: { ...process.env, PGPASSWORD: this.conn.password } },
+    );
+    if (backup.status !== 0) throw new ClusterError(`pg_basebackup failed:\n${backup.stderr || backup.stdout}`);
+    const log = path.join(path.dirname(target), "replica.log");
+    writeFileSync(log, "");
+    giveToOwner(log);
+    const options = `-c listen_addresses=127.0.0.1 -p ${port} -k ${replicaSockets}`;
+    const started = runAsOwner(this.bin("pg_ctl"), ["start", "-D", target, "-l", log, "-w", "-t", "60", "-o", options]);
+    if (started.status !== 0) throw new ClusterError(`The replica did not start (see ${log})`);
+    this.log(`PostgreSQL read replica (streaming from ${this.conn.port}) on 127.0.0.1:${port}`);
+    const url = new URL(`postgres://127.0.0.1:${port}/${this.conn.database}`);
+    url.username = this.conn.user;
+    url.password = this.conn.password;
+    return {
+      url: url.toString(),
+      stop: () => void runAsOwner(this.bin("pg_ctl"), ["stop", "-D", target, "-m", "fast", "-w"]),
+    };
+  }
+
   /** Stops the server if this process started it (or always, with force). */
   stop(force = false): void {
+    if (force) this.binDir ||= ensurePostgresInstalled(this.log);
     if (!this.binDir || (!this.startedHere && !force) || !this.isRunning()) return;
     runAsOwner(this.bin("pg_ctl"), ["stop", "-D", this.dir, "-m", "fast", "-w"]);
     this.startedHere = false;

@@ -72,6 +72,9 @@ const testSettings: Record<string, string> = {
   DB_POOL_ACQUIRE_MS: "8000",
 };
 
+/** The port of the tests' read replica (the primary is 54339). */
+const TEST_REPLICA_PORT = 54340;
+
 // The benchmark keeps its own cluster between runs: loading the synthetic catalogue takes minutes.
 const benchSettings: Record<string, string> = {
   ...testSettings,
@@ -195,16 +198,17 @@ async function main(): Promise<number> {
     const { ensureChromium } = await import("../tests/helpers/chromium");
     ensureChromium((m) => console.log(`[understudy] ${m}`));
     // A leftover test cluster from an interrupted run is stopped and thrown away.
-    if (existsSync(env.PG_CLUSTER_DIR))
-      new PostgresCluster({ dir: env.PG_CLUSTER_DIR, databaseUrl: env.DATABASE_URL, log }).stop(true);
+    for (const dir of [path.join(dataDir, "replica"), env.PG_CLUSTER_DIR])
+      if (existsSync(dir)) new PostgresCluster({ dir, databaseUrl: env.DATABASE_URL, log }).stop(true);
     rmSync(dataDir, { recursive: true, force: true });
   }
   mkdirSync(dataDir, { recursive: true });
 
+  let cluster: PostgresCluster | undefined;
   if (isLocal(env.DATABASE_URL)) {
-    const cluster = new PostgresCluster({ dir: env.PG_CLUSTER_DIR, databaseUrl: env.DATABASE_URL, log });
+    cluster = new PostgresCluster({ dir: env.PG_CLUSTER_DIR, databaseUrl: env.DATABASE_URL, log });
     await cluster.start();
-    cleanups.push(() => cluster.stop());
+    cleanups.push(() => cluster?.stop());
   }
   if (env.S3_ENDPOINT && isLocal(env.S3_ENDPOINT)) {
     const s3 = await startS3Fake({ port: Number(new URL(env.S3_ENDPOINT).port), directory: env.S3_FAKE_DIR });
@@ -238,6 +242,13 @@ async function main(): Promise<number> {
     await seedDemoCatalogue(log);
     const { seedDemoLists } = await import("@/db/seeders/lists");
     await seedDemoLists(log);
+  }
+  // The tests' streaming read replica, taken after the demo data is in; tests/integration/replica.test.ts runs an
+  // app server that reads from it (DATABASE_READ_URLS). The server the other tests use reads from the primary.
+  if (mode === "test" && cluster) {
+    const replica = await cluster.startReplica(path.join(dataDir, "replica"), TEST_REPLICA_PORT);
+    process.env.TEST_REPLICA_URL = replica.url;
+    cleanups.push(() => replica.stop());
   }
   if (benchLike) {
     const { OriginalPart } = await import("@/db");

@@ -75,6 +75,9 @@ function listen(): void {
 }
 
 export async function catalogueVersion(): Promise<string> {
+  // With read replicas the version is read where the answer's data is read (a replica, or the primary for a browser
+  // that has just written), so that an ETag never names data the replica does not have yet.
+  if (env.DATABASE_READ_URLS.length > 0) return readVersion();
   listen();
   return heard ?? readVersion();
 }
