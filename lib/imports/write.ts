@@ -1,5 +1,9 @@
-import type { CreationAttributes, Transaction } from "sequelize";
-import { Cross, Maker, OriginalPart, PartUsage, Proposal, sequelize, StandardPart } from "@/db";
+import { Readable } from "node:stream";
+import { pipeline } from "node:stream/promises";
+import type pg from "pg";
+import { from as copyFrom } from "pg-copy-streams";
+import { QueryTypes, type CreationAttributes, type Transaction } from "sequelize";
+import { Cross, Maker, OriginalPart, Proposal, sequelize, StandardPart } from "@/db";
 import type { CatalogueNames } from "@/lib/imports/classify";
 import type { ChunkPlan, PlanMemory } from "@/lib/imports/plan";
 
@@ -48,23 +52,28 @@ export const catalogueWriter: ChunkWriter = {
       await Cross.update(u.diff, { where: { id: u.id }, ...t });
       changes.push({ line: u.line, table: "crosses", id: u.id, action: "update", before: u.before });
     }
-    const crosses = await Cross.bulkCreate(
-      plan.newCrosses.map((c) => ({
-        originalPartId: ref(c.partRef),
-        standardPartId: ref(c.standardRef),
-        repairMethod: null,
-        fit: c.fit as CreationAttributes<Cross>["fit"],
-        notes: c.notes,
-        status: "approved" as const,
-        origin: "import" as const,
-        createdBy: context.userId,
-      })),
-      { ...t, returning: true },
+    const crossIds = await takeIds(context.transaction, "crosses_id_seq", plan.newCrosses.length);
+    const now = new Date().toISOString();
+    await copyRows(
+      context.transaction,
+      "crosses",
+      ["id", "original_part_id", "standard_part_id", "fit", "notes", "status", "origin", "created_by"],
+      plan.newCrosses.map((c, i) => [
+        crossIds[i],
+        ref(c.partRef),
+        ref(c.standardRef),
+        c.fit,
+        c.notes,
+        "approved",
+        "import",
+        context.userId,
+      ]),
+      now,
     );
     inserted(
       "crosses",
       plan.newCrosses.map((c) => c.line),
-      crosses.map((c) => c.id),
+      crossIds,
     );
     const proposals = await Proposal.bulkCreate(
       plan.newProposals.map((p) => ({
@@ -129,7 +138,7 @@ async function writeMakersAndStandards(
   );
 }
 
-/** New parts in one statement, then where they are used; later chunks see the parts under their real ids. */
+/** New parts with one COPY, then where they are used; later chunks see the parts under their real ids. */
 async function writeParts(
   plan: ChunkPlan,
   context: WriteContext,
@@ -137,53 +146,132 @@ async function writeParts(
   ref: (id: number) => number,
   inserted: (table: string, lines: number[], ids: number[]) => void,
 ): Promise<void> {
-  const t = { transaction: context.transaction };
-  const parts = await OriginalPart.bulkCreate(
-    plan.newParts.map((p) => ({
-      ...(p.values as unknown as CreationAttributes<OriginalPart>),
-      makerId: ref(p.makerRef),
-    })),
-    { ...t, returning: true },
+  const partIds = await takeIds(context.transaction, "original_parts_id_seq", plan.newParts.length);
+  const now = new Date().toISOString();
+  await copyRows(
+    context.transaction,
+    "original_parts",
+    [
+      "id",
+      "maker_id",
+      "number",
+      "number_normalised",
+      "number_key",
+      "description",
+      "category",
+      "inner_mm",
+      "outer_mm",
+      "width_mm",
+      "length_mm",
+      "dimensions_note",
+    ],
+    plan.newParts.map(({ values: v, makerRef }, i) => [
+      partIds[i],
+      ref(makerRef),
+      v.number,
+      v.numberNormalised,
+      v.numberKey,
+      v.description,
+      v.category,
+      v.innerMm,
+      v.outerMm,
+      v.widthMm,
+      v.lengthMm,
+      v.dimensionsNote,
+    ]),
+    now,
   );
-  parts.forEach((row, i) => {
-    real.set(plan.newParts[i].placeholder, row.id);
-    context.memory.parts.set(plan.newParts[i].key, row.id);
+  plan.newParts.forEach((planned, i) => {
+    real.set(planned.placeholder, partIds[i]);
+    context.memory.parts.set(planned.key, partIds[i]);
   });
   inserted(
     "original_parts",
     plan.newParts.map((p) => p.line),
-    parts.map((p) => p.id),
+    partIds,
   );
   const used = plan.newParts.filter((p) => p.usage);
-  const usages = await PartUsage.bulkCreate(
-    used.map((p) => ({
-      partId: ref(p.placeholder),
-      ...p.usage!,
-      quantity: 1,
-      serialNote: null,
-      position: String(p.values.description),
-    })),
-    { ...t, returning: true },
+  const usageIds = await takeIds(context.transaction, "part_usages_id_seq", used.length);
+  await copyRows(
+    context.transaction,
+    "part_usages",
+    ["id", "part_id", "machine_id", "assembly_id", "quantity", "serial_note", "position"],
+    used.map((p, i) => [
+      usageIds[i],
+      ref(p.placeholder),
+      p.usage!.machineId,
+      p.usage!.assemblyId,
+      1,
+      null,
+      String(p.values.description),
+    ]),
+    now,
   );
   inserted(
     "part_usages",
     used.map((p) => p.line),
-    usages.map((u) => u.id),
+    usageIds,
   );
 }
 
+/**
+ * Ids for `count` new rows of a table, taken from its sequence in one statement, so that rows loaded by COPY are
+ * known by id at once (for the rows that name them, and the change log).
+ */
+export async function takeIds(transaction: Transaction, sequence: string, count: number): Promise<number[]> {
+  if (count === 0) return [];
+  const rows = await sequelize.query<{ id: number }>(
+    `SELECT nextval('${sequence}')::int AS id FROM generate_series(1, :count)`,
+    { replacements: { count }, transaction, type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => r.id);
+}
+
+/** One value in COPY's text format: \N for null, and backslash, tab and line breaks escaped. */
+function copyValue(value: unknown): string {
+  if (value === null || value === undefined) return "\\N";
+  const text = typeof value === "object" ? JSON.stringify(value) : String(value);
+  return text.replace(/\\/g, "\\\\").replace(/\t/g, "\\t").replace(/\n/g, "\\n").replace(/\r/g, "\\r");
+}
+
+/** Lines of COPY text in blocks of about 64 KB, so that the stream is not written a row at a time. */
+function* copyBlocks(rows: unknown[][], stamp: string | null): Generator<string> {
+  let block = "";
+  for (const row of rows) {
+    const values = stamp === null ? row : [...row, stamp, stamp];
+    block += `${values.map(copyValue).join("\t")}\n`;
+    if (block.length > 65_536) {
+      yield block;
+      block = "";
+    }
+  }
+  if (block) yield block;
+}
+
+/**
+ * Rows loaded with PostgreSQL's COPY (pg-copy-streams) on the commit's own connection, so inside its transaction:
+ * the constraints and triggers of the table apply as to an INSERT. `stamp` fills created_at and updated_at.
+ */
+export async function copyRows(
+  transaction: Transaction,
+  table: string,
+  columns: string[],
+  rows: unknown[][],
+  stamp: string | null,
+): Promise<void> {
+  if (rows.length === 0) return;
+  const client = (transaction as unknown as { connection: pg.PoolClient }).connection;
+  const all = stamp === null ? columns : [...columns, "created_at", "updated_at"];
+  const sink = client.query(copyFrom(`COPY ${table} (${all.join(", ")}) FROM STDIN`));
+  await pipeline(Readable.from(copyBlocks(rows, stamp)), sink);
+}
+
 async function recordChanges(changes: Change[], context: WriteContext): Promise<void> {
-  if (changes.length === 0) return;
-  await sequelize.getQueryInterface().bulkInsert(
+  await copyRows(
+    context.transaction,
     "import_changes",
-    changes.map((c) => ({
-      import_id: context.importId,
-      line: c.line,
-      table_name: c.table,
-      record_id: c.id,
-      action: c.action,
-      before: c.before ? JSON.stringify(c.before) : null,
-    })),
-    { transaction: context.transaction },
+    ["import_id", "line", "table_name", "record_id", "action", "before"],
+    changes.map((c) => [context.importId, c.line, c.table, c.id, c.action, c.before]),
+    null,
   );
 }
