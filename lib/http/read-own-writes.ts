@@ -17,3 +17,12 @@ export async function justWrote(): Promise<boolean> {
     return false;
   }
 }
+
+/**
+ * The cookie's Set-Cookie value, for a route that writes without passing through the proxy (the import upload);
+ * null when there are no replicas to read from.
+ */
+export function wroteCookieHeader(replicas: number, secure: boolean): string | null {
+  if (replicas === 0) return null;
+  return `${WROTE_COOKIE}=1; Path=/; Max-Age=${WROTE_SECONDS}; HttpOnly; SameSite=Lax${secure ? "; Secure" : ""}`;
+}
