@@ -14,6 +14,7 @@ import * as smallParts from "@/db/migrations/0013-small-parts";
 import * as catalogueVersion from "@/db/migrations/0014-catalogue-version";
 import * as nearestSizeIndex from "@/db/migrations/0015-nearest-size-index";
 import * as catalogueVersionNotice from "@/db/migrations/0016-catalogue-version-notice";
+import * as numberVariants from "@/db/migrations/0017-number-variants";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -33,4 +34,5 @@ export const migrations = [
   { name: "0014-catalogue-version", ...catalogueVersion },
   { name: "0015-nearest-size-index", ...nearestSizeIndex },
   { name: "0016-catalogue-version-notice", ...catalogueVersionNotice },
+  { name: "0017-number-variants", ...numberVariants },
 ];

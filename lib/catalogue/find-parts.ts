@@ -148,9 +148,11 @@ export async function lookUpParts(
   }
   const hit = found.size > 0;
   for (const row of numberRows) add(row, "prefix", typed.stripped.length / Math.max(row.number_normalised.length, 1));
-  if (hit && typed.key.length >= 4) {
-    for (const row of await findOneEditAway(typed)) add(row, "similar", 1 - row.distance / typed.key.length);
-  } else if (!hit && found.size < options.limit && typed.key.length >= 3) {
+  // Similar numbers: those one edit away, after a hit too (one wrong digit may be another real number); with no hit
+  // and none one edit away, trigram search casts the wider net.
+  const oneEdit = typed.key.length >= 4 && (hit || found.size < options.limit) ? await findOneEditAway(typed) : [];
+  for (const row of oneEdit) add(row, "similar", 1 - row.distance / typed.key.length);
+  if (!hit && oneEdit.length === 0 && found.size < options.limit && typed.key.length >= 3) {
     for (const { row, closeness } of await findSimilar(typed)) add(row, "similar", closeness);
   }
   const topRank = Math.max(...wordRows.map((r) => r.rank), 0) || 1;
@@ -209,28 +211,29 @@ function findWords(typed: Typed, tsquery: string): Promise<Array<PartRow & { ran
 }
 
 /**
- * After a hit, the numbers one character away (two for long ones): they share the first or the last half of the
- * number exactly, which the prefix and reversed-number indexes find quickly; `levenshtein()` keeps the near ones.
+ * The numbers one edit away (a character missing, extra or different; for long numbers two, or two swapped):
+ * they share one of the typed key's forms (itself, or itself less one character) in the side table of every stored
+ * key's forms (migration 0017), found by equality in a handful of index probes; `levenshtein()` keeps the near ones.
  */
 function findOneEditAway(typed: Typed): Promise<Array<PartRow & { distance: number }>> {
   const { key } = typed;
-  const half = Math.floor(key.length / 2);
   return sequelize.query<PartRow & { distance: number }>(
     `SELECT ${COLUMNS}, levenshtein(p.number_key, :key) AS distance ${FROM}
-     WHERE (p.number_key LIKE :head OR reverse(p.number_key) LIKE :tail)
+     WHERE p.id IN (SELECT v.part_id FROM number_variants v WHERE v.variant IN (:forms))
        AND levenshtein(p.number_key, :key) BETWEEN 1 AND :allowed ${makerFilter(typed)}
      ORDER BY levenshtein(p.number_key, :key), p.number_key LIMIT 60`,
     {
-      replacements: {
-        key,
-        head: `${key.slice(0, half)}%`,
-        tail: `${[...key.slice(half)].reverse().join("")}%`,
-        allowed: key.length >= 8 ? 2 : 1,
-        makerId: typed.makerId,
-      },
+      replacements: { key, forms: numberForms(key), allowed: key.length >= 8 ? 2 : 1, makerId: typed.makerId },
       type: QueryTypes.SELECT,
     },
   );
+}
+
+/** A key and each form of it with one character left out: as number_forms() in the database (migration 0017). */
+export function numberForms(key: string): string[] {
+  const forms = new Set([key]);
+  for (let i = 0; i < key.length; i += 1) forms.add(key.slice(0, i) + key.slice(i + 1));
+  return [...forms];
 }
 
 /** With no hit: trigram candidates from PostgreSQL, ranked by fuse.js. */

@@ -1,8 +1,9 @@
-import { Op } from "sequelize";
+import { Op, QueryTypes, type Transaction } from "sequelize";
 import { afterAll, describe, expect, it } from "vitest";
 import { Cross, OriginalPart, sequelize } from "@/db";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { findPartsBySize } from "@/lib/catalogue/find-by-size";
+import { numberForms } from "@/lib/catalogue/find-parts";
 import { send } from "../helpers/api";
 
 afterAll(() => sequelize.close());
@@ -201,5 +202,44 @@ describe("measured-size search in the catalogue", () => {
     expect(text).toContain("original_parts_nearest_size");
     expect(text).toContain('"Order By"');
     expect(text).not.toContain('"Node Type":"Sort"');
+  });
+});
+
+describe("the forms of each number, for similar numbers", () => {
+  const formsOf = async (id: number, transaction?: Transaction) =>
+    (
+      await sequelize.query<{ variant: string }>("SELECT variant FROM number_variants WHERE part_id = :id", {
+        replacements: { id },
+        type: QueryTypes.SELECT,
+        transaction,
+      })
+    )
+      .map((r) => r.variant)
+      .sort();
+
+  it("holds each part's key and the key less each one character, and follows a change of number", async () => {
+    const part = await OriginalPart.findOne({ where: { number: "CV-3003-A" } });
+    expect(await formsOf(part!.id)).toEqual(numberForms(part!.numberKey).sort());
+    await sequelize
+      .transaction(async (transaction) => {
+        await sequelize.query("UPDATE original_parts SET number_key = 'ZX417' WHERE id = :id", {
+          replacements: { id: part!.id },
+          transaction,
+        });
+        expect(await formsOf(part!.id, transaction)).toEqual(["X417", "ZX17", "ZX41", "ZX47", "ZX417", "Z417"].sort());
+        throw new Error("undone");
+      })
+      .catch(() => undefined);
+    expect(await formsOf(part!.id)).toEqual(numberForms(part!.numberKey).sort());
+  });
+
+  it("finds a number typed with a digit missing or one extra", async () => {
+    for (const typed of ["CV-303-A", "CV-30003-A"]) {
+      const { body } = await lookup(typed);
+      expect(
+        body.results.map((r: { number: string }) => r.number),
+        typed,
+      ).toContain("CV-3003-A");
+    }
   });
 });
