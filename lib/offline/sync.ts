@@ -36,8 +36,17 @@ const currentList = (listId: number): Promise<ListView | null> =>
  * keeping the rest, at the first change that finds no connection.
  */
 export function sendQueued(listId: number): Promise<SendOutcome> {
-  // One sending at a time for a list, however many times the connection comes back.
-  const running = sending.get(listId) ?? send(listId).finally(() => sending.delete(listId));
+  // One sending at a time for a list, however many times the connection comes back, and across the tabs open on
+  // it (a Web Lock where the browser has them), so that no queued line is added twice.
+  const locked = async (): Promise<SendOutcome> => {
+    if (typeof navigator === "undefined" || !navigator.locks) return send(listId);
+    let outcome: SendOutcome | undefined;
+    await navigator.locks.request(`understudy-list-${listId}`, async () => {
+      outcome = await send(listId);
+    });
+    return outcome as SendOutcome;
+  };
+  const running = sending.get(listId) ?? locked().finally(() => sending.delete(listId));
   sending.set(listId, running);
   return running;
 }
