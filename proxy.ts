@@ -3,7 +3,7 @@ import { SESSION_COOKIE, SESSION_COOKIE_ATTRIBUTES, SESSION_DAYS } from "@/lib/a
 import { env, isNextDev } from "@/lib/env";
 import { contentSecurityPolicy, photoStoreOrigin } from "@/lib/http/csp";
 import { isOwnOrigin, MAX_BODY_BYTES } from "@/lib/http/origin";
-import { WROTE_COOKIE, WROTE_SECONDS } from "@/lib/http/read-own-writes";
+import { WROTE_COOKIE, WROTE_COOKIE_ATTRIBUTES } from "@/lib/http/read-own-writes";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -52,8 +52,7 @@ export function proxy(request: NextRequest) {
     }
     const response = NextResponse.next();
     // With read replicas, this browser reads from the primary for the next few seconds: it sees its own change.
-    if (env.DATABASE_READ_URLS.length > 0)
-      response.cookies.set(WROTE_COOKIE, "1", { ...SESSION_COOKIE_ATTRIBUTES, maxAge: WROTE_SECONDS });
+    if (env.DATABASE_READ_URLS.length > 0) response.cookies.set(WROTE_COOKIE, "1", WROTE_COOKIE_ATTRIBUTES);
     return response;
   }
 

@@ -28,8 +28,10 @@ function buildId(): string {
   return build;
 }
 
+const VERSION_SQL = "SELECT version FROM catalogue_version WHERE id = 1";
+
 async function readVersion(): Promise<string> {
-  const [row] = await sequelize.query<{ version: string }>("SELECT version FROM catalogue_version WHERE id = 1", {
+  const [row] = await sequelize.query<{ version: string }>(VERSION_SQL, {
     type: QueryTypes.SELECT,
   });
   return String(row?.version ?? "0");
@@ -66,7 +68,7 @@ function listen(): void {
       await client.connect();
       await client.query("LISTEN catalogue_version");
       // Read after listening, so that no change falls between the two.
-      const { rows } = await client.query<{ version: string }>("SELECT version FROM catalogue_version WHERE id = 1");
+      const { rows } = await client.query<{ version: string }>(VERSION_SQL);
       heard ??= String(rows[0]?.version ?? "0");
     } catch {
       lost();

@@ -1,6 +1,6 @@
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { APP_URL, send, uniqueAddress, uniqueEmail } from "../helpers/api";
+import { APP_URL, send, sessionCookie, uniqueAddress, uniqueEmail } from "../helpers/api";
 import { startSecondServer } from "../helpers/second-server";
 
 // Two app servers over one database and one photo store, as behind a load balancer with no sticky sessions: what
@@ -23,12 +23,6 @@ function toB(method: "get" | "post" | "delete", path: string, body?: unknown, co
   return body === undefined ? req : req.set("Content-Type", "application/json").send(body as object);
 }
 
-const cookieOf = (response: { headers: Record<string, unknown> }) =>
-  ([] as string[])
-    .concat((response.headers["set-cookie"] as string[] | string | undefined) ?? [])
-    .find((c) => c.startsWith("understudy_session="))!
-    .split(";")[0];
-
 describe("two app servers over one database", () => {
   it("knows a session begun on one server on the other, and ends it on both", async () => {
     const signedIn = await send("post", "/api/auth/sign-in", {
@@ -36,7 +30,7 @@ describe("two app servers over one database", () => {
       password: "understudy-demo",
     });
     expect(signedIn.status).toBe(200);
-    const cookie = cookieOf(signedIn);
+    const cookie = sessionCookie(signedIn);
     const me = await toB("get", "/api/auth/me", undefined, cookie);
     expect(me.status).toBe(200);
     expect(me.body.user.email).toBe("club.member6@understudy.test");
@@ -65,7 +59,7 @@ describe("two app servers over one database", () => {
       email: "club.member6@understudy.test",
       password: "understudy-demo",
     });
-    const cookie = cookieOf(signedIn);
+    const cookie = sessionCookie(signedIn);
     const made = await send("post", "/api/lists", { title: "Made on the first server" }, { cookie });
     expect(made.status).toBe(201);
     const added = await toB("post", `/api/lists/${made.body.id}/lines`, { number: "CV-3004-A", quantity: 2 }, cookie);
@@ -82,7 +76,7 @@ describe("two app servers over one database", () => {
       email: "admin@understudy.test",
       password: "understudy-demo",
     });
-    const cookie = cookieOf(signedIn);
+    const cookie = sessionCookie(signedIn);
     const stamp = Date.now() % 1_000_000;
     const csv = Buffer.from(
       [

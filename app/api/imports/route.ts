@@ -1,8 +1,9 @@
 import { after } from "next/server";
 import { requirePermission } from "@/lib/auth/session";
-import { env, isProduction } from "@/lib/env";
+import { cookies } from "next/headers";
+import { env } from "@/lib/env";
 import { handle } from "@/lib/http/handle";
-import { wroteCookieHeader } from "@/lib/http/read-own-writes";
+import { WROTE_COOKIE, WROTE_COOKIE_ATTRIBUTES } from "@/lib/http/read-own-writes";
 import { assertOwnOrigin, readUpload } from "@/lib/http/upload";
 import { dryRun, getImport, recentImports, startImport } from "@/lib/imports/imports";
 import { IMPORT_MAX_BYTES } from "@/lib/imports/kinds";
@@ -23,8 +24,8 @@ export const POST = handle(async (request) => {
   const id = await startImport(user, file, fields);
   after(() => dryRun(id));
   // This upload bypasses the proxy, so it says itself that the browser has just written (read replicas).
-  const wrote = wroteCookieHeader(env.DATABASE_READ_URLS.length, isProduction);
-  return Response.json(await getImport(user, id), { status: 202, headers: wrote ? { "Set-Cookie": wrote } : {} });
+  if (env.DATABASE_READ_URLS.length > 0) (await cookies()).set(WROTE_COOKIE, "1", WROTE_COOKIE_ATTRIBUTES);
+  return Response.json(await getImport(user, id), { status: 202 });
 });
 
 export const GET = handle(async () => {
