@@ -15,6 +15,7 @@ import * as catalogueVersion from "@/db/migrations/0014-catalogue-version";
 import * as nearestSizeIndex from "@/db/migrations/0015-nearest-size-index";
 import * as catalogueVersionNotice from "@/db/migrations/0016-catalogue-version-notice";
 import * as numberVariants from "@/db/migrations/0017-number-variants";
+import * as partSizes from "@/db/migrations/0018-part-sizes";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -35,4 +36,5 @@ export const migrations = [
   { name: "0015-nearest-size-index", ...nearestSizeIndex },
   { name: "0016-catalogue-version-notice", ...catalogueVersionNotice },
   { name: "0017-number-variants", ...numberVariants },
+  { name: "0018-part-sizes", ...partSizes },
 ];

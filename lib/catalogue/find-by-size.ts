@@ -1,4 +1,4 @@
-import { QueryTypes } from "sequelize";
+import { QueryTypes, type Transaction } from "sequelize";
 import { sequelize } from "@/db/sequelize";
 import type { PartCategory } from "@/lib/catalogue/kinds";
 
@@ -13,6 +13,33 @@ export interface SizedPart {
 }
 
 /**
+ * The nearest distinct sizes first, from the GiST index on `part_sizes` (migration 0018), inside the tolerance
+ * window's box; then, for each, its parts in number order through the btree on size and number. No size can
+ * give more than `limit` of the answer, so each is read only that far: the rows read are bounded by the limit,
+ * however many parts the catalogue holds of one size.
+ */
+export const NEAREST_SIZES_SQL = `
+  SELECT p.id, m.name AS maker, p.number, p.description, p.inner_mm, p.outer_mm, p.width_mm
+  FROM (
+    SELECT inner_mm, outer_mm, point(inner_mm, outer_mm) <-> point(:inner, :outer) AS distance
+    FROM part_sizes
+    WHERE category = :category
+      AND point(inner_mm, outer_mm) <@ box(point(:innerLo, :outerLo), point(:innerHi, :outerHi))
+    ORDER BY point(inner_mm, outer_mm) <-> point(:inner, :outer)
+    LIMIT :limit
+  ) s
+  CROSS JOIN LATERAL (
+    SELECT * FROM original_parts p
+    WHERE p.outer_mm IS NOT NULL AND p.category = :category
+      AND coalesce(p.inner_mm, 0)::float8 = s.inner_mm AND p.outer_mm::float8 = s.outer_mm
+    ORDER BY p.number COLLATE "C"
+    LIMIT :limit
+  ) p
+  JOIN makers m ON m.id = p.maker_id
+  ORDER BY s.distance, p.number COLLATE "C"
+  LIMIT :limit`;
+
+/**
  * Original parts whose documented inner and outer sizes lie within the window of a measurement, so a part with no
  * legible number can still be named. The window is three tolerances each way, as in the standard-size matching.
  */
@@ -23,6 +50,7 @@ export async function findPartsBySize(input: {
   outerMm: number;
   toleranceMm: number;
   limit?: number;
+  transaction?: Transaction;
 }): Promise<SizedPart[]> {
   const w = input.toleranceMm * 3;
   const inner = input.innerMm ?? 0;
@@ -35,45 +63,27 @@ export async function findPartsBySize(input: {
     inner_mm: number | null;
     outer_mm: number;
     width_mm: number | null;
-  }>(
-    // The nearest sizes first, straight from the GiST index (migration 0015): the box is the tolerance window, the
-    // order the distance from what was measured; the expressions are the index's own. A second sort key would make
-    // PostgreSQL read and sort the whole window, so parts of the same size are put in number order here, from
-    // twice as many rows as are shown.
-    `SELECT p.id, m.name AS maker, p.number, p.description, p.inner_mm, p.outer_mm, p.width_mm
-     FROM original_parts p JOIN makers m ON m.id = p.maker_id
-     WHERE p.outer_mm IS NOT NULL AND p.category = :category
-       AND point(coalesce(p.inner_mm, 0)::float8, p.outer_mm::float8)
-         <@ box(point(:innerLo, :outerLo), point(:innerHi, :outerHi))
-     ORDER BY point(coalesce(p.inner_mm, 0)::float8, p.outer_mm::float8) <-> point(:inner, :outer)
-     LIMIT :read`,
-    {
-      replacements: {
-        category: input.category,
-        inner,
-        outer: input.outerMm,
-        innerLo: inner - (input.innerMm === null ? 0 : w),
-        innerHi: inner + (input.innerMm === null ? 0 : w),
-        outerLo: input.outerMm - w,
-        outerHi: input.outerMm + w,
-        read: limit * 2,
-      },
-      type: QueryTypes.SELECT,
+  }>(NEAREST_SIZES_SQL, {
+    replacements: {
+      category: input.category,
+      inner,
+      outer: input.outerMm,
+      innerLo: inner - (input.innerMm === null ? 0 : w),
+      innerHi: inner + (input.innerMm === null ? 0 : w),
+      outerLo: input.outerMm - w,
+      outerHi: input.outerMm + w,
+      limit,
     },
-  );
-  const distance = (r: { inner_mm: number | null; outer_mm: number }) =>
-    Math.hypot((r.inner_mm ?? 0) - inner, r.outer_mm - input.outerMm);
-  return rows
-    .map((r) => ({ r, d: distance(r) }))
-    .sort((a, b) => a.d - b.d || (a.r.number < b.r.number ? -1 : a.r.number > b.r.number ? 1 : 0))
-    .slice(0, limit)
-    .map(({ r }) => ({
-      id: r.id,
-      maker: r.maker,
-      number: r.number,
-      description: r.description,
-      innerMm: r.inner_mm,
-      outerMm: r.outer_mm,
-      widthMm: r.width_mm,
-    }));
+    type: QueryTypes.SELECT,
+    transaction: input.transaction,
+  });
+  return rows.map((r) => ({
+    id: r.id,
+    maker: r.maker,
+    number: r.number,
+    description: r.description,
+    innerMm: r.inner_mm,
+    outerMm: r.outer_mm,
+    widthMm: r.width_mm,
+  }));
 }
