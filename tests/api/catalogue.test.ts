@@ -227,7 +227,8 @@ describe("measured-size search in the catalogue", () => {
         await q(
           `INSERT INTO original_parts (maker_id, number, number_normalised, number_key, category, description,
              inner_mm, outer_mm, created_at, updated_at)
-           SELECT :maker, 'SIZE-' || i, 'SIZE' || i, 'SIZE' || i, 'bearing', 'Size count check', 500, 977.5, now(), now()
+           SELECT :maker, 'SIZE-' || i, 'SIZE' || i, 'SIZE' || i, 'bearing', 'Size count check', 500, 977.5,
+             now(), now()
            FROM generate_series(1, 3) AS i`,
         );
         expect(await sizes(transaction)).toEqual([{ inner_mm: 500, outer_mm: 977.5, parts: 3 }]);
