@@ -1,10 +1,11 @@
 import Fuse from "fuse.js";
 import { QueryTypes } from "sequelize";
+import { runPrepared, type PreparedStatement } from "@/db/prepared";
 import { sequelize } from "@/db/sequelize";
 import type { Fit, PartCategory } from "@/lib/catalogue/kinds";
 import { lookAlikeKey, normaliseNumber } from "@/lib/catalogue/normalise";
-import { crossLabel, rankCrosses } from "@/lib/catalogue/ranking";
-import { latestNumbers } from "@/lib/catalogue/supersessions";
+import { crossLabel, crossRowsFrom, rankCrossRows, rankCrosses, type CrossRow } from "@/lib/catalogue/ranking";
+import { latestFrom, latestNumbers, walkFrom } from "@/lib/catalogue/supersessions";
 
 export type MatchedBy = "exact" | "normalised" | "misread" | "prefix" | "similar" | "words";
 
@@ -131,7 +132,10 @@ export async function lookUpParts(
   const typed = await readTyped(query, options.makerId ?? null);
   if (!typed) return [];
   const tsquery = WORDY.test(query) ? wordsQuery(query) : null;
-  const [numberRows, wordRows] = await Promise.all([findNumbers(typed), tsquery ? findWords(typed, tsquery) : []]);
+  const [numbers, wordRows] = await Promise.all([
+    findByNumber(typed, options.limit),
+    tsquery ? findWords(typed, tsquery) : [],
+  ]);
   const found: Found = new Map();
   const add = (row: PartRow, matchedBy: MatchedBy, within: number) => {
     if (found.has(row.id)) return;
@@ -142,22 +146,23 @@ export async function lookUpParts(
   };
   const asTyped = query.trim().toUpperCase();
   const isSame = (row: PartRow) => typed.forms.includes(row.number_normalised) || typed.keys.includes(row.number_key);
-  for (const row of numberRows.filter(isSame)) {
+  for (const row of numbers.numberRows.filter(isSame)) {
     const reformatted = typed.forms.includes(row.number_normalised) ? "normalised" : "misread";
     add(row, row.number.toUpperCase() === asTyped ? "exact" : reformatted, 1);
   }
   const hit = found.size > 0;
-  for (const row of numberRows) add(row, "prefix", typed.stripped.length / Math.max(row.number_normalised.length, 1));
+  for (const row of numbers.numberRows) {
+    add(row, "prefix", typed.stripped.length / Math.max(row.number_normalised.length, 1));
+  }
   // Similar numbers: those one edit away, after a hit too (one wrong digit may be another real number); with no hit
   // and none one edit away, trigram search casts the wider net.
-  const oneEdit = typed.key.length >= 4 && (hit || found.size < options.limit) ? await findOneEditAway(typed) : [];
-  for (const row of oneEdit) add(row, "similar", 1 - row.distance / typed.key.length);
-  if (!hit && oneEdit.length === 0 && found.size < options.limit && typed.key.length >= 3) {
+  for (const row of numbers.oneEdit) add(row, "similar", 1 - row.distance / typed.key.length);
+  if (!hit && numbers.oneEdit.length === 0 && found.size < options.limit && typed.key.length >= 3) {
     for (const { row, closeness } of await findSimilar(typed)) add(row, "similar", closeness);
   }
   const topRank = Math.max(...wordRows.map((r) => r.rank), 0) || 1;
   for (const row of wordRows) add(row, "words", row.rank / topRank);
-  return toResults(found, options.limit);
+  return toResults(found, options.limit, numbers.answers);
 }
 
 async function readTyped(query: string, makerId: number | null): Promise<Typed | null> {
@@ -180,25 +185,90 @@ async function readTyped(query: string, makerId: number | null): Promise<Typed |
   };
 }
 
-/** The number itself (exact, reformatted, look-alike) and the numbers that start with it, in one query. */
-function findNumbers(typed: Typed): Promise<PartRow[]> {
-  return sequelize.query<PartRow>(
-    `SELECT ${COLUMNS} ${FROM}
-     WHERE (p.number_normalised IN (:forms) OR p.number_key IN (:keys)
-            OR (:prefixes AND (p.number_normalised LIKE :like OR p.number_key LIKE :likeKey))) ${makerFilter(typed)}
-     ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200`,
-    {
-      replacements: {
-        forms: typed.forms,
-        keys: typed.keys,
-        prefixes: typed.stripped.length >= 2,
-        like: `${typed.stripped}%`,
-        likeKey: `${typed.key}%`,
-        makerId: typed.makerId,
-      },
-      type: QueryTypes.SELECT,
-    },
-  );
+/** What the number statement found: its rows, and the latest number and crosses of the likeliest of them. */
+interface NumberAnswer {
+  numberRows: PartRow[];
+  oneEdit: Array<PartRow & { distance: number }>;
+  answers: Map<number, { latest: string; crossRows: CrossRow[] }>;
+}
+
+/**
+ * The look-up's one statement, prepared once per connection: the number itself (exact, reformatted, look-alike) and
+ * the numbers that start with it; the numbers one edit away (a character missing, extra or different; for long
+ * numbers two, or two swapped), which share one of the typed key's forms (itself, or itself less one character) in
+ * the side table of every stored key's forms (migration 0017), found by equality in a handful of index probes and
+ * kept by `levenshtein()`; and, for the likeliest of them (same number, then the rest in the order the ranking will
+ * most likely give), their latest number and their crosses through the shared walk and ranking rows. The ranking
+ * itself stays in `lookUpParts`; a result it puts on show that was not among the likeliest has its answers read
+ * afterwards, so the order never depends on this guess.
+ */
+const NUMBER_STATEMENT: PreparedStatement = {
+  name: "look-up-by-number",
+  text: `WITH RECURSIVE
+    numbers AS (
+      SELECT ${COLUMNS}, 0 AS distance, 0 AS source,
+        row_number() OVER (ORDER BY length(p.number_normalised), p.number_normalised) AS place
+      ${FROM}
+      WHERE (p.number_normalised = ANY($1::text[]) OR p.number_key = ANY($2::text[])
+             OR ($3::boolean AND (p.number_normalised LIKE $4::text OR p.number_key LIKE $5::text)))
+        AND ($6::integer IS NULL OR p.maker_id = $6::integer)
+      ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200
+    ),
+    edits AS (
+      SELECT ${COLUMNS}, levenshtein(p.number_key, $7::text) AS distance, 1 AS source,
+        row_number() OVER (ORDER BY levenshtein(p.number_key, $7::text), p.number_key) AS place
+      ${FROM}
+      WHERE $10::boolean AND p.id IN (SELECT v.part_id FROM number_variants v WHERE v.variant = ANY($8::text[]))
+        AND levenshtein(p.number_key, $7::text) BETWEEN 1 AND $9::integer
+        AND ($6::integer IS NULL OR p.maker_id = $6::integer)
+      ORDER BY levenshtein(p.number_key, $7::text), p.number_key LIMIT 60
+    ),
+    found AS (SELECT * FROM numbers UNION ALL SELECT * FROM edits),
+    picked AS (
+      SELECT DISTINCT id FROM (
+        SELECT id FROM found
+        ORDER BY (number_normalised = ANY($1::text[]) OR number_key = ANY($2::text[])) DESC, source,
+          (cardinality($12::integer[]) = 0 OR maker_id = ANY($12::integer[])) DESC, length(number_normalised),
+          distance, number
+        LIMIT $11::integer
+      ) likeliest
+    ),
+    ${walkFrom("newer", "newer", "picked")},
+    ${walkFrom("fits", "fits", "picked")},
+    latest AS (${latestFrom("newer")}),
+    cross_rows AS (${crossRowsFrom("fits")})
+    SELECT f.*, l.number AS latest, (SELECT json_agg(x) FROM cross_rows x WHERE x.start_id = f.id) AS cross_rows
+    FROM found f LEFT JOIN latest l ON l.start_id = f.id
+    ORDER BY f.source, f.place`,
+};
+
+async function findByNumber(typed: Typed, limit: number): Promise<NumberAnswer> {
+  const { key } = typed;
+  const rows = await runPrepared<
+    PartRow & { distance: number; source: number; latest: string | null; cross_rows: CrossRow[] | null }
+  >(NUMBER_STATEMENT, [
+    typed.forms,
+    typed.keys,
+    typed.stripped.length >= 2,
+    `${typed.stripped}%`,
+    `${typed.key}%`,
+    typed.makerId,
+    key,
+    numberForms(key),
+    key.length >= 8 ? 2 : 1,
+    key.length >= 4,
+    limit * 2,
+    [...typed.namedMakers],
+  ]);
+  const answers = new Map<number, { latest: string; crossRows: CrossRow[] }>();
+  for (const row of rows) {
+    if (row.latest !== null) answers.set(row.id, { latest: row.latest, crossRows: row.cross_rows ?? [] });
+  }
+  return {
+    numberRows: rows.filter((r) => r.source === 0),
+    oneEdit: rows.filter((r) => r.source === 1),
+    answers,
+  };
 }
 
 /** Parts found by words, through the full-text index of their descriptions, places, machines and makers. */
@@ -207,25 +277,6 @@ function findWords(typed: Typed, tsquery: string): Promise<Array<PartRow & { ran
     `SELECT ${COLUMNS}, ts_rank(p.search_document, q) AS rank ${FROM}, to_tsquery('english', :tsquery) q
      WHERE p.search_document @@ q ${makerFilter(typed)} ORDER BY rank DESC, p.number LIMIT 60`,
     { replacements: { tsquery, makerId: typed.makerId }, type: QueryTypes.SELECT },
-  );
-}
-
-/**
- * The numbers one edit away (a character missing, extra or different; for long numbers two, or two swapped):
- * they share one of the typed key's forms (itself, or itself less one character) in the side table of every stored
- * key's forms (migration 0017), found by equality in a handful of index probes; `levenshtein()` keeps the near ones.
- */
-function findOneEditAway(typed: Typed): Promise<Array<PartRow & { distance: number }>> {
-  const { key } = typed;
-  return sequelize.query<PartRow & { distance: number }>(
-    `SELECT ${COLUMNS}, levenshtein(p.number_key, :key) AS distance ${FROM}
-     WHERE p.id IN (SELECT v.part_id FROM number_variants v WHERE v.variant IN (:forms))
-       AND levenshtein(p.number_key, :key) BETWEEN 1 AND :allowed ${makerFilter(typed)}
-     ORDER BY levenshtein(p.number_key, :key), p.number_key LIMIT 60`,
-    {
-      replacements: { key, forms: numberForms(key), allowed: key.length >= 8 ? 2 : 1, makerId: typed.makerId },
-      type: QueryTypes.SELECT,
-    },
   );
 }
 
@@ -249,13 +300,19 @@ async function findSimilar(typed: Typed): Promise<Array<{ row: PartRow; closenes
 }
 
 /** The best first, each with its latest number and the shared ranking's best answer. */
-async function toResults(found: Found, limit: number): Promise<LookupResult[]> {
+async function toResults(found: Found, limit: number, answers: NumberAnswer["answers"]): Promise<LookupResult[]> {
   const ranked = [...found.values()]
     .sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number))
     .slice(0, limit);
   if (ranked.length === 0) return [];
-  const ids = ranked.map((r) => r.row.id);
-  const [latest, crosses] = await Promise.all([latestNumbers(ids), rankCrosses(ids)]);
+  // The answers of results the number statement did not read (found by words, by trigram, or past its guess).
+  const ids = ranked.map((r) => r.row.id).filter((id) => !answers.has(id));
+  const [latest, crosses] =
+    ids.length > 0 ? await Promise.all([latestNumbers(ids), rankCrosses(ids)]) : [new Map(), new Map()];
+  for (const [id, answer] of answers) {
+    latest.set(id, answer.latest);
+    crosses.set(id, rankCrossRows(id, answer.crossRows));
+  }
   return ranked.map(({ row, matchedBy, score }) => {
     const cross = crosses.get(row.id)?.[0] ?? null;
     return {

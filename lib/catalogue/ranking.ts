@@ -119,6 +119,26 @@ export function rankCrossRows(startId: number, rows: CrossRow[]): RankedCross[] 
   );
 }
 
+/**
+ * From a walk the way a replacement fits: the approved crosses each start can take, as `CrossRow`s, the photos of
+ * their proposals when asked for.
+ */
+export function crossRowsFrom(walkName: string, options: { photos?: boolean } = {}): string {
+  const photos = options.photos
+    ? `, (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM proposals sub
+         JOIN proposal_photos ph ON ph.proposal_id = sub.id
+         WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos`
+    : "";
+  return `SELECT src.start_id, c.id, c.original_part_id AS part_id, p.number, c.fit, c.standard_part_id,
+       c.repair_method, c.notes, c.origin,
+       (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations${photos},
+       s.kind, s.designation, s.inner_mm, s.outer_mm, s.width_mm, s.length_mm, s.attributes
+     FROM (SELECT DISTINCT start_id, part_id FROM ${walkName}) src
+     JOIN crosses c ON c.original_part_id = src.part_id AND c.status = 'approved'
+     JOIN original_parts p ON p.id = c.original_part_id
+     LEFT JOIN standard_parts s ON s.id = c.standard_part_id`;
+}
+
 /** Every part's ranked crosses, for many parts in one query. Parts with none get an empty list. */
 export async function rankCrosses(
   partIds: readonly number[],
@@ -127,24 +147,10 @@ export async function rankCrosses(
   const ids = [...new Set(partIds)];
   const ranked = new Map<number, RankedCross[]>(ids.map((id) => [id, []]));
   if (ids.length === 0) return ranked;
-  const photos = options.photos
-    ? `, (SELECT coalesce(array_agg(ph.id ORDER BY ph.id), '{}') FROM proposals sub JOIN proposal_photos ph ON
-      ph.proposal_id = sub.id
-          WHERE sub.cross_id = c.id AND sub.status = 'approved') AS photos`
-    : "";
-  const rows = await sequelize.query<CrossRow>(
-    `${walk("fits")},
-     sources AS (SELECT DISTINCT start_id, part_id FROM walk)
-     SELECT src.start_id, c.id, c.original_part_id AS part_id, p.number, c.fit, c.standard_part_id, c.repair_method,
-       c.notes, c.origin,
-            (SELECT count(*) FROM confirmations f WHERE f.cross_id = c.id) AS confirmations${photos},
-            s.kind, s.designation, s.inner_mm, s.outer_mm, s.width_mm, s.length_mm, s.attributes
-     FROM sources src
-     JOIN crosses c ON c.original_part_id = src.part_id AND c.status = 'approved'
-     JOIN original_parts p ON p.id = c.original_part_id
-     LEFT JOIN standard_parts s ON s.id = c.standard_part_id`,
-    { replacements: { ids }, type: QueryTypes.SELECT },
-  );
+  const rows = await sequelize.query<CrossRow>(`${walk("fits")} ${crossRowsFrom("walk", options)}`, {
+    replacements: { ids },
+    type: QueryTypes.SELECT,
+  });
   const byStart = new Map<number, CrossRow[]>();
   for (const row of rows) byStart.set(row.start_id, [...(byStart.get(row.start_id) ?? []), row]);
   for (const [startId, list] of byStart) ranked.set(startId, rankCrossRows(startId, list));

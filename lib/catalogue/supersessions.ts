@@ -12,6 +12,14 @@ const EITHER_WAY = "CASE WHEN s.old_part_id = w.part_id THEN s.new_part_id ELSE 
  * the records ends it; 25 links at most. Gives `walk(start_id, part_id, depth, path)`.
  */
 export function walk(direction: "newer" | "older" | "both" | "fits"): string {
+  return `WITH RECURSIVE ${walkFrom("walk", direction, "original_parts WHERE id IN (:ids)")}`;
+}
+
+/**
+ * The same walk as one named entry of a `WITH RECURSIVE` list, starting from the `id`s of `starts` (a table, or a
+ * table with its WHERE), so one statement can walk from the parts it has just found.
+ */
+export function walkFrom(name: string, direction: "newer" | "older" | "both" | "fits", starts: string): string {
   const next = { newer: "s.new_part_id", older: "s.old_part_id", both: EITHER_WAY, fits: EITHER_WAY }[direction];
   const join = {
     newer: "s.old_part_id = w.part_id",
@@ -22,28 +30,28 @@ export function walk(direction: "newer" | "older" | "both" | "fits"): string {
       "'one_way')) OR (s.new_part_id = w.part_id AND s.kind = " +
       "'interchangeable')",
   }[direction];
-  return `WITH RECURSIVE walk(start_id, part_id, depth, path) AS (
-       SELECT id, id, 0, ARRAY[id] FROM original_parts WHERE id IN (:ids)
+  return `${name}(start_id, part_id, depth, path) AS (
+       SELECT id, id, 0, ARRAY[id] FROM ${starts}
        UNION ALL
        SELECT w.start_id, ${next}, w.depth + 1, w.path || ${next}
-       FROM walk w JOIN supersessions s ON ${join}
+       FROM ${name} w JOIN supersessions s ON ${join}
        WHERE NOT ${next} = ANY(w.path) AND w.depth < 25
      )`;
 }
 
+/** From a walk towards newer numbers: each start's latest number, as `(start_id, number)`. */
+export const latestFrom = (walkName: string) =>
+  `SELECT DISTINCT ON (w.start_id) w.start_id, p.number
+   FROM ${walkName} w JOIN original_parts p ON p.id = w.part_id
+   ORDER BY w.start_id, w.depth DESC, w.part_id`;
+
 /** For many parts in one round trip: the latest number each has been superseded by. */
 export async function latestNumbers(ids: number[]): Promise<Map<number, string>> {
   if (ids.length === 0) return new Map();
-  const rows = await sequelize.query<{ start_id: number; number: string }>(
-    `${walk("newer")},
-     latest AS (
-       SELECT DISTINCT ON (w.start_id) w.start_id, p.number
-       FROM walk w JOIN original_parts p ON p.id = w.part_id
-       ORDER BY w.start_id, w.depth DESC, w.part_id
-     )
-     SELECT l.start_id, l.number FROM latest l`,
-    { replacements: { ids }, type: QueryTypes.SELECT },
-  );
+  const rows = await sequelize.query<{ start_id: number; number: string }>(`${walk("newer")} ${latestFrom("walk")}`, {
+    replacements: { ids },
+    type: QueryTypes.SELECT,
+  });
   return new Map(rows.map((r) => [r.start_id, r.number]));
 }
 

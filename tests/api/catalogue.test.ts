@@ -1,9 +1,11 @@
 import { Op, QueryTypes, type Transaction } from "sequelize";
-import { afterAll, describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it, vi } from "vitest";
 import { Cross, Maker, OriginalPart, sequelize } from "@/db";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { findPartsBySize, NEAREST_SIZES_SQL } from "@/lib/catalogue/find-by-size";
-import { numberForms } from "@/lib/catalogue/find-parts";
+import { lookUpParts, numberForms } from "@/lib/catalogue/find-parts";
+import { crossLabel, rankCrosses } from "@/lib/catalogue/ranking";
+import { latestNumbers } from "@/lib/catalogue/supersessions";
 import { send } from "../helpers/api";
 
 afterAll(() => sequelize.close());
@@ -76,6 +78,29 @@ describe("GET /api/parts/lookup", () => {
     const latest = demo.parts.find((p) => p.key === key)!;
     const { body } = await lookup(chainStart.number);
     expect(body.results[0]).toMatchObject({ number: chainStart.number, latestNumber: latest.number });
+  });
+
+  it("answers a typed number in one round trip, with the answers the shared ranking gives part by part", async () => {
+    await lookUpParts(chainStart.number, { limit: 10 }); // the makers' prefixes, kept for a minute
+    const acquire = vi.spyOn(sequelize.connectionManager, "getConnection");
+    try {
+      for (const typed of [chainStart.number, "CV-3003-A", "cv 3003 a", "CV-3O3-A", "CV-30"]) {
+        acquire.mockClear();
+        const results = await lookUpParts(typed, { limit: 10 });
+        expect(results.length).toBeGreaterThan(0);
+        // One statement on one connection, whatever the results found by number need.
+        expect(acquire).toHaveBeenCalledTimes(1);
+        const ids = results.map((r) => r.id);
+        const [latest, crosses] = await Promise.all([latestNumbers(ids), rankCrosses(ids)]);
+        for (const r of results) {
+          expect(r.latestNumber).toBe(latest.get(r.id));
+          expect(r.crossCount).toBe(crosses.get(r.id)!.length);
+          expect(r.best?.label ?? null).toBe(crosses.get(r.id)![0] ? crossLabel(crosses.get(r.id)![0]) : null);
+        }
+      }
+    } finally {
+      acquire.mockRestore();
+    }
   });
 
   const bad: Array<[string, string]> = [
