@@ -39,22 +39,36 @@ export const NEAREST_SIZES_SQL = `
   ORDER BY s.distance, p.number COLLATE "C"
   LIMIT :limit`;
 
-/**
- * Original parts whose documented inner and outer sizes lie within the window of a measurement, so a part with no
- * legible number can still be named. The window is three tolerances each way, as in the standard-size matching.
- */
-export async function findPartsBySize(input: {
+interface SizeQuery {
   category: PartCategory;
   /** Null for a part known by its outside alone (a plug). */
   innerMm: number | null;
   outerMm: number;
   toleranceMm: number;
   limit?: number;
-  transaction?: Transaction;
-}): Promise<SizedPart[]> {
+}
+
+/** The nearest-size statement's named parameters for a measurement. */
+export function nearestSizesValues(input: SizeQuery) {
   const w = input.toleranceMm * 3;
   const inner = input.innerMm ?? 0;
-  const limit = input.limit ?? 12;
+  return {
+    category: input.category,
+    inner,
+    outer: input.outerMm,
+    innerLo: inner - (input.innerMm === null ? 0 : w),
+    innerHi: inner + (input.innerMm === null ? 0 : w),
+    outerLo: input.outerMm - w,
+    outerHi: input.outerMm + w,
+    limit: input.limit ?? 12,
+  };
+}
+
+/**
+ * Original parts whose documented inner and outer sizes lie within the window of a measurement, so a part with no
+ * legible number can still be named. The window is three tolerances each way, as in the standard-size matching.
+ */
+export async function findPartsBySize(input: SizeQuery & { transaction?: Transaction }): Promise<SizedPart[]> {
   const rows = await sequelize.query<{
     id: number;
     maker: string;
@@ -64,16 +78,7 @@ export async function findPartsBySize(input: {
     outer_mm: number;
     width_mm: number | null;
   }>(NEAREST_SIZES_SQL, {
-    replacements: {
-      category: input.category,
-      inner,
-      outer: input.outerMm,
-      innerLo: inner - (input.innerMm === null ? 0 : w),
-      innerHi: inner + (input.innerMm === null ? 0 : w),
-      outerLo: input.outerMm - w,
-      outerHi: input.outerMm + w,
-      limit,
-    },
+    replacements: nearestSizesValues(input),
     type: QueryTypes.SELECT,
     transaction: input.transaction,
   });

@@ -55,17 +55,17 @@ const COLUMNS = `p.id, p.maker_id, m.name AS maker, p.number, p.number_normalise
 
 let prefixCache: { at: number; prefixes: Array<{ makerId: number; prefix: string }> } | undefined;
 
+export const MAKER_PREFIXES_SQL = "SELECT id, unnest(prefixes) AS prefix FROM makers";
+
+/** The makers' prefixes as typed numbers are compared with them: normalised, the empty ones left out. */
+export const prefixesOf = (rows: Array<{ id: number; prefix: string }>) =>
+  rows.map((r) => ({ makerId: r.id, prefix: normaliseNumber(r.prefix) })).filter((r) => r.prefix !== "");
+
 /** Every maker's prefixes; makers change rarely, so the list is kept for a minute. */
 async function makerPrefixes(): Promise<Array<{ makerId: number; prefix: string }>> {
   if (prefixCache && Date.now() - prefixCache.at < 60_000) return prefixCache.prefixes;
-  const rows = await sequelize.query<{ id: number; prefix: string }>(
-    "SELECT id, unnest(prefixes) AS prefix FROM makers",
-    { type: QueryTypes.SELECT },
-  );
-  prefixCache = {
-    at: Date.now(),
-    prefixes: rows.map((r) => ({ makerId: r.id, prefix: normaliseNumber(r.prefix) })).filter((r) => r.prefix !== ""),
-  };
+  const rows = await sequelize.query<{ id: number; prefix: string }>(MAKER_PREFIXES_SQL, { type: QueryTypes.SELECT });
+  prefixCache = { at: Date.now(), prefixes: prefixesOf(rows) };
   return prefixCache.prefixes;
 }
 
@@ -102,7 +102,7 @@ function wordsQuery(query: string): string | null {
 }
 
 /** What was typed, read as a number: its forms, its look-alike keys, and the makers its prefix names. */
-interface Typed {
+export interface Typed {
   query: string;
   stripped: string;
   forms: string[];
@@ -166,9 +166,18 @@ export async function lookUpParts(
 }
 
 async function readTyped(query: string, makerId: number | null): Promise<Typed | null> {
+  return typedNumber(query, makerId, await makerPrefixes());
+}
+
+/** What was typed, read against the makers' prefixes (normalised); null when nothing in it can be a number. */
+export function typedNumber(
+  query: string,
+  makerId: number | null,
+  prefixes: Array<{ makerId: number; prefix: string }>,
+): Typed | null {
   const typedNumber = normaliseNumber(query);
   if (typedNumber === "") return null;
-  const prefixHit = (await makerPrefixes())
+  const prefixHit = prefixes
     .filter((p) => typedNumber.startsWith(p.prefix) && /\d/.test(typedNumber.slice(p.prefix.length)))
     .sort((a, b) => b.prefix.length - a.prefix.length);
   const stripped = prefixHit.length > 0 ? typedNumber.slice(prefixHit[0].prefix.length) : typedNumber;
@@ -202,7 +211,7 @@ interface NumberAnswer {
  * itself stays in `lookUpParts`; a result it puts on show that was not among the likeliest has its answers read
  * afterwards, so the order never depends on this guess.
  */
-const NUMBER_STATEMENT: PreparedStatement = {
+export const NUMBER_STATEMENT: PreparedStatement = {
   name: "look-up-by-number",
   text: `WITH RECURSIVE
     numbers AS (
@@ -211,7 +220,7 @@ const NUMBER_STATEMENT: PreparedStatement = {
       ${FROM}
       WHERE (p.number_normalised = ANY($1::text[]) OR p.number_key = ANY($2::text[])
              OR ($3::boolean AND (p.number_normalised LIKE $4::text OR p.number_key LIKE $5::text)))
-        AND ($6::integer IS NULL OR p.maker_id = $6::integer)
+        AND ($6::integer = 0 OR p.maker_id = $6::integer)
       ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200
     ),
     edits AS (
@@ -220,7 +229,7 @@ const NUMBER_STATEMENT: PreparedStatement = {
       ${FROM}
       WHERE $10::boolean AND p.id IN (SELECT v.part_id FROM number_variants v WHERE v.variant = ANY($8::text[]))
         AND levenshtein(p.number_key, $7::text) BETWEEN 1 AND $9::integer
-        AND ($6::integer IS NULL OR p.maker_id = $6::integer)
+        AND ($6::integer = 0 OR p.maker_id = $6::integer)
       ORDER BY levenshtein(p.number_key, $7::text), p.number_key LIMIT 60
     ),
     found AS (SELECT * FROM numbers UNION ALL SELECT * FROM edits),
@@ -242,24 +251,29 @@ const NUMBER_STATEMENT: PreparedStatement = {
     ORDER BY f.source, f.place`,
 };
 
-async function findByNumber(typed: Typed, limit: number): Promise<NumberAnswer> {
+/** The number statement's parameters, in order; a maker id of 0 means every maker. */
+export function numberStatementValues(typed: Typed, limit: number): unknown[] {
   const { key } = typed;
-  const rows = await runPrepared<
-    PartRow & { distance: number; source: number; latest: string | null; cross_rows: CrossRow[] | null }
-  >(NUMBER_STATEMENT, [
+  return [
     typed.forms,
     typed.keys,
     typed.stripped.length >= 2,
     `${typed.stripped}%`,
     `${typed.key}%`,
-    typed.makerId,
+    typed.makerId ?? 0,
     key,
     numberForms(key),
     key.length >= 8 ? 2 : 1,
     key.length >= 4,
     limit * 2,
     [...typed.namedMakers],
-  ]);
+  ];
+}
+
+async function findByNumber(typed: Typed, limit: number): Promise<NumberAnswer> {
+  const rows = await runPrepared<
+    PartRow & { distance: number; source: number; latest: string | null; cross_rows: CrossRow[] | null }
+  >(NUMBER_STATEMENT, numberStatementValues(typed, limit));
   const answers = new Map<number, { latest: string; crossRows: CrossRow[] }>();
   for (const row of rows) {
     if (row.latest !== null) answers.set(row.id, { latest: row.latest, crossRows: row.cross_rows ?? [] });
