@@ -265,7 +265,7 @@ export function numberStatementValues(typed: Typed, limit: number): unknown[] {
     numberForms(key),
     key.length >= 8 ? 2 : 1,
     key.length >= 4,
-    limit * 2,
+    limit + 4, // a few past the page, for ties the ranking breaks by number
     [...typed.namedMakers],
   ];
 }
