@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { AddToList } from "@/components/lists/add-to-list";
-import { proposalHref, type ProposalPrefill } from "@/lib/proposals/prefill";
+import { proposalHref, type ProposalPrefill } from "@/lib/proposals/prefill-link";
 import type { MeasuredKind } from "@/lib/lists/standard-item";
 
 /**

@@ -1,17 +1,8 @@
 import { z } from "zod";
-import { STANDARD_KINDS, type StandardKind } from "@/lib/catalogue/kinds";
+import { STANDARD_KINDS } from "@/lib/catalogue/kinds";
 import { checkStandard } from "@/lib/proposals/checks";
 import { MEASURED_DIMENSIONS, type Measurement } from "@/lib/proposals/kinds";
 import type { ProposalFormValues } from "@/lib/validation/proposals";
-
-/** What a calculator hands the proposal form: the standard part it worked out and what was measured. */
-export interface ProposalPrefill {
-  kind: StandardKind;
-  designation: string;
-  measurements: Measurement[];
-  /** A gasket's template query. */
-  template?: string;
-}
 
 const measurementText = z
   .string()
@@ -28,18 +19,6 @@ const prefillQuery = z.object({
   m: z.string().max(400).optional().catch(undefined),
   template: z.string().max(4000).optional().catch(undefined),
 });
-
-/** The link from a calculator's result to the proposal form, filled in. */
-export function proposalHref(prefill: ProposalPrefill): string {
-  const query = new URLSearchParams({ kind: prefill.kind, designation: prefill.designation });
-  const m = prefill.measurements
-    .filter((x) => Number.isFinite(x.value) && x.value > 0)
-    .map((x) => `${x.dimension}:${x.value}:${x.unit}`)
-    .join(",");
-  if (m) query.set("m", m);
-  if (prefill.template) query.set("template", prefill.template);
-  return `/propose?${query}`;
-}
 
 /**
  * The proposal form's standard part and measurements from a calculator's link: the standard part entered by its

@@ -6,7 +6,8 @@ import {
   PART_SIZES_FIELD,
   readSealSize,
 } from "@/lib/proposals/checks";
-import { proposalHref, readProposalPrefill } from "@/lib/proposals/prefill";
+import { readProposalPrefill } from "@/lib/proposals/prefill";
+import { proposalHref } from "@/lib/proposals/prefill-link";
 import { toStandardItem } from "@/lib/lists/standard-item";
 
 describe("checking a proposed standard part with the standards engine", () => {
