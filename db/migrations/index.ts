@@ -16,6 +16,7 @@ import * as nearestSizeIndex from "@/db/migrations/0015-nearest-size-index";
 import * as catalogueVersionNotice from "@/db/migrations/0016-catalogue-version-notice";
 import * as numberVariants from "@/db/migrations/0017-number-variants";
 import * as partSizes from "@/db/migrations/0018-part-sizes";
+import * as variantKeys from "@/db/migrations/0019-variant-keys";
 
 // Listed by hand, in order, so that the same list runs under tsx, vitest and the Next bundle alike.
 export const migrations = [
@@ -37,4 +38,5 @@ export const migrations = [
   { name: "0016-catalogue-version-notice", ...catalogueVersionNotice },
   { name: "0017-number-variants", ...numberVariants },
   { name: "0018-part-sizes", ...partSizes },
+  { name: "0019-variant-keys", ...variantKeys },
 ];

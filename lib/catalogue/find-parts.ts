@@ -206,10 +206,11 @@ interface NumberAnswer {
  * the numbers that start with it; the numbers one edit away (a character missing, extra or different; for long
  * numbers two, or two swapped), which share one of the typed key's forms (itself, or itself less one character) in
  * the side table of every stored key's forms (migration 0017), found by equality in a handful of index probes and
- * kept by `levenshtein()`; and, for the likeliest of them (same number, then the rest in the order the ranking will
- * most likely give), their latest number and their crosses through the shared walk and ranking rows. The ranking
- * itself stays in `lookUpParts`; a result it puts on show that was not among the likeliest has its answers read
- * afterwards, so the order never depends on this guess.
+ * kept by `levenshtein()` on the key the index carries (migration 0019), so only those kept are read; and, for the
+ * likeliest of them (same number, then the rest in the order the ranking will most likely give), their latest number
+ * and their crosses through the shared walk and ranking rows. The ranking itself stays in `lookUpParts`; a result it
+ * puts on show that was not among the likeliest has its answers read afterwards, so the order never depends on this
+ * guess.
  */
 export const NUMBER_STATEMENT: PreparedStatement = {
   name: "look-up-by-number",
@@ -219,18 +220,22 @@ export const NUMBER_STATEMENT: PreparedStatement = {
         row_number() OVER (ORDER BY length(p.number_normalised), p.number_normalised) AS place
       ${FROM}
       WHERE (p.number_normalised = ANY($1::text[]) OR p.number_key = ANY($2::text[])
-             OR ($3::boolean AND (p.number_normalised LIKE $4::text OR p.number_key LIKE $5::text)))
+             OR ($3::boolean AND ((p.number_normalised ~>=~ $4::text AND p.number_normalised ~<~ $13::text)
+                                  OR (p.number_key ~>=~ $5::text AND p.number_key ~<~ $14::text))))
         AND ($6::integer = 0 OR p.maker_id = $6::integer)
       ORDER BY length(p.number_normalised), p.number_normalised LIMIT 200
     ),
+    near AS (
+      SELECT DISTINCT v.part_id, levenshtein(v.number_key, $7::text) AS distance
+      FROM number_variants v
+      WHERE $10::boolean AND v.variant = ANY($8::text[])
+        AND levenshtein(v.number_key, $7::text) BETWEEN 1 AND $9::integer
+    ),
     edits AS (
-      SELECT ${COLUMNS}, levenshtein(p.number_key, $7::text) AS distance, 1 AS source,
-        row_number() OVER (ORDER BY levenshtein(p.number_key, $7::text), p.number_key) AS place
-      ${FROM}
-      WHERE $10::boolean AND p.id IN (SELECT v.part_id FROM number_variants v WHERE v.variant = ANY($8::text[]))
-        AND levenshtein(p.number_key, $7::text) BETWEEN 1 AND $9::integer
-        AND ($6::integer = 0 OR p.maker_id = $6::integer)
-      ORDER BY levenshtein(p.number_key, $7::text), p.number_key LIMIT 60
+      SELECT ${COLUMNS}, n.distance, 1 AS source, row_number() OVER (ORDER BY n.distance, p.number_key) AS place
+      FROM near n JOIN original_parts p ON p.id = n.part_id JOIN makers m ON m.id = p.maker_id
+      WHERE $6::integer = 0 OR p.maker_id = $6::integer
+      ORDER BY n.distance, p.number_key LIMIT 60
     ),
     found AS (SELECT * FROM numbers UNION ALL SELECT * FROM edits),
     picked AS (
@@ -251,6 +256,17 @@ export const NUMBER_STATEMENT: PreparedStatement = {
     ORDER BY f.source, f.place`,
 };
 
+/**
+ * The first string past every string that starts with `prefix`, in byte order: the prefix with its last character
+ * one higher. "Starts with" as a range (`~>=~ prefix AND ~<~ pastPrefix(prefix)`) uses the pattern index with bound
+ * parameters, where `LIKE $1` would leave a prepared statement's generic plan to scan the table.
+ */
+export function pastPrefix(prefix: string): string {
+  if (prefix === "") return "";
+  const last = prefix.codePointAt(prefix.length - 1)!;
+  return prefix.slice(0, -1) + String.fromCodePoint(last + 1);
+}
+
 /** The number statement's parameters, in order; a maker id of 0 means every maker. */
 export function numberStatementValues(typed: Typed, limit: number): unknown[] {
   const { key } = typed;
@@ -258,8 +274,8 @@ export function numberStatementValues(typed: Typed, limit: number): unknown[] {
     typed.forms,
     typed.keys,
     typed.stripped.length >= 2,
-    `${typed.stripped}%`,
-    `${typed.key}%`,
+    typed.stripped,
+    typed.key,
     typed.makerId ?? 0,
     key,
     numberForms(key),
@@ -267,6 +283,8 @@ export function numberStatementValues(typed: Typed, limit: number): unknown[] {
     key.length >= 4,
     limit + 4, // a few past the page, for ties the ranking breaks by number
     [...typed.namedMakers],
+    pastPrefix(typed.stripped),
+    pastPrefix(typed.key),
   ];
 }
 

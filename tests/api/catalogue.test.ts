@@ -3,7 +3,7 @@ import { afterAll, describe, expect, it, vi } from "vitest";
 import { Cross, Maker, OriginalPart, sequelize } from "@/db";
 import { buildDemoCatalogue } from "@/fixtures/catalogue/build";
 import { findPartsBySize, NEAREST_SIZES_SQL } from "@/lib/catalogue/find-by-size";
-import { lookUpParts, numberForms } from "@/lib/catalogue/find-parts";
+import { lookUpParts, numberForms, pastPrefix } from "@/lib/catalogue/find-parts";
 import { crossLabel, rankCrosses } from "@/lib/catalogue/ranking";
 import { latestNumbers } from "@/lib/catalogue/supersessions";
 import { send } from "../helpers/api";
@@ -101,6 +101,16 @@ describe("GET /api/parts/lookup", () => {
     } finally {
       acquire.mockRestore();
     }
+  });
+
+  it("finds numbers by their start as a range: every number that starts so, and no other", async () => {
+    // The range's end is the prefix with its last character one higher (what LIKE 'CV300%' means, as a range).
+    expect(pastPrefix("CV300")).toBe("CV301");
+    expect(pastPrefix("")).toBe("");
+    const { body } = await lookup("CV-300", 50);
+    const prefixed = body.results.filter((r: { matchedBy: string }) => r.matchedBy === "prefix");
+    expect(prefixed.length).toBeGreaterThan(1);
+    for (const r of prefixed) expect(r.number.replace(/[^A-Z0-9]/g, "")).toMatch(/^CV300/);
   });
 
   const bad: Array<[string, string]> = [

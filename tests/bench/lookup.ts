@@ -16,6 +16,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import autocannon from "autocannon";
 import pg from "pg";
+import { PLAN_CACHE_MODE } from "@/db/sequelize";
 import { NEAREST_SIZES_SQL, nearestSizesValues } from "@/lib/catalogue/find-by-size";
 import {
   MAKER_PREFIXES_SQL,
@@ -66,7 +67,7 @@ async function prepare(target: Target) {
     const draws = Array.from({ length: DRAWS }, () => 1 + Math.floor(Math.random() * target.parts));
     const numberTable = async (table: string, typed: (g: number) => string) => {
       const columns = ["p1 text[]", "p2 text[]", "p3 boolean", "p4 text", "p5 text", "p6 integer", "p7 text"];
-      columns.push("p8 text[]", "p9 integer", "p10 boolean", "p11 integer", "p12 integer[]");
+      columns.push("p8 text[]", "p9 integer", "p10 boolean", "p11 integer", "p12 integer[]", "p13 text", "p14 text");
       await client.query(`DROP TABLE IF EXISTS ${table}`);
       await client.query(`CREATE TABLE ${table} (i integer PRIMARY KEY, ${columns.join(", ")})`);
       for (const [i, g] of draws.entries()) {
@@ -122,7 +123,7 @@ function pgbenchScript(table: string, columns: string[], statement: string, draw
     "",
   ].join("\n");
 }
-const numbered = Array.from({ length: 12 }, (_, n) => `p${n + 1}`);
+const numbered = Array.from({ length: 14 }, (_, n) => `p${n + 1}`);
 const numberScript = (table: string) =>
   pgbenchScript(table, numbered, NUMBER_STATEMENT.text.replace(/\$(\d+)/g, ":p$1"), DRAWS);
 const sizeColumns = ["category", '"inner"', '"outer"', '"innerLo"', '"innerHi"', '"outerLo"', '"outerHi"', '"limit"'];
@@ -194,7 +195,15 @@ function measurePgbench(database: string, script: string, connections: number): 
         decodeURIComponent(url.username),
         url.pathname.slice(1),
       ],
-      { encoding: "utf8", env: { ...process.env, PGPASSWORD: decodeURIComponent(url.password) } },
+      {
+        encoding: "utf8",
+        // The same settings as the app's own connections (db/sequelize.ts).
+        env: {
+          ...process.env,
+          PGPASSWORD: decodeURIComponent(url.password),
+          PGOPTIONS: `-c plan_cache_mode=${PLAN_CACHE_MODE} -c pg_trgm.similarity_threshold=0.3`,
+        },
+      },
     );
     const tps = Number(/tps = ([\d.]+)/.exec(out)?.[1]);
     const average = Number(/latency average = ([\d.]+) ms/.exec(out)?.[1]);
