@@ -24,6 +24,8 @@ export interface ClusterOptions {
   dir: string;
   databaseUrl: string;
   log: (message: string) => void;
+  /** Server settings for this start (`-c name=value`), e.g. the benchmark's memory. */
+  settings?: Record<string, string>;
 }
 
 interface Connection {
@@ -137,6 +139,7 @@ export class PostgresCluster {
   private readonly dir: string;
   private readonly conn: Connection;
   private readonly log: (message: string) => void;
+  private readonly settings: Record<string, string>;
   private binDir = "";
   private startedHere = false;
 
@@ -144,6 +147,7 @@ export class PostgresCluster {
     this.dir = path.resolve(options.dir);
     this.conn = parseUrl(options.databaseUrl);
     this.log = options.log;
+    this.settings = options.settings ?? {};
   }
 
   private bin(name: string): string {
@@ -221,7 +225,8 @@ export class PostgresCluster {
       giveToOwner(this.socketDir);
       if (!existsSync(this.logFile)) writeFileSync(this.logFile, "");
       giveToOwner(this.logFile);
-      const options = `-c listen_addresses=127.0.0.1 -p ${this.conn.port} -k ${this.socketDir}`;
+      const settings = Object.entries(this.settings).map(([name, value]) => ` -c ${name}=${value}`);
+      const options = `-c listen_addresses=127.0.0.1 -p ${this.conn.port} -k ${this.socketDir}${settings.join("")}`;
       const result = runAsOwner(this.bin("pg_ctl"), [
         "start",
         "-D",

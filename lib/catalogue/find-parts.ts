@@ -212,6 +212,14 @@ interface NumberAnswer {
  * puts on show that was not among the likeliest has its answers read afterwards, so the order never depends on this
  * guess.
  */
+/**
+ * A maker the typed prefix names (or any, when it names none) first, as the ranking puts it. Similar numbers are
+ * read in the ranking's own order (named maker, nearest, number) and no more than the page can show: they come after
+ * every number that matched, so a page holds at most that many, and the parts read stay that many however many near
+ * numbers a dense catalogue has.
+ */
+const NAMED_FIRST = "(cardinality($12::integer[]) = 0 OR p.maker_id = ANY($12::integer[])) DESC";
+
 export const NUMBER_STATEMENT: PreparedStatement = {
   name: "look-up-by-number",
   text: `WITH RECURSIVE
@@ -232,18 +240,18 @@ export const NUMBER_STATEMENT: PreparedStatement = {
         AND levenshtein(v.number_key, $7::text) BETWEEN 1 AND $9::integer
     ),
     edits AS (
-      SELECT ${COLUMNS}, n.distance, 1 AS source, row_number() OVER (ORDER BY n.distance, p.number_key) AS place
+      SELECT ${COLUMNS}, n.distance, 1 AS source,
+        row_number() OVER (ORDER BY ${NAMED_FIRST}, n.distance, p.number COLLATE "C") AS place
       FROM near n JOIN original_parts p ON p.id = n.part_id JOIN makers m ON m.id = p.maker_id
       WHERE $6::integer = 0 OR p.maker_id = $6::integer
-      ORDER BY n.distance, p.number_key LIMIT 60
+      ORDER BY ${NAMED_FIRST}, n.distance, p.number COLLATE "C" LIMIT $11::integer
     ),
     found AS (SELECT * FROM numbers UNION ALL SELECT * FROM edits),
     picked AS (
       SELECT DISTINCT id FROM (
         SELECT id FROM found
         ORDER BY (number_normalised = ANY($1::text[]) OR number_key = ANY($2::text[])) DESC, source,
-          (cardinality($12::integer[]) = 0 OR maker_id = ANY($12::integer[])) DESC, length(number_normalised),
-          distance, number
+          ${NAMED_FIRST.replace("p.", "")}, length(number_normalised), distance, number COLLATE "C"
         LIMIT $11::integer
       ) likeliest
     ),
@@ -334,7 +342,8 @@ async function findSimilar(typed: Typed): Promise<Array<{ row: PartRow; closenes
 /** The best first, each with its latest number and the shared ranking's best answer. */
 async function toResults(found: Found, limit: number, answers: NumberAnswer["answers"]): Promise<LookupResult[]> {
   const ranked = [...found.values()]
-    .sort((a, b) => b.score - a.score || a.row.number.localeCompare(b.row.number))
+    // Ties by number in code-unit order, as the statement orders them (COLLATE "C").
+    .sort((a, b) => b.score - a.score || (a.row.number < b.row.number ? -1 : a.row.number > b.row.number ? 1 : 0))
     .slice(0, limit);
   if (ranked.length === 0) return [];
   // The answers of results the number statement did not read (found by words, by trigram, or past its guess).
