@@ -1,4 +1,5 @@
 import type pg from "pg";
+import { DatabaseError } from "sequelize";
 import { sequelize } from "@/db/sequelize";
 
 /**
@@ -20,6 +21,9 @@ export async function runPrepared<Row extends object>(statement: PreparedStateme
   try {
     const result = await connection.query<Row>({ name: statement.name, text: statement.text, values });
     return result.rows;
+  } catch (error) {
+    // As Sequelize's own queries report theirs, so an outage here is told apart the same way (lib/http/handle.ts).
+    throw new DatabaseError(Object.assign(error as Error, { sql: statement.text }));
   } finally {
     sequelize.connectionManager.releaseConnection(connection as never);
   }
