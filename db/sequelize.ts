@@ -53,6 +53,8 @@ export function createSequelize(
         await (connection as pg.Client).query("SET pg_trgm.similarity_threshold = 0.3");
         // The statements the app prepares (db/prepared.ts) are written for one plan whatever their parameters (ranges,
         // not LIKE, for prefixes). Left to choose, PostgreSQL plans each run afresh, which costs more than the run.
+        // Sequelize's own queries write their values into the text, or (inserts and updates by key) bind them to
+        // statements whose one plan is the plan for any values.
         await (connection as pg.Client).query(`SET plan_cache_mode = ${PLAN_CACHE_MODE}`);
       },
     },
