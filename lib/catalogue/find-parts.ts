@@ -202,6 +202,14 @@ interface NumberAnswer {
 }
 
 /**
+ * A maker the typed prefix names (or any, when it names none) first, as the ranking puts it. Similar numbers are
+ * read in the ranking's own order (named maker, nearest, number) and no more than the page can show: they come after
+ * every number that matched, so a page holds at most that many, and the parts read stay that many however many near
+ * numbers a dense catalogue has.
+ */
+const namedFirst = (makerId: string) => `(cardinality($12::integer[]) = 0 OR ${makerId} = ANY($12::integer[])) DESC`;
+
+/**
  * The look-up's one statement, prepared once per connection: the number itself (exact, reformatted, look-alike) and
  * the numbers that start with it; the numbers one edit away (a character missing, extra or different; for long
  * numbers two, or two swapped), which share one of the typed key's forms (itself, or itself less one character) in
@@ -212,14 +220,6 @@ interface NumberAnswer {
  * puts on show that was not among the likeliest has its answers read afterwards, so the order never depends on this
  * guess.
  */
-/**
- * A maker the typed prefix names (or any, when it names none) first, as the ranking puts it. Similar numbers are
- * read in the ranking's own order (named maker, nearest, number) and no more than the page can show: they come after
- * every number that matched, so a page holds at most that many, and the parts read stay that many however many near
- * numbers a dense catalogue has.
- */
-const NAMED_FIRST = "(cardinality($12::integer[]) = 0 OR p.maker_id = ANY($12::integer[])) DESC";
-
 export const NUMBER_STATEMENT: PreparedStatement = {
   name: "look-up-by-number",
   text: `WITH RECURSIVE
@@ -241,17 +241,17 @@ export const NUMBER_STATEMENT: PreparedStatement = {
     ),
     edits AS (
       SELECT ${COLUMNS}, n.distance, 1 AS source,
-        row_number() OVER (ORDER BY ${NAMED_FIRST}, n.distance, p.number COLLATE "C") AS place
+        row_number() OVER (ORDER BY ${namedFirst("p.maker_id")}, n.distance, p.number COLLATE "C") AS place
       FROM near n JOIN original_parts p ON p.id = n.part_id JOIN makers m ON m.id = p.maker_id
       WHERE $6::integer = 0 OR p.maker_id = $6::integer
-      ORDER BY ${NAMED_FIRST}, n.distance, p.number COLLATE "C" LIMIT $11::integer
+      ORDER BY ${namedFirst("p.maker_id")}, n.distance, p.number COLLATE "C" LIMIT $11::integer
     ),
     found AS (SELECT * FROM numbers UNION ALL SELECT * FROM edits),
     picked AS (
       SELECT DISTINCT id FROM (
         SELECT id FROM found
         ORDER BY (number_normalised = ANY($1::text[]) OR number_key = ANY($2::text[])) DESC, source,
-          ${NAMED_FIRST.replace("p.", "")}, length(number_normalised), distance, number COLLATE "C"
+          ${namedFirst("maker_id")}, length(number_normalised), distance, number COLLATE "C"
         LIMIT $11::integer
       ) likeliest
     ),
@@ -350,9 +350,11 @@ async function toResults(found: Found, limit: number, answers: NumberAnswer["ans
   const ids = ranked.map((r) => r.row.id).filter((id) => !answers.has(id));
   const [latest, crosses] =
     ids.length > 0 ? await Promise.all([latestNumbers(ids), rankCrosses(ids)]) : [new Map(), new Map()];
-  for (const [id, answer] of answers) {
-    latest.set(id, answer.latest);
-    crosses.set(id, rankCrossRows(id, answer.crossRows));
+  for (const { row } of ranked) {
+    const answer = answers.get(row.id);
+    if (!answer) continue;
+    latest.set(row.id, answer.latest);
+    crosses.set(row.id, rankCrossRows(row.id, answer.crossRows));
   }
   return ranked.map(({ row, matchedBy, score }) => {
     const cross = crosses.get(row.id)?.[0] ?? null;
